@@ -1,0 +1,46 @@
+import type { Config } from 'tailwindcss';
+
+/**
+ * Reachline's own palette: warm concrete greys with a single oxide-orange accent, and a
+ * utilisation scale from calm to strong. Colour is never used alone: every use pairs it with
+ * a number and a word.
+ */
+export default {
+  content: ['./index.html', './src/**/*.{ts,tsx}'],
+  theme: {
+    extend: {
+      colors: {
+        concrete: {
+          50: '#f7f6f4',
+          100: '#eeece8',
+          200: '#dcd8d1',
+          300: '#c3bdb3',
+          400: '#a39b8f',
+          500: '#857d71',
+          600: '#6b645a',
+          700: '#56504a',
+          800: '#3d3935',
+          900: '#28251f',
+        },
+        oxide: {
+          50: '#fdf3ec',
+          100: '#fae1cf',
+          300: '#ef9c63',
+          500: '#c8571b',
+          600: '#a94714',
+          700: '#873811',
+        },
+        util: {
+          calm: '#5b8a72',
+          steady: '#8a9a4b',
+          near: '#c99a2e',
+          over: '#b3261e',
+        },
+      },
+      fontFamily: {
+        sans: ['"IBM Plex Sans"', 'system-ui', 'sans-serif'],
+        mono: ['"IBM Plex Mono"', 'ui-monospace', 'monospace'],
+      },
+    },
+  },
+} satisfies Config;
