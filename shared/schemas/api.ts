@@ -1,0 +1,193 @@
+/**
+ * The HTTP API's request schemas and response shapes, shared by the server (validation) and the
+ * client (forms and typed fetchers). Paths are listed in ../shared/DESIGN.md (API section).
+ * Errors always have the shape { error: { code, message, issues: [{ path, message }] } }.
+ */
+import { z } from 'zod';
+import { designSchema, type DesignDocument } from './design';
+import type { DesignResult } from '../engine/types';
+import type { ShapeRecord } from '../engine/shapes/types';
+
+export const ROLES = ['admin', 'architect', 'fabricator', 'engineer'] as const;
+export type Role = (typeof ROLES)[number];
+export const unitSystemSchema = z.enum(['US', 'SI'], { error: 'must be "US" or "SI"' });
+
+/** Who may change which part of a design document (DESIGN.md, "Who uses it"). */
+export const EDIT_RIGHTS: Record<Role, { member: boolean; connection: boolean; attachments: boolean }> = {
+  admin: { member: false, connection: false, attachments: false },
+  architect: { member: true, connection: false, attachments: true },
+  fabricator: { member: false, connection: true, attachments: true },
+  engineer: { member: true, connection: true, attachments: true },
+};
+
+// ---- auth and users --------------------------------------------------------------------------
+export const loginSchema = z.object({
+  email: z.email('must be an e-mail address'),
+  password: z.string().min(1, 'is required').max(200),
+});
+export const updateMeSchema = z.object({
+  units: unitSystemSchema.optional(),
+  displayName: z.string().trim().min(1).max(80).optional(),
+});
+export interface UserDto {
+  id: number;
+  email: string;
+  displayName: string;
+  role: Role;
+  units: 'US' | 'SI';
+  active: boolean;
+}
+export const createUserSchema = z.object({
+  email: z.email('must be an e-mail address'),
+  displayName: z.string().trim().min(1, 'is required').max(80),
+  role: z.enum(ROLES, { error: 'must be admin, architect, fabricator or engineer' }),
+  password: z.string().min(10, 'must be at least 10 characters').max(200),
+});
+export const updateUserSchema = z.object({
+  displayName: z.string().trim().min(1).max(80).optional(),
+  role: z.enum(ROLES).optional(),
+  active: z.boolean().optional(),
+});
+
+// ---- projects and members --------------------------------------------------------------------
+export const DEFAULT_CODE_BASIS = 'IBC 2021 / ASCE 7-16 / AISC 360-16 / ACI 318-19';
+export const createProjectSchema = z.object({
+  name: z.string().trim().min(1, 'is required').max(120),
+  site: z.string().trim().max(200).default(''),
+  codeBasis: z.string().trim().max(200).default(DEFAULT_CODE_BASIS),
+  units: unitSystemSchema.default('US'),
+});
+export interface ProjectDto {
+  id: number;
+  name: string;
+  site: string;
+  codeBasis: string;
+  units: 'US' | 'SI';
+  createdAt: string;
+  cantileverCount: number;
+}
+export interface MemberDto {
+  userId: number;
+  email: string;
+  displayName: string;
+  role: Role;
+}
+export interface ProjectDetailDto extends ProjectDto {
+  members: MemberDto[];
+  cantilevers: CantileverDto[];
+}
+export const addMemberSchema = z.object({ userId: z.number().int().positive() });
+
+// ---- cantilevers and revisions ---------------------------------------------------------------
+export type ReviewState = 'draft' | 'submitted' | 'approved' | 'changes-requested';
+export interface CantileverDto {
+  id: number;
+  projectId: number;
+  name: string;
+  description: string;
+  currentRevisionId: number | null;
+  currentRevisionNumber: number | null;
+  reviewState: ReviewState | null;
+  ok: boolean | null;
+  updatedAt: string;
+}
+export const createCantileverSchema = z.object({
+  name: z.string().trim().min(1, 'is required').max(120),
+  description: z.string().trim().max(500).default(''),
+  /** Optional first design; saved as revision 1 with the message "First design". */
+  input: designSchema.optional(),
+});
+export const createRevisionSchema = z.object({
+  /** The revision number this save was based on; null for the first revision. */
+  baseRevision: z.number().int().positive().nullable(),
+  message: z.string().trim().min(1, 'describe what changed').max(500),
+  input: designSchema,
+});
+export interface RevisionSummaryDto {
+  id: number;
+  cantileverId: number;
+  number: number;
+  authorId: number;
+  authorName: string;
+  message: string;
+  engineVersion: string;
+  baseRevisionNumber: number | null;
+  createdAt: string;
+  ok: boolean;
+  reviewState: ReviewState;
+}
+export interface RevisionDto extends RevisionSummaryDto {
+  input: DesignDocument;
+  result: DesignResult;
+  reviews: ReviewDto[];
+}
+/** Body of a 409 answer to a stale save: the error, and the latest revision to compare with. */
+export interface StaleSaveBody {
+  error: { code: 'stale_base'; message: string; issues: [] };
+  latest: RevisionDto;
+}
+
+// ---- review and comments ---------------------------------------------------------------------
+export const reviewSchema = z.object({
+  decision: z.enum(['approve', 'request-changes'], { error: 'must be "approve" or "request-changes"' }),
+  comment: z.string().trim().max(4000).default(''),
+});
+export interface ReviewDto {
+  id: number;
+  revisionId: number;
+  state: 'submitted' | 'approved' | 'changes-requested';
+  reviewerId: number;
+  reviewerName: string;
+  comment: string;
+  createdAt: string;
+}
+export const commentSchema = z.object({ body: z.string().trim().min(1, 'is required').max(4000) });
+export interface CommentDto {
+  id: number;
+  revisionId: number;
+  authorId: number;
+  authorName: string;
+  body: string;
+  createdAt: string;
+}
+
+// ---- attachments, shapes, outbox -------------------------------------------------------------
+export const ATTACHMENT_TYPES = ['application/pdf', 'image/png', 'image/jpeg', 'image/vnd.dxf', 'text/csv'] as const;
+export interface AttachmentDto {
+  id: number;
+  cantileverId: number;
+  originalName: string;
+  mimeType: string;
+  size: number;
+  sha256: string;
+  uploaderId: number;
+  uploaderName: string;
+  createdAt: string;
+}
+export const shapesQuerySchema = z.object({
+  family: z.enum(['W', 'HSS', 'PIPE', 'C']).optional(),
+  q: z.string().trim().max(40).optional(),
+  minDepth: z.coerce.number().nonnegative().optional(),
+  maxDepth: z.coerce.number().positive().optional(),
+});
+export interface ShapesDto {
+  source: string;
+  shapes: ShapeRecord[];
+}
+export interface ShapeImportDto {
+  imported: number;
+  rejected: { row: number; label: string | null; reason: string }[];
+}
+export interface OutboxDto {
+  id: number;
+  to: string[];
+  subject: string;
+  text: string;
+  status: 'pending' | 'sent' | 'failed';
+  attempts: number;
+  lastError: string | null;
+  createdAt: string;
+  sentAt: string | null;
+}
+
+export const checkRequestSchema = z.object({ input: designSchema });
