@@ -9,6 +9,7 @@
  * The published database is not shipped with the product; this script records how the table was made.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
 
 const KEEP = [
   'W', 'A', 'd', 'bf', 'tf', 'tw', 'kdes', 'Ht', 'B', 'tdes', 'OD', 'Ix', 'Zx', 'Sx', 'rx',
@@ -26,13 +27,9 @@ function wanted(type: string, label: string, od: string): string | null {
   return null;
 }
 
-function main(): void {
-  const path = process.argv[2];
-  if (!path) {
-    console.error('usage: build-shapes-table.ts <aisc-shapes-v15.0-US.csv>');
-    process.exit(2);
-  }
-  const lines = readFileSync(path, 'utf8').split(/\r?\n/).filter(Boolean);
+/** The table object written to data/shapes.json, from the text of the published CSV. */
+export function buildShapesTable(csv: string) {
+  const lines = csv.split(/\r?\n/).filter(Boolean);
   const header = lines[0].split(',');
   const col = (name: string) => header.indexOf(name);
   const rows: Record<string, string | number>[] = [];
@@ -48,15 +45,24 @@ function main(): void {
     }
     rows.push(row);
   }
-  const table = {
+  return {
     source: 'AISC Shapes Database v15.0 (US customary units), selected families and columns',
     units: { W: 'lb/ft', length: 'in', A: 'in^2', I: 'in^4', S: 'in^3', Z: 'in^3', J: 'in^4', Cw: 'in^6' },
     caution:
       "The published database carries AISC's disclaimer: values must be checked by a licensed engineer before they are relied on.",
     shapes: rows,
   };
-  writeFileSync(new URL('../data/shapes.json', import.meta.url), JSON.stringify(table, null, 0) + '\n');
-  console.log(`wrote ${rows.length} shapes to data/shapes.json`);
 }
 
-main();
+function main(): void {
+  const path = process.argv[2];
+  if (!path) {
+    console.error('usage: build-shapes-table.ts <aisc-shapes-v15.0-US.csv>');
+    process.exit(2);
+  }
+  const table = buildShapesTable(readFileSync(path, 'utf8'));
+  writeFileSync(new URL('../data/shapes.json', import.meta.url), JSON.stringify(table, null, 0) + '\n');
+  console.log(`wrote ${table.shapes.length} shapes to data/shapes.json`);
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) main();

@@ -1,4 +1,83 @@
-export async function main(args: string[]): Promise<number> {
-  console.log('stub', args);
-  return 0;
+/**
+ * The `reachline` command line (bin.js runs it through tsx). Commands: check, shapes, --help.
+ * Returns the exit code: 0 all checks pass, 1 a check fails, 2 invalid input or usage.
+ */
+import { parseArgs } from './args';
+import { checkCommand, type CliIo } from './check-command';
+import { shapesCommand } from './shapes-command';
+
+export const HELP = `reachline: check a steel cantilever deck design from the command line
+
+Usage:
+  reachline check <design.json | ->  [--stations]
+  reachline shapes [--json] [--family W|HSS|PIPE|C]
+  reachline --help
+
+Commands:
+  check <file>     Validate a design document (JSON, see the engine contract) and print the
+                   result document as JSON on standard output. Use - to read standard input.
+  shapes           List the shapes table shipped with Reachline and its source.
+
+Options:
+  --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
+                   along the member, per load case and per combination, in the result's units.
+  --json           (shapes) print the whole table as one JSON object: the source and every shape
+                   with its properties under the published database's column names.
+  --family <name>  (shapes) only one family: W, HSS, PIPE or C.
+  -h, --help       Show this help.
+
+Exit status:
+  0  every check passes
+  1  at least one check does not pass (the result is still printed)
+  2  the input is invalid or the command is misused: one line per problem on standard error,
+     "field.path: what is wrong", and nothing on standard output
+
+The caution is printed on standard error after every successful run: Reachline is a design aid;
+final design, detailing and sealed calculations are by a licensed engineer.
+`;
+
+// A reader that stops early (`reachline shapes | head`) closes the pipe: that is not an error.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code !== 'EPIPE') throw e;
+});
+
+const processIo: CliIo = {
+  out: (text) => void process.stdout.write(text),
+  err: (text) => void process.stderr.write(text),
+  readStdin: async () => {
+    const chunks: Buffer[] = [];
+    for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
+    return Buffer.concat(chunks).toString('utf8');
+  },
+};
+
+export async function main(args: string[], io: CliIo = processIo): Promise<number> {
+  const [command, ...rest] = args;
+  if (!command || command === '--help' || command === '-h' || command === 'help') {
+    io.out(HELP);
+    return command ? 0 : 2;
+  }
+  if (command === 'check') {
+    const a = parseArgs(rest, ['--stations', '--help', '-h']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
+    if (a.positionals.length !== 1) return usage(io, 'check needs one design file (or - for standard input)');
+    return checkCommand(a.positionals[0], a.flags.has('--stations'), io);
+  }
+  if (command === 'shapes') {
+    const a = parseArgs(rest, ['--json', '--help', '-h'], ['--family']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (a.unknown.length || a.positionals.length) return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
+    return shapesCommand(a.flags.has('--json'), a.values.get('--family'), io);
+  }
+  return usage(io, `unknown command "${command}"`);
+}
+
+function usage(io: CliIo, problem: string | null, code = 2): number {
+  if (problem) {
+    io.err(`${problem}\n\n${HELP}`);
+    return code;
+  }
+  io.out(HELP);
+  return code;
 }

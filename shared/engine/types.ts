@@ -55,10 +55,12 @@ export interface StationSeries {
   V: number[];
   M: number[];
   deflection: number[];
+  /** Rotation (slope), positive tip-down, radians. Always filled by the engine. */
+  rotation?: number[];
 }
 
 export interface Stations {
-  units: { x: string; V: string; M: string; deflection: string };
+  units: { x: string; V: string; M: string; deflection: string; rotation?: string };
   x: number[];
   cases: StationSeries[];
   combinations: StationSeries[];

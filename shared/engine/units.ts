@@ -207,16 +207,14 @@ const INTERNAL_OF_KIND: Record<ResultKind, string> = {
   weight: 'kip',
 };
 
-const factorCache = new Map<string, number>();
+const factorCache: Record<UnitSystem, Partial<Record<ResultKind, number>>> = { US: {}, SI: {} };
 
 /** The factor that turns an internal value of `kind` into the display unit of `system`. */
 export function displayFactor(kind: ResultKind, system: UnitSystem): number {
-  const key = `${kind}|${system}`;
-  let f = factorCache.get(key);
-  if (f === undefined) {
-    f = math.unit(1, INTERNAL_OF_KIND[kind]).toNumber(RESULT_UNITS[system][kind]);
-    factorCache.set(key, f);
-  }
+  const cached = factorCache[system][kind];
+  if (cached !== undefined) return cached;
+  const f = math.unit(1, INTERNAL_OF_KIND[kind]).toNumber(RESULT_UNITS[system][kind]);
+  factorCache[system][kind] = f;
   return f;
 }
 

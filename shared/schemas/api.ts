@@ -21,10 +21,7 @@ export const EDIT_RIGHTS: Record<Role, { member: boolean; connection: boolean; a
 };
 
 // ---- auth and users --------------------------------------------------------------------------
-export const loginSchema = z.object({
-  email: z.email('must be an e-mail address'),
-  password: z.string().min(1, 'is required').max(200),
-});
+export { loginSchema } from './auth';
 export const updateMeSchema = z.object({
   units: unitSystemSchema.optional(),
   displayName: z.string().trim().min(1).max(80).optional(),

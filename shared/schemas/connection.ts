@@ -24,12 +24,27 @@ export const connectionSchema = z.object({
     offset: lengthQ(),
     gauge: lengthQ('nonNegative'),
     embedment: lengthQ(),
+    /** Supplementary reinforcement around the rods (ACI 318-19 17.5.3 condition A); engine default false. */
+    supplementaryReinforcement: z.boolean().optional(),
+    /** Rods pretensioned by torque: spacing and edge distance 6 da (ACI 318-19 17.9.2); engine default false. */
+    torqued: z.boolean().optional(),
   }),
   concrete: z.object({
     fc: stressQ(),
     cracked: z.boolean().default(true),
+    /** Lightweight-concrete factor lambda (ACI 318-19 19.2.4); engine default 1.0 (normal weight). */
+    lambda: z
+      .number({ error: 'must be a number between 0.75 and 1.0' })
+      .min(0.75, 'must be at least 0.75 (all-lightweight concrete)')
+      .max(1, 'must be at most 1.0 (normal-weight concrete)')
+      .optional(),
   }),
-  pier: z.object({ length: lengthQ(), width: lengthQ() }),
+  pier: z.object({
+    length: lengthQ(),
+    width: lengthQ(),
+    /** Concrete thickness along the rods (ha); when absent the pier is taken as deep (psi_h,V = 1). */
+    depth: lengthQ().optional(),
+  }),
 });
 
 export type ConnectionInput = z.infer<typeof connectionSchema>;

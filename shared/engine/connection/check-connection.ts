@@ -1,38 +1,110 @@
 /**
- * PLACEHOLDER until the connection engine lands: the connection is not checked yet, so it
- * reports one failed check rather than a pass that was not computed.
+ * The connection at the pier: base plate with moment (AISC Design Guide 1, 2nd ed.) and cast-in
+ * anchor rods (AISC 360-16 J3, ACI 318-19 ch. 17), for every combination of the chosen method.
+ * Each check reports its own governing combination; the result describes the combination that
+ * governs the plate. See METHOD.md for the method, assumptions and limits.
  */
 import type { ConnectionInput } from '../../schemas/connection';
-import type { Check, ConnectionResult, RootDemand, RootFootprint } from '../types';
+import type { Check, ConnectionResult, Method, RootDemand, RootFootprint } from '../types';
 import type { ShapeLookup } from '../shapes/types';
 import type { UnitSystem } from '../units';
+import { availableBearingStress, confinementFactor } from './bearing';
+import { governing, toCheck, type CheckSpec, type Evaluation } from './check-row';
+import { analyseCombination } from './combo-state';
+import { readGeometry } from './connection-geometry';
+import { buildConnectionResult } from './connection-result';
+import { ANCHOR_LAYOUT, evaluateAnchorLayout } from './check-anchor-layout';
+import { ANCHOR_SHEAR, evaluateAnchorShear, rodShearCapacity } from './check-anchor-shear';
+import { CONCRETE_BREAKOUT, breakoutCapacity, evaluateConcreteBreakout } from './check-concrete-breakout';
+import { INTERACTION, evaluateInteraction } from './check-interaction';
+import { PLATE_BEARING, evaluatePlateBearing } from './check-plate-bearing';
+import { PLATE_GEOMETRY, evaluatePlateGeometry } from './check-plate-geometry';
+import { PLATE_THICKNESS, evaluatePlateThickness } from './check-plate-thickness';
+import { PULLOUT, evaluatePullout, pulloutCapacity } from './check-pullout';
+import { SIDE_FACE_BLOWOUT, blowoutCapacity, evaluateSideFaceBlowout } from './check-side-face-blowout';
+import { STEEL_TENSION, evaluateSteelTension, steelTensionCapacity } from './check-steel-tension';
 
 export interface ConnectionContext {
   units: UnitSystem;
-  method: 'LRFD' | 'ASD';
+  method: Method;
   shapes: ShapeLookup;
 }
 
+const PER_COMBINATION: readonly CheckSpec[] = [
+  PLATE_BEARING,
+  PLATE_THICKNESS,
+  STEEL_TENSION,
+  CONCRETE_BREAKOUT,
+  PULLOUT,
+  SIDE_FACE_BLOWOUT,
+  ANCHOR_SHEAR,
+  INTERACTION,
+];
+
+/**
+ * Checks the plate and rods for each root demand (kip, kip·in). Geometry checks carry no
+ * combination; every other check names the combination that governs it.
+ */
 export function checkConnection(
-  _input: ConnectionInput,
-  _demands: RootDemand[],
-  _root: RootFootprint,
-  _ctx: ConnectionContext,
+  input: ConnectionInput,
+  demands: RootDemand[],
+  root: RootFootprint,
+  ctx: ConnectionContext,
 ): { result: ConnectionResult | null; checks: Check[] } {
-  return {
-    result: null,
-    checks: [
-      {
-        id: 'connection.pending',
-        title: 'Connection at the pier',
-        reference: '—',
-        combination: null,
-        demand: null,
-        capacity: null,
-        ratio: null,
-        ok: false,
-        note: 'The connection engine is not available in this build; the connection was not checked.',
-      },
-    ],
-  };
+  const { units, method } = ctx;
+  const geo = readGeometry(input, root, ctx.shapes);
+  const footprint = geo.footprint.ok ? geo.footprint.footprint : null;
+  const checks: Check[] = [
+    toCheck(PLATE_GEOMETRY, null, evaluatePlateGeometry(geo, units), units),
+    toCheck(ANCHOR_LAYOUT, null, evaluateAnchorLayout(geo, units), units),
+  ];
+  if (demands.length === 0) {
+    checks.push({
+      id: 'connection.demand',
+      title: 'Forces at the pier',
+      reference: '—',
+      combination: null,
+      demand: null,
+      capacity: null,
+      ratio: null,
+      ok: false,
+      note: 'No combination reached the connection, so the plate and rods were not checked.',
+    });
+    return { result: null, checks };
+  }
+  const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
+  const fpMax = availableBearingStress(geo.fc, sqrtA2A1, method);
+  const steel = steelTensionCapacity(geo, method);
+  const breakout = breakoutCapacity(geo, method, units);
+  const pullout = pulloutCapacity(geo, method);
+  const blowout = blowoutCapacity(geo, method);
+  const rodShear = rodShearCapacity(geo, method);
+
+  const states = demands.map((d) => analyseCombination(d, geo, footprint, fpMax, method));
+  // One evaluation per check (in PER_COMBINATION order) per combination; blowout may be absent.
+  const table = states.map((s) => {
+    const shear = evaluateAnchorShear(s, rodShear, geo, method);
+    const tension = [evaluateSteelTension(s, steel), evaluateConcreteBreakout(s, breakout), evaluatePullout(s, pullout)];
+    const blow = evaluateSideFaceBlowout(s, blowout, units);
+    const tensionRatios = tension.map((e) => e.ratio);
+    if (blow) tensionRatios.push(blow.ratio);
+    return [
+      evaluatePlateBearing(s, fpMax),
+      evaluatePlateThickness(s, geo.t, footprint !== null, units),
+      ...tension,
+      blow,
+      shear.ev,
+      evaluateInteraction(tensionRatios, shear.rodRatio),
+    ];
+  });
+  for (let i = 0; i < PER_COMBINATION.length; i++) {
+    const rows: { combination: string; ev: Evaluation }[] = [];
+    for (let j = 0; j < states.length; j++) {
+      const ev = table[j][i];
+      if (ev) rows.push({ combination: states[j].combination, ev });
+    }
+    const worst = governing(rows);
+    if (worst) checks.push(toCheck(PER_COMBINATION[i], worst.combination, worst.ev, units));
+  }
+  return { result: buildConnectionResult(states, geo, fpMax, sqrtA2A1, units), checks };
 }

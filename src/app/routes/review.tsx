@@ -1,4 +1,24 @@
-/** Placeholder: the review screen is being built (owned by the revisions/review/admin work). */
+import { useParams } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { revisionQueryOptions } from '../../features/revisions/api/get-revision';
+import { useMe } from '../../features/auth/api/get-me';
+import { errorText } from '../../features/history/utils/error-text';
+import { ReviewView } from '../../features/review/components/review-view';
+
+/** Review: one revision, for the engineer who decides on it. */
 export default function ReviewRoute() {
-  return <p className="p-6 text-concrete-600">This screen is not built yet.</p>;
+  const revisionId = Number(useParams().revisionId);
+  const valid = Number.isInteger(revisionId) && revisionId > 0;
+  // The input and result never change, but the review state does: fetch it fresh on every visit.
+  const revision = useQuery({ ...revisionQueryOptions(valid ? revisionId : 0), enabled: valid, staleTime: 0 });
+  const me = useMe();
+
+  return (
+    <div className="mx-auto max-w-5xl space-y-4 p-6">
+      {!valid && <p role="alert" className="text-util-over">This address does not name a revision.</p>}
+      {valid && revision.isPending && <p role="status" className="text-concrete-600">Loading the revision…</p>}
+      {revision.isError && <p role="alert" className="text-util-over">The revision could not be loaded: {errorText(revision.error)}</p>}
+      {revision.data && <ReviewView revision={revision.data} user={me.data} />}
+    </div>
+  );
 }

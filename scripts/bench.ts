@@ -1,0 +1,62 @@
+/**
+ * Engine bench: `npm run bench` (human-readable) or `npm run bench -- --json` (one JSON object).
+ *   memberDesignMedianMs  median time of one member design from a validated document
+ *   sweep1600Ms           a 40 x 40 sweep of length x tip depth (tapered W), total time
+ *   fullDesignMedianMs    median time of one design with its connection (whatever checkConnection is now)
+ * Without station arrays (the desk asks for those only when it draws).
+ */
+import { designSchema, type DesignInput } from '../shared/schemas/design';
+import { evaluateDesign } from '../shared/engine/design';
+import { exampleDesign, exampleMemberOnly } from '../shared/engine/examples';
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = Math.floor(s.length / 2);
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+function timeMedian(input: DesignInput, runs: number): number {
+  for (let i = 0; i < 200; i++) evaluateDesign(input); // warm up the JIT and the quantity cache
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = performance.now();
+    evaluateDesign(input);
+    times.push(performance.now() - t0);
+  }
+  return median(times);
+}
+
+function sweep(base: DesignInput): number {
+  const inputs: DesignInput[] = [];
+  for (let i = 0; i < 40; i++) {
+    const length = `${(5 + (i * 10) / 39).toFixed(3)} ft`;
+    for (let j = 0; j < 40; j++) {
+      const tipDepth = `${(4 + (j * 7.5) / 39).toFixed(3)} in`; // W12X26 is 12.2 in deep at the root
+      const loads = { ...base.loads, point: base.loads.point.map((p) => ({ ...p, at: length })) }; // the guard stays at the tip
+      inputs.push({ ...base, loads, member: { ...base.member, length, unbracedLength: undefined, section: { shape: 'W12X26', tipDepth } } });
+    }
+  }
+  const t0 = performance.now();
+  for (const input of inputs) evaluateDesign(input);
+  return performance.now() - t0;
+}
+
+function main(): void {
+  const json = process.argv.includes('--json');
+  const member = designSchema.parse(exampleMemberOnly);
+  const full = designSchema.parse(exampleDesign);
+  const memberDesignMedianMs = timeMedian(member, 3000);
+  sweep(member); // warm-up pass: parses the 80 new quantity strings once
+  const sweep1600Ms = sweep(member);
+  const fullDesignMedianMs = timeMedian(full, 3000);
+  const out = { memberDesignMedianMs, sweep1600Ms, fullDesignMedianMs };
+  if (json) {
+    console.log(JSON.stringify(out));
+    return;
+  }
+  console.log(`member design, median of 3000: ${memberDesignMedianMs.toFixed(4)} ms (target < 0.2 ms)`);
+  console.log(`40 x 40 sweep of length x tip depth: ${sweep1600Ms.toFixed(1)} ms (target < 500 ms)`);
+  console.log(`full design with connection, median of 3000: ${fullDesignMedianMs.toFixed(4)} ms (target < 0.3 ms)`);
+}
+
+main();

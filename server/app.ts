@@ -1,0 +1,117 @@
+/**
+ * The Express app: security headers, sessions in the database, passport, the API routers, one
+ * error handler, and the built client. No port is opened here (supertest imports it).
+ */
+import express, { type Express, type RequestHandler } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import type { Knex } from 'knex';
+import { createPassport } from './auth/passport';
+import { GuardedSessionStore } from './auth/session-store';
+import type { AppContext, MailKick } from './context';
+import type { Config } from './env';
+import { adminRouter } from './features/admin/admin.router';
+import { attachmentsRouter } from './features/attachments/attachments.router';
+import { authRouter } from './features/auth/auth.router';
+import { checkRouter } from './features/check/check.router';
+import { commentsRouter } from './features/comments/comments.router';
+import { plateScheduleRouter } from './features/plate-schedule/plate-schedule.router';
+import { projectsRouter } from './features/projects/projects.router';
+import { revisionsRouter } from './features/revisions/revisions.router';
+import { shapesRouter } from './features/shapes/shapes.router';
+import { decoyHash } from './lib/password';
+import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { requireAuth } from './middleware/require-auth';
+import { sameOrigin } from './middleware/same-origin';
+import { serveClient } from './static-client';
+
+export interface AppDeps {
+  db: Knex;
+  mail: MailKick;
+}
+
+export type ReachlineApp = Express & { closeApp(): void };
+
+/** Routes anyone may call without signing in. */
+const PUBLIC = new Set(['POST /auth/login', 'POST /auth/logout', 'GET /health']);
+
+const authGate: RequestHandler = (req, res, next) => {
+  if (PUBLIC.has(`${req.method} ${req.path}`)) return next();
+  requireAuth(req, res, next);
+};
+
+export function createApp(config: Config, deps: AppDeps): ReachlineApp {
+  const ctx: AppContext = { config, db: deps.db, mail: deps.mail };
+  const app = express() as ReachlineApp;
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'"],
+          // Charts and the sketch set style attributes; attributes cannot run scripts.
+          styleSrcAttr: ["'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+        },
+      },
+      // Plain http on a local machine is normal; https deployments set HSTS at their proxy.
+      strictTransportSecurity: config.nodeEnv === 'production' && config.trustProxy,
+    }),
+  );
+
+  const store = new GuardedSessionStore(deps.db);
+  let decoy: Promise<string> | null = null;
+  const passport = createPassport(deps.db, () => (decoy ??= decoyHash(config.passwordCost)));
+
+  const api = express.Router();
+  api.use(sameOrigin);
+  api.use(express.json({ limit: '1mb' }));
+  api.use(
+    session({
+      name: 'reachline.sid',
+      secret: config.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      proxy: config.trustProxy,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: 12 * 60 * 60 * 1000 },
+    }),
+  );
+  api.use(passport.session());
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(authGate);
+  api.use(authRouter(ctx, passport));
+  api.use(projectsRouter(ctx));
+  api.use(commentsRouter(ctx));
+  api.use(plateScheduleRouter(ctx));
+  api.use(revisionsRouter(ctx));
+  api.use(attachmentsRouter(ctx));
+  api.use(shapesRouter(ctx));
+  api.use(checkRouter(ctx));
+  api.use(adminRouter(ctx));
+  api.use(notFoundApi);
+  app.use('/api', api);
+
+  serveClient(app, config.distDir);
+  app.use(errorHandler);
+  app.closeApp = () => store.close();
+  return app;
+}

@@ -1,0 +1,55 @@
+/**
+ * `reachline check design.json [--stations]` (or `-` for standard input): validates the document
+ * with the shared schema, runs the engine and prints the result document as JSON on stdout.
+ * Exit 0 when every check passes, 1 when any fails, 2 when the input is invalid (one line per
+ * problem on stderr, `path: message`, and nothing on stdout).
+ */
+import { readFile } from 'node:fs/promises';
+import { designSchema } from '../../shared/schemas/design';
+import { toFieldIssues, type FieldIssue } from '../../shared/schemas/quantity';
+import { evaluateDesign } from '../../shared/engine/design';
+import { CAUTION, DesignInputError } from '../../shared/engine/types';
+
+export interface CliIo {
+  out(text: string): void;
+  err(text: string): void;
+  readStdin(): Promise<string>;
+}
+
+export async function checkCommand(source: string, stations: boolean, io: CliIo): Promise<number> {
+  let text: string;
+  try {
+    text = source === '-' ? await io.readStdin() : await readFile(source, 'utf8');
+  } catch (e) {
+    return invalid(io, [{ path: '(document)', message: `cannot read ${source}: ${(e as NodeJS.ErrnoException).code ?? String(e)}` }]);
+  }
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (e) {
+    return invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
+  }
+  const parsed = designSchema.safeParse(json);
+  if (!parsed.success) return invalid(io, toFieldIssues(parsed.error));
+  let result;
+  try {
+    result = evaluateDesign(parsed.data, { stations });
+  } catch (e) {
+    if (e instanceof DesignInputError) return invalid(io, e.issues);
+    throw e;
+  }
+  io.out(`${JSON.stringify(result, null, 2)}\n`);
+  const failed = result.checks.filter((c) => !c.ok).map((c) => c.id);
+  io.err(
+    failed.length
+      ? `${failed.length} of ${result.checks.length} checks do not pass: ${failed.join(', ')}\n`
+      : `all ${result.checks.length} checks pass\n`,
+  );
+  io.err(`${CAUTION}\n`);
+  return result.ok ? 0 : 1;
+}
+
+function invalid(io: CliIo, issues: readonly FieldIssue[]): number {
+  for (const i of issues) io.err(`${i.path}: ${i.message}\n`);
+  return 2;
+}

@@ -1,0 +1,14 @@
+/** What every feature needs: the configuration, the database and a way to wake the mail worker. */
+import type { Knex } from 'knex';
+import type { Config } from './env';
+
+export interface MailKick {
+  /** Called after a commit that queued mail. */
+  kick(): void;
+}
+
+export interface AppContext {
+  config: Config;
+  db: Knex;
+  mail: MailKick;
+}

@@ -1,0 +1,43 @@
+/** Cantilevers (Knex only). */
+import type { Knex } from 'knex';
+import type { CantileverDto } from '../../../shared/schemas/api';
+import { nowIso, toBool, toIso } from '../../db/knex';
+import type { CantileverRow } from '../projects/project-access';
+import { reviewStates } from '../revisions/revisions.repository';
+
+type Db = Knex | Knex.Transaction;
+
+type ListedRow = CantileverRow & { current_number: number | null; current_ok: number | boolean | null };
+
+export async function listCantilevers(db: Db, where: { projectId?: number; id?: number }): Promise<CantileverDto[]> {
+  const q = db('cantilevers as c')
+    .leftJoin('revisions as r', 'r.id', 'c.current_revision_id')
+    .select('c.*', 'r.number as current_number', 'r.ok as current_ok')
+    .orderBy('c.name');
+  if (where.projectId !== undefined) q.where('c.project_id', where.projectId);
+  if (where.id !== undefined) q.where('c.id', where.id);
+  const rows = (await q) as ListedRow[];
+  const states = await reviewStates(
+    db,
+    rows.map((r) => r.current_revision_id).filter((id): id is number => id !== null),
+  );
+  return rows.map((r) => ({
+    id: r.id,
+    projectId: r.project_id,
+    name: r.name,
+    description: r.description,
+    currentRevisionId: r.current_revision_id,
+    currentRevisionNumber: r.current_number ?? null,
+    reviewState: r.current_revision_id === null ? null : (states.get(r.current_revision_id) ?? 'draft'),
+    ok: r.current_ok === null || r.current_ok === undefined ? null : toBool(r.current_ok),
+    updatedAt: toIso(r.updated_at),
+  }));
+}
+
+export async function insertCantilever(db: Db, c: { projectId: number; name: string; description: string }): Promise<number> {
+  const now = nowIso();
+  const [row] = await db('cantilevers')
+    .insert({ project_id: c.projectId, name: c.name, description: c.description, current_revision_id: null, created_at: now, updated_at: now })
+    .returning('id');
+  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+}

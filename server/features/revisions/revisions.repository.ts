@@ -1,0 +1,140 @@
+/** Revisions and their reviews (Knex only). Revisions are only ever inserted. */
+import type { Knex } from 'knex';
+import type { ReviewDto, ReviewState, RevisionDto, RevisionSummaryDto } from '../../../shared/schemas/api';
+import type { DesignDocument } from '../../../shared/schemas/design';
+import type { DesignResult } from '../../../shared/engine/types';
+import { nowIso, toBool, toIso } from '../../db/knex';
+import type { RevisionRow } from '../projects/project-access';
+
+type Db = Knex | Knex.Transaction;
+
+interface ReviewRow {
+  id: number;
+  revision_id: number;
+  state: ReviewDto['state'];
+  reviewer_id: number;
+  reviewer_name: string;
+  comment: string;
+  created_at: string;
+}
+
+type SummaryRow = RevisionRow & { author_name: string; base_number: number | null };
+
+function summarySelect(db: Db) {
+  return db('revisions as r')
+    .join('users as u', 'u.id', 'r.author_id')
+    .leftJoin('revisions as b', 'b.id', 'r.base_revision_id')
+    .select('r.*', 'u.display_name as author_name', 'b.number as base_number');
+}
+
+/** The latest review state of each revision ('draft' when never submitted). */
+export async function reviewStates(db: Db, revisionIds: number[]): Promise<Map<number, ReviewState>> {
+  const states = new Map<number, ReviewState>();
+  if (revisionIds.length === 0) return states;
+  const rows = (await db('reviews').whereIn('revision_id', revisionIds).orderBy('id').select('revision_id', 'state')) as {
+    revision_id: number;
+    state: ReviewState;
+  }[];
+  for (const row of rows) states.set(row.revision_id, row.state);
+  return states;
+}
+
+function toSummary(row: SummaryRow, state: ReviewState): RevisionSummaryDto {
+  return {
+    id: row.id,
+    cantileverId: row.cantilever_id,
+    number: row.number,
+    authorId: row.author_id,
+    authorName: row.author_name,
+    message: row.message,
+    engineVersion: row.engine_version,
+    baseRevisionNumber: row.base_number ?? null,
+    createdAt: toIso(row.created_at),
+    ok: toBool(row.ok),
+    reviewState: state,
+  };
+}
+
+export async function listRevisionSummaries(db: Db, cantileverId: number): Promise<RevisionSummaryDto[]> {
+  const rows = (await summarySelect(db).where('r.cantilever_id', cantileverId).orderBy('r.number', 'desc')) as SummaryRow[];
+  const states = await reviewStates(db, rows.map((r) => r.id));
+  return rows.map((r) => toSummary(r, states.get(r.id) ?? 'draft'));
+}
+
+export async function listReviews(db: Db, revisionId: number): Promise<ReviewDto[]> {
+  const rows = (await db('reviews as v')
+    .join('users as u', 'u.id', 'v.reviewer_id')
+    .where('v.revision_id', revisionId)
+    .orderBy('v.id')
+    .select('v.*', 'u.display_name as reviewer_name')) as ReviewRow[];
+  return rows.map((r) => ({
+    id: r.id,
+    revisionId: r.revision_id,
+    state: r.state,
+    reviewerId: r.reviewer_id,
+    reviewerName: r.reviewer_name,
+    comment: r.comment,
+    createdAt: toIso(r.created_at),
+  }));
+}
+
+export async function getRevisionDto(db: Db, revisionId: number): Promise<RevisionDto | undefined> {
+  const row = (await summarySelect(db).where('r.id', revisionId).first()) as SummaryRow | undefined;
+  if (!row) return undefined;
+  const reviews = await listReviews(db, revisionId);
+  const state = reviews.length > 0 ? reviews[reviews.length - 1].state : 'draft';
+  return {
+    ...toSummary(row, state),
+    input: JSON.parse(row.input_json) as DesignDocument,
+    result: JSON.parse(row.result_json) as DesignResult,
+    reviews,
+  };
+}
+
+export async function latestRevision(db: Db, cantileverId: number): Promise<RevisionRow | undefined> {
+  return db<RevisionRow>('revisions').where({ cantilever_id: cantileverId }).orderBy('number', 'desc').first();
+}
+
+export async function insertRevision(
+  db: Db,
+  r: {
+    cantileverId: number;
+    number: number;
+    authorId: number;
+    message: string;
+    input: unknown;
+    result: DesignResult;
+    baseRevisionId: number | null;
+  },
+): Promise<number> {
+  const [row] = await db('revisions')
+    .insert({
+      cantilever_id: r.cantileverId,
+      number: r.number,
+      author_id: r.authorId,
+      message: r.message,
+      input_json: JSON.stringify(r.input),
+      result_json: JSON.stringify(r.result),
+      engine_version: r.result.engineVersion,
+      base_revision_id: r.baseRevisionId,
+      ok: r.result.ok,
+      created_at: nowIso(),
+    })
+    .returning('id');
+  const id = typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  await db('cantilevers').where({ id: r.cantileverId }).update({ current_revision_id: id, updated_at: nowIso() });
+  return id;
+}
+
+export async function insertReview(
+  db: Db,
+  r: { revisionId: number; state: ReviewDto['state']; reviewerId: number; comment: string },
+): Promise<void> {
+  await db('reviews').insert({
+    revision_id: r.revisionId,
+    state: r.state,
+    reviewer_id: r.reviewerId,
+    comment: r.comment,
+    created_at: nowIso(),
+  });
+}

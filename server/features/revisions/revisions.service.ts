@@ -1,0 +1,143 @@
+/** Saving, reading, submitting and reviewing revisions. */
+import type { Knex } from 'knex';
+import type { RevisionDto, RevisionSummaryDto, StaleSaveBody } from '../../../shared/schemas/api';
+import type { DesignInput } from '../../../shared/schemas/design';
+import type { AppContext } from '../../context';
+import { HttpError, conflict, forbidden, notFound } from '../../lib/http-error';
+import { queueMail } from '../../mail/outbox.repository';
+import { recordAudit } from '../audit/audit.repository';
+import { cantileverForMember, revisionForMember, type CantileverRow } from '../projects/project-access';
+import { findProject, memberEmailsWithRole } from '../projects/projects.repository';
+import { findUserById } from '../users/users.repository';
+import { assertMayChange } from './edit-rights';
+import { evaluateOnServer } from './evaluate';
+import { getRevisionDto, insertReview, insertRevision, latestRevision, listRevisionSummaries, reviewStates } from './revisions.repository';
+
+export interface SaveRequest {
+  baseRevision: number | null;
+  message: string;
+  input: DesignInput;
+}
+
+/**
+ * Saves a new revision inside one transaction: the base must still be the latest revision (else
+ * 409 with the latest), the role must be allowed to change what changed, the engine computes the
+ * result, and the number is the next one for this cantilever.
+ */
+export async function saveRevision(
+  db: Knex,
+  user: Express.User,
+  cantilever: CantileverRow,
+  body: SaveRequest,
+): Promise<RevisionDto> {
+  const run = async (trx: Knex.Transaction) => {
+    const latest = await latestRevision(trx, cantilever.id);
+    if ((latest?.number ?? null) !== body.baseRevision) {
+      const latestDto = latest ? await getRevisionDto(trx, latest.id) : null;
+      const message = latest
+        ? `Revision ${latest.number} was saved since you started from ${body.baseRevision === null ? 'nothing' : `revision ${body.baseRevision}`}; compare and save again.`
+        : 'This cantilever has no revisions yet; save with baseRevision null.';
+      const extra: Omit<StaleSaveBody, 'error'> | { latest: null } = { latest: latestDto as RevisionDto };
+      throw new HttpError(409, 'stale_base', message, [], extra);
+    }
+    assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input);
+    const result = await evaluateOnServer(trx, body.input, { stations: true });
+    const id = await insertRevision(trx, {
+      cantileverId: cantilever.id,
+      number: (latest?.number ?? 0) + 1,
+      authorId: user.id,
+      message: body.message,
+      input: body.input,
+      result,
+      baseRevisionId: latest?.id ?? null,
+    });
+    return (await getRevisionDto(trx, id)) as RevisionDto;
+  };
+  // Inside an outer transaction this nests as a savepoint.
+  return db.transaction(run);
+}
+
+export async function saveRevisionForMember(ctx: AppContext, user: Express.User, cantileverId: number, body: SaveRequest): Promise<RevisionDto> {
+  const cantilever = await cantileverForMember(ctx.db, cantileverId, user.id);
+  return saveRevision(ctx.db, user, cantilever, body);
+}
+
+export async function listRevisions(ctx: AppContext, user: Express.User, cantileverId: number): Promise<RevisionSummaryDto[]> {
+  await cantileverForMember(ctx.db, cantileverId, user.id);
+  return listRevisionSummaries(ctx.db, cantileverId);
+}
+
+export async function getRevision(ctx: AppContext, user: Express.User, revisionId: number): Promise<RevisionDto> {
+  await revisionForMember(ctx.db, revisionId, user.id);
+  const dto = await getRevisionDto(ctx.db, revisionId);
+  if (!dto) throw notFound('revision');
+  return dto;
+}
+
+const DESIGN_ROLES = new Set(['architect', 'fabricator', 'engineer']);
+
+/** Submits a revision for review and e-mails the project's engineers (queued in the same transaction). */
+export async function submitRevision(ctx: AppContext, user: Express.User, revisionId: number): Promise<RevisionDto> {
+  const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
+  if (revision.author_id !== user.id && !DESIGN_ROLES.has(user.role)) {
+    throw forbidden(`Your role (${user.role}) may not submit a revision for review.`);
+  }
+  await ctx.db.transaction(async (trx) => {
+    const state = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
+    if (state === 'submitted') throw conflict('already_submitted', `Revision ${revision.number} is already waiting for review.`);
+    if (state === 'approved') throw conflict('already_approved', `Revision ${revision.number} is already approved.`);
+    await insertReview(trx, { revisionId: revision.id, state: 'submitted', reviewerId: user.id, comment: '' });
+    const project = await findProject(trx, cantilever.project_id);
+    const engineers = (await memberEmailsWithRole(trx, cantilever.project_id, 'engineer')).filter((e) => e.id !== user.id);
+    await queueMail(trx, {
+      to: engineers.map((e) => e.email),
+      subject: `Review requested: ${cantilever.name}, revision ${revision.number}`,
+      text: [
+        `${user.displayName} submitted revision ${revision.number} of "${cantilever.name}" (${project?.name ?? 'project'}) for review.`,
+        `Message: ${revision.message}`,
+        `Result: ${revision.ok ? 'every computed check passes' : 'at least one check fails or was not computed'}.`,
+      ].join('\n'),
+    });
+  });
+  ctx.mail.kick();
+  return getRevision(ctx, user, revisionId);
+}
+
+/** An engineer's decision on a submitted revision; never their own. Approvals go to the audit trail. */
+export async function reviewRevision(
+  ctx: AppContext,
+  user: Express.User,
+  revisionId: number,
+  body: { decision: 'approve' | 'request-changes'; comment: string },
+): Promise<RevisionDto> {
+  const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
+  if (user.role !== 'engineer') throw forbidden('Only an engineer may review a revision.');
+  if (revision.author_id === user.id) throw forbidden('You may not review your own revision; ask another engineer.');
+  const state = body.decision === 'approve' ? 'approved' : 'changes-requested';
+  await ctx.db.transaction(async (trx) => {
+    const current = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
+    if (current !== 'submitted') {
+      throw conflict('not_submitted', `Revision ${revision.number} is ${current === 'draft' ? 'not submitted for review' : current}; only a submitted revision can be reviewed.`);
+    }
+    await insertReview(trx, { revisionId: revision.id, state, reviewerId: user.id, comment: body.comment });
+    await recordAudit(trx, {
+      kind: state === 'approved' ? 'approval' : 'changes-requested',
+      userId: user.id,
+      subject: `revision ${revision.id}`,
+      detail: `${cantilever.name}, revision ${revision.number}${body.comment ? `: ${body.comment}` : ''}`,
+    });
+    const author = await findUserById(trx, revision.author_id);
+    if (author && author.active) {
+      const verdict = state === 'approved' ? 'approved' : 'returned with changes requested';
+      await queueMail(trx, {
+        to: [author.email],
+        subject: `Revision ${revision.number} of ${cantilever.name} was ${verdict}`,
+        text: [`${user.displayName} ${verdict} revision ${revision.number} of "${cantilever.name}".`, body.comment ? `Comment: ${body.comment}` : '']
+          .filter(Boolean)
+          .join('\n'),
+      });
+    }
+  });
+  ctx.mail.kick();
+  return getRevision(ctx, user, revisionId);
+}

@@ -1,0 +1,69 @@
+/** Accounts (Knex only). */
+import type { Knex } from 'knex';
+import type { Role, UserDto } from '../../../shared/schemas/api';
+import { nowIso, toBool } from '../../db/knex';
+
+export interface UserRow {
+  id: number;
+  email: string;
+  display_name: string;
+  password_hash: string;
+  role: Role;
+  units: 'US' | 'SI';
+  active: number | boolean;
+  created_at: string;
+}
+
+export function toUserDto(row: UserRow): UserDto {
+  return {
+    id: row.id,
+    email: row.email,
+    displayName: row.display_name,
+    role: row.role,
+    units: row.units,
+    active: toBool(row.active),
+  };
+}
+
+export function normalizeEmail(email: string): string {
+  return email.trim().toLowerCase();
+}
+
+export async function findUserByEmail(db: Knex, email: string): Promise<UserRow | undefined> {
+  return db<UserRow>('users').where({ email: normalizeEmail(email) }).first();
+}
+
+export async function findUserById(db: Knex, id: number): Promise<UserRow | undefined> {
+  return db<UserRow>('users').where({ id }).first();
+}
+
+export async function listUsers(db: Knex): Promise<UserRow[]> {
+  return db<UserRow>('users').orderBy('id');
+}
+
+export async function insertUser(
+  db: Knex,
+  user: { email: string; displayName: string; passwordHash: string; role: Role; units?: 'US' | 'SI' },
+): Promise<number> {
+  const [row] = await db('users')
+    .insert({
+      email: normalizeEmail(user.email),
+      display_name: user.displayName,
+      password_hash: user.passwordHash,
+      role: user.role,
+      units: user.units ?? 'US',
+      active: true,
+      created_at: nowIso(),
+    })
+    .returning('id');
+  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+}
+
+export async function updateUser(
+  db: Knex,
+  id: number,
+  patch: Partial<Pick<UserRow, 'display_name' | 'role' | 'units' | 'active' | 'password_hash'>>,
+): Promise<void> {
+  if (Object.keys(patch).length === 0) return;
+  await db('users').where({ id }).update(patch);
+}

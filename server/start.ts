@@ -1,0 +1,79 @@
+/**
+ * Starts the whole server: configuration, database (migrate, seed an empty one), the mail path
+ * (the local fake SMTP server when SMTP_URL is absent, and the retry worker), the app, and the
+ * HTTP listener. Every path comes from the configuration, so a harness can keep all writes in its
+ * own temporary folders.
+ */
+import type { AddressInfo } from 'node:net';
+import { createServer, type Server } from 'node:http';
+import { mkdirSync } from 'node:fs';
+import { createApp } from './app';
+import { createDb } from './db/knex';
+import { migrateLatest } from './db/migrate';
+import { seedDemoIfEmpty } from './db/seed';
+import { loadConfig, type Config } from './env';
+import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
+import { MailWorker } from './mail/mail-worker';
+
+export interface RunningServer {
+  url: string;
+  port: number;
+  config: Config;
+  /** The local fake SMTP server, when SMTP_URL was not given. */
+  fakeSmtp: FakeSmtp | null;
+  close(): Promise<void>;
+}
+
+export async function startServer(overrides: Partial<Config> = {}): Promise<RunningServer> {
+  const config = loadConfig(overrides);
+  mkdirSync(config.uploadDir, { recursive: true });
+  const db = createDb(config.databaseUrl);
+  let fakeSmtp: FakeSmtp | null = null;
+  let worker: MailWorker | null = null;
+  let server: Server | null = null;
+  const cleanup = async () => {
+    if (server) await new Promise<void>((resolve) => server!.close(() => resolve()));
+    server?.closeAllConnections();
+    await worker?.stop();
+    await fakeSmtp?.close();
+    await db.destroy();
+  };
+  try {
+    await migrateLatest(db);
+    if (config.seedDemo) await seedDemoIfEmpty(db, config.passwordCost);
+    if (!config.smtpUrl) fakeSmtp = await startFakeSmtp(db);
+    worker = new MailWorker(db, {
+      smtpUrl: config.smtpUrl ?? fakeSmtp!.url,
+      from: config.mailFrom,
+      retryBaseMs: config.mailRetryBaseMs,
+      maxAttempts: config.mailMaxAttempts,
+      pollMs: config.mailPollMs,
+    });
+    worker.start();
+    const app = createApp(config, { db, mail: worker });
+    server = createServer(app);
+    await new Promise<void>((resolve, reject) => {
+      server!.once('error', reject);
+      server!.listen(config.port, config.host, () => resolve());
+    });
+    const { port } = server.address() as AddressInfo;
+    const host = config.host === '0.0.0.0' || config.host === '::' ? 'localhost' : config.host;
+    let closing: Promise<void> | null = null;
+    return {
+      url: `http://${host}:${port}`,
+      port,
+      config,
+      fakeSmtp,
+      close: () => {
+        closing ??= (async () => {
+          app.closeApp();
+          await cleanup();
+        })();
+        return closing;
+      },
+    };
+  } catch (err) {
+    await cleanup().catch(() => undefined);
+    throw err;
+  }
+}

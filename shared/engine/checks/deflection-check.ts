@@ -1,0 +1,61 @@
+/**
+ * member.deflection.live and member.deflection.total: the tip deflection under service loads
+ * against IBC 2018/2021 Table 1604.3 with the span of a cantilever taken as twice its length
+ * (table footnote [mem]). Service loads are the ASCE 7-16 2.4.1 combinations, unfactored:
+ * "total" is the worst whole combination (D + L, D + 0.75L + 0.75S ...), "live" is the worst of
+ * the same combinations without D (L, S, Lr, 0.75L + 0.75S ...). The design method does not matter.
+ */
+import type { LoadCase } from '../../schemas/member';
+import type { Check } from '../types';
+import type { Combination } from '../member/combinations';
+import { combinationName } from '../member/combinations';
+import { quantity, type UnitSystem } from '../units';
+
+export interface DeflectionInputs {
+  /** Unfactored tip deflection of each case present, in. */
+  tipByCase: Partial<Record<LoadCase, number>>;
+  service: Combination[];
+  L: number;
+  limits: { live: number; total: number };
+  units: UnitSystem;
+}
+
+export function deflectionChecks(d: DeflectionInputs): Check[] {
+  const tip = (factors: Combination['factors']) => {
+    let y = 0;
+    for (const [c, f] of Object.entries(factors) as [LoadCase, number][]) y += f * (d.tipByCase[c] ?? 0);
+    return y;
+  };
+  const span = 2 * d.L;
+  let total = { y: 0, name: null as string | null };
+  let live = { y: 0, name: null as string | null };
+  for (const c of d.service) {
+    const yt = tip(c.factors);
+    if (yt > total.y || total.name === null) total = { y: yt, name: c.name };
+    const variable = { ...c.factors };
+    delete variable.D;
+    const name = combinationName(variable);
+    if (!name) continue;
+    const yl = tip(variable);
+    if (yl > live.y || live.name === null) live = { y: yl, name };
+  }
+  const row = (id: string, title: string, ratio: number, y: { y: number; name: string | null }, what: string): Check => {
+    const limit = span / ratio;
+    const r = y.y / limit;
+    return {
+      id,
+      title,
+      reference: 'IBC Table 1604.3 (cantilever: span = 2 x length)',
+      combination: y.name,
+      demand: quantity(y.y, 'smallLength', d.units),
+      capacity: quantity(limit, 'smallLength', d.units),
+      ratio: r,
+      ok: r <= 1,
+      note: y.name === null ? `no ${what} load in this design` : `limit = 2 x length / ${ratio}`,
+    };
+  };
+  return [
+    row('member.deflection.live', 'Tip deflection under live load', d.limits.live, live, 'live, roof live or snow'),
+    row('member.deflection.total', 'Tip deflection under total load', d.limits.total, total, 'service'),
+  ];
+}

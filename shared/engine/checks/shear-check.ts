@@ -1,0 +1,38 @@
+/**
+ * member.shear: AISC 360-16 Chapter G against the shear of each combination. Largest at the root
+ * of a prismatic cantilever; checked at every station of a tapered one (the web depth shrinks
+ * toward the tip). The vertical component of the inclined flange force, which relieves the web of
+ * a tapered cantilever, is ignored (conservative; METHOD.md).
+ */
+import type { Check } from '../types';
+import { quantity } from '../units';
+import { worstRatio, type CheckContext } from './check-context';
+import { shearStrength, type ShearStrength } from './shear-strength';
+import { available } from './strength-types';
+
+export function shearCheck(ctx: CheckContext): Check {
+  const { model, section, method, units, Fy, E } = ctx;
+  const nodes = section.prismatic ? 1 : model.grid.x.length;
+  const strengths: ShearStrength[] = [];
+  for (let i = 0; i < nodes; i++) {
+    strengths.push(shearStrength(model.props[i], section.family, section.rolled, Fy, E, model.L));
+  }
+  const capacity = (i: number) => available(strengths[i].Vn, method, strengths[i].phi, strengths[i].omega);
+  const w = worstRatio(ctx.combos, (r, i) => r.V[i], capacity, nodes);
+  const s = strengths[w.node];
+  const combo = ctx.combos[w.combo];
+  const factor = method === 'LRFD' ? `phi_v = ${s.phi.toFixed(2)}` : `Omega_v = ${s.omega.toFixed(2)}`;
+  const check: Check = {
+    id: 'member.shear',
+    title: section.prismatic ? 'Shear at the root' : 'Shear along the tapered member',
+    reference: `AISC 360-16 ${s.clause}`,
+    combination: combo?.name ?? null,
+    demand: quantity(combo ? combo.response.V[w.node] : 0, 'force', units),
+    capacity: quantity(capacity(w.node), 'force', units),
+    ratio: w.ratio,
+    ok: w.ratio <= 1,
+    note: w.ratio <= 1 ? factor : `${factor}; over capacity: a thicker or deeper web would help`,
+  };
+  if (!section.prismatic) check.at = quantity(model.grid.x[w.node], 'length', units);
+  return check;
+}

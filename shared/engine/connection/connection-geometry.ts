@@ -1,0 +1,93 @@
+/**
+ * Reads a validated connection input once into internal numbers (in, ksi) and derives the
+ * distances every check uses. Coordinates: origin at the plate centre, x along N toward the
+ * tension row (for a face plate: up), y along B. Plate and pier are centred on each other.
+ */
+import type { ConnectionInput } from '../../schemas/connection';
+import type { RootFootprint } from '../types';
+import type { ShapeLookup } from '../shapes/types';
+import { toInternal } from '../units';
+import { resolveFootprint, type FootprintResolution } from './footprint';
+import { F1554_GRADES, heavyHexBearingArea, rodSize, tensileStressArea, type RodSize } from './rod-data';
+
+export interface ConnectionGeometry {
+  arrangement: ConnectionInput['arrangement'];
+  N: number;
+  B: number;
+  t: number;
+  Fy: number;
+  /** Rods in each row, rod diameter da, row offset f, gauge g, embedment hef (in). */
+  perSide: number;
+  da: number;
+  f: number;
+  g: number;
+  hef: number;
+  grade: ConnectionInput['anchors']['grade'];
+  fya: number;
+  futa: number;
+  rod: RodSize | undefined;
+  /** Tensile stress area and nut bearing area, in^2 (null when the rod size is not tabulated). */
+  Ase: number | null;
+  Abrg: number | null;
+  fc: number;
+  cracked: boolean;
+  lambda: number;
+  conditionA: boolean;
+  torqued: boolean;
+  pierLength: number;
+  pierWidth: number;
+  pierDepth: number | undefined;
+  footprint: FootprintResolution;
+  /** Length of a row of rods along B: (perSide - 1) g. */
+  rowSpan: number;
+  /** Rod centre to pier edge: beyond the tension row, beyond the compression row (both = Lp/2 - f), along B. */
+  edgeBeyondRow: number;
+  edgeAcrossRow: number;
+  edgeSide: number;
+}
+
+/** Parses the connection input (quantities are cached by units.ts, so this is cheap per call). */
+export function readGeometry(input: ConnectionInput, root: RootFootprint, shapes: ShapeLookup): ConnectionGeometry {
+  const a = input.anchors;
+  const da = toInternal(a.diameter, 'length');
+  const rod = rodSize(da);
+  const perSide = a.perSide;
+  const f = toInternal(a.offset, 'length');
+  const g = perSide > 1 ? toInternal(a.gauge, 'length') : 0;
+  const pierLength = toInternal(input.pier.length, 'length');
+  const pierWidth = toInternal(input.pier.width, 'length');
+  const rowSpan = (perSide - 1) * g;
+  const steel = F1554_GRADES[a.grade];
+  return {
+    arrangement: input.arrangement,
+    N: toInternal(input.plate.N, 'length'),
+    B: toInternal(input.plate.B, 'length'),
+    t: toInternal(input.plate.thickness, 'length'),
+    Fy: toInternal(input.plate.Fy ?? '36 ksi', 'stress'),
+    perSide,
+    da,
+    f,
+    g,
+    hef: toInternal(a.embedment, 'length'),
+    grade: a.grade,
+    fya: steel.fy,
+    // ACI 318-19 17.6.1.2: futa <= min(1.9 fya, 125 ksi).
+    futa: Math.min(steel.fu, 1.9 * steel.fy, 125),
+    rod,
+    Ase: rod ? tensileStressArea(rod.diameter, rod.threadsPerInch) : null,
+    Abrg: rod ? heavyHexBearingArea(rod.diameter) : null,
+    fc: toInternal(input.concrete.fc, 'stress'),
+    cracked: input.concrete.cracked ?? true,
+    lambda: input.concrete.lambda ?? 1,
+    conditionA: a.supplementaryReinforcement ?? false,
+    torqued: a.torqued ?? false,
+    pierLength,
+    pierWidth,
+    pierDepth: input.pier.depth ? toInternal(input.pier.depth, 'length') : undefined,
+    footprint: resolveFootprint(input.footprint?.shape, root, shapes),
+    rowSpan,
+    edgeBeyondRow: pierLength / 2 - f,
+    edgeAcrossRow: pierLength / 2 + f,
+    edgeSide: pierWidth / 2 - rowSpan / 2,
+  };
+}

@@ -1,0 +1,45 @@
+/**
+ * Checks on the document that the schema cannot make alone: positions beyond the tip, an unbraced
+ * length longer than the member, steel properties outside what AISC 360 covers, sizes beyond what
+ * the engine was written for. Each problem names its field path.
+ */
+import type { DesignInput } from '../schemas/design';
+import type { FieldProblem } from './sections/resolve-section';
+import { toInternal } from './units';
+
+/** Longest cantilever the engine accepts, in (60 ft: far beyond any deck, short of absurd). */
+export const MAX_LENGTH = 720;
+/** Shortest, in (1 ft: below that it is a bracket, not a cantilever beam). */
+export const MIN_LENGTH = 12;
+
+export function inputProblems(input: DesignInput, L: number, Fy: number, E: number): FieldProblem[] {
+  const problems: FieldProblem[] = [];
+  const { member, loads } = input;
+  if (L > MAX_LENGTH) {
+    problems.push({ path: 'member.length', message: `is longer than the 60 ft the engine checks, got "${member.length}"` });
+  }
+  if (L < MIN_LENGTH) {
+    problems.push({ path: 'member.length', message: `is shorter than the 1 ft the engine checks, got "${member.length}"` });
+  }
+  loads.point.forEach((p, i) => {
+    if (toInternal(p.at, 'length') > L * (1 + 1e-9)) {
+      problems.push({ path: `loads.point[${i}].at`, message: `is beyond the tip (length ${member.length}), got "${p.at}"` });
+    }
+  });
+  if (member.unbracedLength && toInternal(member.unbracedLength, 'length') > L * (1 + 1e-9)) {
+    problems.push({
+      path: 'member.unbracedLength',
+      message: `must not exceed the member length (${member.length}), got "${member.unbracedLength}"`,
+    });
+  }
+  if (!(Fy >= 20 && Fy <= 100)) {
+    problems.push({ path: 'member.steel.Fy', message: `must be between 20 and 100 ksi for a structural steel, got "${member.steel?.Fy}"` });
+  }
+  if (!(E >= 25000 && E <= 32000)) {
+    problems.push({ path: 'member.steel.E', message: `must be about 29000 ksi (200 GPa) for steel, got "${member.steel?.E}"` });
+  }
+  if (toInternal(member.spacing, 'length') > 240) {
+    problems.push({ path: 'member.spacing', message: `is wider than the 20 ft the engine checks, got "${member.spacing}"` });
+  }
+  return problems;
+}

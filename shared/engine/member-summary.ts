@@ -1,0 +1,60 @@
+/**
+ * The member part of the result: root demand and tip deflection by case and by combination, the
+ * weights, and (when asked) the station arrays for the charts, all in the chosen unit system.
+ */
+import type { LoadCase } from '../schemas/member';
+import type { CombinationResponse } from './checks/check-context';
+import type { MemberModel, Response } from './member/analysis';
+import type { MemberSection } from './sections/section-types';
+import type { EffectSummary, Stations, StationSeries } from './types';
+import { displayFactor, quantity, RESULT_UNITS, type UnitSystem } from './units';
+
+function summary(r: Response, units: UnitSystem): EffectSummary {
+  return {
+    rootMoment: quantity(r.M[0], 'moment', units),
+    rootShear: quantity(r.V[0], 'force', units),
+    tipDeflection: quantity(r.y[r.y.length - 1], 'smallLength', units),
+  };
+}
+
+export function caseSummaries(model: MemberModel, units: UnitSystem): Partial<Record<LoadCase, EffectSummary>> {
+  const out: Partial<Record<LoadCase, EffectSummary>> = {};
+  for (const c of model.cases) out[c.case] = summary(c.response, units);
+  return out;
+}
+
+export function combinationSummaries(combos: readonly CombinationResponse[], units: UnitSystem) {
+  return combos.map((c) => ({ name: c.name, ...summary(c.response, units) }));
+}
+
+function series(name: string, r: Response, units: UnitSystem): StationSeries {
+  const fV = displayFactor('force', units);
+  const fM = displayFactor('moment', units);
+  const fy = displayFactor('smallLength', units);
+  return {
+    name,
+    V: Array.from(r.V, (v) => v * fV),
+    M: Array.from(r.M, (v) => v * fM),
+    deflection: Array.from(r.y, (v) => v * fy),
+    rotation: Array.from(r.theta),
+  };
+}
+
+/** Station arrays in display units: x along the member, V, M, deflection, and the depth. */
+export function stationArrays(
+  model: MemberModel,
+  section: MemberSection,
+  combos: readonly CombinationResponse[],
+  units: UnitSystem,
+): Stations {
+  const u = RESULT_UNITS[units];
+  const fx = displayFactor('length', units);
+  const fd = displayFactor('smallLength', units);
+  return {
+    units: { x: u.length, V: u.force, M: u.moment, deflection: u.smallLength, rotation: 'rad' },
+    x: model.grid.x.map((x) => x * fx),
+    cases: model.cases.map((c) => series(c.case, c.response, units)),
+    combinations: combos.map((c) => series(c.name, c.response, units)),
+    depth: model.grid.x.map((x) => section.at(x / model.L).d * fd),
+  };
+}

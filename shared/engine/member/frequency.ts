@@ -1,0 +1,110 @@
+/**
+ * First natural frequency of the cantilever in bending, by Stodola's iteration (inverse iteration
+ * on the deflected shape) with a Rayleigh-type quotient: start from the static deflection under
+ * the weights, load the member with weight x shape, repeat once. One repeat converges the first mode of
+ * a uniform cantilever to within 0.001 % of Roark's 3.516 / (2 pi) sqrt(E I g / (w L^4)), and the
+ * same code handles a tapered member and point masses (e.g. a guard at the tip).
+ * Internal units: kip, in, s; g = 386.09 in/s^2.
+ */
+import type { MemberModel } from './analysis';
+import type { CaseLoads } from './case-loads';
+import { integrateCurvature } from './integrate';
+import { momentAt } from './statics';
+
+const G = 386.0886; // in/s^2, standard gravity
+const ITERATIONS = 1;
+
+/** Frequency in Hz of the first bending mode under the weights `mass` (kip/in and kip at points). */
+export function firstFrequency(model: MemberModel, mass: CaseLoads): number {
+  const { grid, EInode, EImid, L } = model;
+  const { x, mid } = grid;
+  const n = x.length;
+  const wNode = new Float64Array(n);
+  const wMid = new Float64Array(n - 1);
+  for (let i = 0; i < n; i++) wNode[i] = mass.q0 + mass.q1 * x[i];
+  for (let i = 0; i < n - 1; i++) wMid[i] = mass.q0 + mass.q1 * mid[i];
+  const pNode = new Float64Array(n);
+  for (const p of mass.points) pNode[nearest(x, p.a)] += p.P;
+
+  // Static deflection under the weights (closed-form moments): the shape for the first estimate.
+  const kN = new Float64Array(n);
+  const kM = new Float64Array(n - 1);
+  for (let i = 0; i < n; i++) kN[i] = momentAt(mass, L, x[i]) / EInode[i];
+  for (let i = 0; i < n - 1; i++) kM[i] = momentAt(mass, L, mid[i]) / EImid[i];
+  let shape = deflectedShape(x, kN, kM);
+  let omega2 = G / quotient(x, wNode, wMid, pNode, onesLike(shape), shape);
+  for (let k = 0; k < ITERATIONS; k++) {
+    const qN = wNode.map((w, i) => w * shape.node[i]);
+    const qM = wMid.map((w, i) => w * shape.mid[i]);
+    const pN = pNode.map((P, i) => P * shape.node[i]);
+    const next = shapeUnderLoad(x, qN, qM, pN, EInode, EImid);
+    omega2 = G / quotient(x, wNode, wMid, pNode, shape, next);
+    shape = next;
+  }
+  return Math.sqrt(omega2) / (2 * Math.PI);
+}
+
+interface Shape {
+  node: Float64Array;
+  mid: Float64Array;
+}
+
+/** int(w b b) / int(w a b): with a the last shape and b the shape it produces, omega^2 = g / this. */
+function quotient(x: readonly number[], wN: Float64Array, wM: Float64Array, pN: Float64Array, a: Shape, b: Shape): number {
+  let ab = 0;
+  let bb = 0;
+  for (let i = 0; i < x.length - 1; i++) {
+    const h = x[i + 1] - x[i];
+    ab += (h / 6) * (wN[i] * a.node[i] * b.node[i] + 4 * wM[i] * a.mid[i] * b.mid[i] + wN[i + 1] * a.node[i + 1] * b.node[i + 1]);
+    bb += (h / 6) * (wN[i] * b.node[i] ** 2 + 4 * wM[i] * b.mid[i] ** 2 + wN[i + 1] * b.node[i + 1] ** 2);
+  }
+  for (let i = 0; i < x.length; i++) {
+    ab += pN[i] * a.node[i] * b.node[i];
+    bb += pN[i] * b.node[i] ** 2;
+  }
+  return bb / ab;
+}
+
+function onesLike(s: Shape): Shape {
+  return { node: s.node.map(() => 1), mid: s.mid.map(() => 1) };
+}
+
+/** Deflection at nodes and midpoints from curvature (midpoint: exact for a quadratic curvature). */
+function deflectedShape(x: readonly number[], kN: Float64Array, kM: Float64Array): Shape {
+  const { theta, y } = integrateCurvature(x, kN, kM);
+  const mid = new Float64Array(x.length - 1);
+  for (let i = 0; i < mid.length; i++) {
+    const h = x[i + 1] - x[i];
+    mid[i] = y[i] + (h / 2) * theta[i] + (h * h * (7 * kN[i] + 6 * kM[i] - kN[i + 1])) / 96;
+  }
+  return { node: y, mid };
+}
+
+/** Shape under a distributed load given at nodes and midpoints plus point loads at nodes. */
+function shapeUnderLoad(
+  x: readonly number[], qN: Float64Array, qM: Float64Array, pN: Float64Array, EIn: Float64Array, EIm: Float64Array,
+): Shape {
+  const n = x.length;
+  const kN = new Float64Array(n);
+  const kM = new Float64Array(n - 1);
+  let Vb = pN[n - 1]; // shear just on the root side of node i + 1
+  let Mb = 0;
+  for (let i = n - 2; i >= 0; i--) {
+    const h = x[i + 1] - x[i];
+    const Vm = Vb + (h / 24) * (-qN[i] + 8 * qM[i] + 5 * qN[i + 1]);
+    const Va = Vb + (h / 6) * (qN[i] + 4 * qM[i] + qN[i + 1]);
+    const Mm = Mb + (h / 24) * (-Va + 8 * Vm + 5 * Vb);
+    const Ma = Mb + (h / 6) * (Va + 4 * Vm + Vb);
+    kM[i] = Mm / EIm[i];
+    kN[i] = Ma / EIn[i];
+    Vb = Va + pN[i];
+    Mb = Ma;
+  }
+  return deflectedShape(x, kN, kM);
+}
+
+function nearest(x: readonly number[], a: number): number {
+  let best = 0;
+  for (let i = 1; i < x.length; i++) if (Math.abs(x[i] - a) < Math.abs(x[best] - a)) best = i;
+  return best;
+}

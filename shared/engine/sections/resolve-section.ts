@@ -1,0 +1,95 @@
+/**
+ * Turns the document's `member.section` into the engine's section, refusing what the schema cannot
+ * see: an unknown shape, a taper on a shape that is not a W, a tip not shallower than the root, a
+ * tip too shallow to leave a web, plates that do not make an I.
+ */
+import type { MemberInput } from '../../schemas/member';
+import type { ShapeLookup } from '../shapes/types';
+import type { MemberSection } from './section-types';
+import { catalogSection } from './catalog-section';
+import { builtUpSection, taperedRolledSection } from './tapered-section';
+import { toInternal } from '../units';
+
+export interface FieldProblem {
+  path: string;
+  message: string;
+}
+
+type SectionInput = MemberInput['section'];
+
+/** Returns the section, or the problems that make it impossible (internal units, in). */
+export function resolveSection(section: SectionInput, shapes: ShapeLookup): MemberSection | FieldProblem[] {
+  if (section.plates) return resolvePlates(section.plates);
+  const label = section.shape ?? '';
+  const shape = shapes(label);
+  if (!shape) {
+    return [{ path: 'member.section.shape', message: `unknown shape "${label}": not in the shapes table` }];
+  }
+  if (!section.tipDepth) return catalogSection(shape);
+  const path = 'member.section.tipDepth';
+  if (shape.family !== 'W') {
+    return [{ path, message: `a web taper applies to W shapes only, not ${shape.family} (${shape.label})` }];
+  }
+  const tip = toInternal(section.tipDepth, 'length');
+  const d = shape.d ?? 0;
+  if (tip >= d) {
+    return [{ path, message: `must be less than the depth of ${shape.label} (${d} in), got "${section.tipDepth}"` }];
+  }
+  const minTip = 2 * (shape.kdes ?? shape.tf ?? 0) + 0.25;
+  if (tip < minTip) {
+    return [
+      {
+        path,
+        message: `is too shallow: ${shape.label} needs at least ${round(minTip)} in to keep a web clear of the fillets, got "${section.tipDepth}"`,
+      },
+    ];
+  }
+  return taperedRolledSection(shape, tip);
+}
+
+function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSection | FieldProblem[] {
+  const base = 'member.section.plates';
+  const p = {
+    rootDepth: toInternal(plates.rootDepth, 'length'),
+    tipDepth: toInternal(plates.tipDepth, 'length'),
+    flangeWidth: toInternal(plates.flangeWidth, 'length'),
+    flangeThickness: toInternal(plates.flangeThickness, 'length'),
+    webThickness: toInternal(plates.webThickness, 'length'),
+  };
+  const problems: FieldProblem[] = [];
+  // Plates a shop can weld (common practice, no source): thicknesses 1/8 to 4 in, widths and
+  // depths up to 10 ft; outside this the plate model and the clauses are not meant to apply.
+  const ranges: [keyof typeof p, number, number][] = [
+    ['rootDepth', 3, 120],
+    ['flangeWidth', 2, 60],
+    ['flangeThickness', 0.125, 4],
+    ['webThickness', 0.125, 4],
+  ];
+  for (const [key, min, max] of ranges) {
+    if (p[key] < min || p[key] > max) {
+      problems.push({ path: `${base}.${key}`, message: `must be between ${min} and ${max} in, got "${plates[key]}"` });
+    }
+  }
+  if (problems.length) return problems;
+  const minDepth = 2 * p.flangeThickness + 0.25;
+  if (p.tipDepth > p.rootDepth) {
+    problems.push({ path: `${base}.tipDepth`, message: `must not exceed the root depth (${plates.rootDepth}), got "${plates.tipDepth}"` });
+  }
+  if (p.tipDepth < minDepth) {
+    problems.push({
+      path: `${base}.tipDepth`,
+      message: `is too shallow: two ${plates.flangeThickness} flanges need at least ${round(minDepth)} in to leave a web, got "${plates.tipDepth}"`,
+    });
+  }
+  if (p.rootDepth < minDepth) {
+    problems.push({ path: `${base}.rootDepth`, message: `is too shallow to leave a web between the flanges, got "${plates.rootDepth}"` });
+  }
+  if (p.webThickness >= p.flangeWidth) {
+    problems.push({ path: `${base}.webThickness`, message: `must be thinner than the flange width (${plates.flangeWidth}), got "${plates.webThickness}"` });
+  }
+  return problems.length ? problems : builtUpSection(p);
+}
+
+function round(v: number): number {
+  return Number(v.toFixed(2));
+}

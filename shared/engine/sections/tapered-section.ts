@@ -1,0 +1,72 @@
+/**
+ * Web-tapered I members: a rolled W whose web is cut to a linear taper (flanges unchanged), and a
+ * built-up I from plates. The depth runs linearly from the root depth to the tip depth; every
+ * property at x is computed from the plates at that depth (iSectionProps), so the member is
+ * consistent along its length. For a cut W this ignores the fillets: at the root the computed
+ * area and J are a little below the table's (METHOD.md; tests/shared/sections).
+ */
+import type { ShapeRecord } from '../shapes/types';
+import type { MemberSection, SectionProps } from './section-types';
+import { iSectionIx, iSectionProps } from './i-section';
+import { DEFAULT_STEEL } from './steel-grades';
+
+export interface TaperPlates {
+  rootDepth: number;
+  tipDepth: number;
+  flangeWidth: number;
+  flangeThickness: number;
+  webThickness: number;
+  /** Fillet allowance each side when reading web slenderness (kdes - tf for a cut W; 0 for plates). */
+  filletAllowance: number;
+}
+
+function taperedSection(
+  plates: TaperPlates,
+  label: string,
+  kind: 'tapered-rolled' | 'built-up',
+  family: 'W' | 'I',
+): MemberSection {
+  const { rootDepth, tipDepth, flangeWidth: bf, flangeThickness: tf, webThickness: tw } = plates;
+  const at = (t: number): SectionProps => {
+    const d = rootDepth + (tipDepth - rootDepth) * t;
+    return iSectionProps(d, bf, tf, tw, d - 2 * tf - 2 * plates.filletAllowance);
+  };
+  const root = at(0);
+  const tip = at(1);
+  const steel = DEFAULT_STEEL[family];
+  return {
+    label,
+    kind,
+    family,
+    prismatic: rootDepth === tipDepth,
+    rolled: false,
+    root,
+    tip,
+    at: (t) => (t <= 0 ? root : t >= 1 ? tip : at(t)),
+    IxAt: (t) => iSectionIx(rootDepth + (tipDepth - rootDepth) * t, bf, tf, tw),
+    defaultFy: steel.Fy,
+    defaultGrade: steel.grade,
+  };
+}
+
+/** A rolled W shape with its web cut to a linear taper from full depth at the root to tipDepth (in). */
+export function taperedRolledSection(s: ShapeRecord, tipDepth: number): MemberSection {
+  const d = s.d ?? 0;
+  const tf = s.tf ?? 0;
+  const fillet = Math.max(0, (s.kdes ?? tf) - tf);
+  const plates = { rootDepth: d, tipDepth, flangeWidth: s.bf ?? 0, flangeThickness: tf, webThickness: s.tw ?? 0, filletAllowance: fillet };
+  return taperedSection(plates, `${s.label} tapered to ${fmt(tipDepth)} in`, 'tapered-rolled', 'W');
+}
+
+/** A built-up I welded from plates (all in). */
+export function builtUpSection(p: Omit<TaperPlates, 'filletAllowance'>): MemberSection {
+  const label =
+    p.rootDepth === p.tipDepth
+      ? `Built-up I ${fmt(p.rootDepth)} x ${fmt(p.flangeWidth)} in`
+      : `Built-up I ${fmt(p.rootDepth)} to ${fmt(p.tipDepth)} x ${fmt(p.flangeWidth)} in`;
+  return taperedSection({ ...p, filletAllowance: 0 }, label, 'built-up', 'I');
+}
+
+function fmt(v: number): string {
+  return String(Number(v.toPrecision(4)));
+}

@@ -1,0 +1,16 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useState } from 'react';
+import { RouterProvider } from 'react-router-dom';
+import { createQueryClient } from '../lib/query-client';
+import { createAppRouter } from './router';
+
+/** The app's providers: one QueryClient and the router. */
+export function AppProvider() {
+  const [queryClient] = useState(createQueryClient);
+  const [router] = useState(createAppRouter);
+  return (
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>
+  );
+}

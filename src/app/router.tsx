@@ -1,0 +1,56 @@
+import { lazy, Suspense, type ComponentType, type LazyExoticComponent } from 'react';
+import { createBrowserRouter, Navigate } from 'react-router-dom';
+import { paths, routePatterns } from '../config/paths';
+import { RequireAuth } from '../features/auth/components/require-auth';
+import { Loading } from '../components/ui/status';
+import { AppLayout } from '../components/layouts/app-layout';
+import { RouteError } from './routes/route-error';
+
+const SignInRoute = lazy(() => import('./routes/sign-in'));
+const ProjectsRoute = lazy(() => import('./routes/projects'));
+const ProjectRoute = lazy(() => import('./routes/project'));
+const DesignDeskRoute = lazy(() => import('./routes/design-desk'));
+const ShapesRoute = lazy(() => import('./routes/shapes'));
+const HistoryRoute = lazy(() => import('./routes/history'));
+const CompareRoute = lazy(() => import('./routes/compare'));
+const ReviewRoute = lazy(() => import('./routes/review'));
+const TeamRoute = lazy(() => import('./routes/team'));
+const OutboxRoute = lazy(() => import('./routes/outbox'));
+const NotFoundRoute = lazy(() => import('./routes/not-found'));
+
+function page(Component: LazyExoticComponent<ComponentType>) {
+  return (
+    <Suspense fallback={<Loading />}>
+      <Component />
+    </Suspense>
+  );
+}
+
+/** Every route is split into its own chunk; the sign-in chunk carries no engine and no charts. */
+export function createAppRouter() {
+  return createBrowserRouter([
+    { path: routePatterns.signIn, element: page(SignInRoute), errorElement: <RouteError /> },
+    {
+      element: <RequireAuth />,
+      errorElement: <RouteError />,
+      children: [
+        {
+          element: <AppLayout />,
+          children: [
+            { index: true, element: <Navigate to={paths.projects} replace /> },
+            { path: routePatterns.projects, element: page(ProjectsRoute) },
+            { path: routePatterns.project, element: page(ProjectRoute) },
+            { path: routePatterns.desk, element: page(DesignDeskRoute) },
+            { path: routePatterns.history, element: page(HistoryRoute) },
+            { path: routePatterns.compare, element: page(CompareRoute) },
+            { path: routePatterns.review, element: page(ReviewRoute) },
+            { path: routePatterns.shapes, element: page(ShapesRoute) },
+            { path: routePatterns.team, element: page(TeamRoute) },
+            { path: routePatterns.outbox, element: page(OutboxRoute) },
+            { path: '*', element: page(NotFoundRoute) },
+          ],
+        },
+      ],
+    },
+  ]);
+}

@@ -1,0 +1,23 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UserDto } from '../../../../shared/schemas/api';
+import { apiPost } from '../../../lib/api-client';
+import { authKeys } from './auth-keys';
+
+export interface LoginBody {
+  email: string;
+  password: string;
+}
+
+export function login(body: LoginBody): Promise<UserDto> {
+  return apiPost<UserDto>('/api/auth/login', { ...body });
+}
+
+export function useLogin() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: login,
+    onSuccess: (user) => {
+      queryClient.setQueryData(authKeys.me(), user);
+    },
+  });
+}

@@ -1,0 +1,13 @@
+import { formatRatio } from '../../history/utils/format';
+
+/** A ratio with its verdict word; colour follows the word, never replaces it. */
+export function RatioCell({ ratio, ok }: { ratio: number | null; ok: boolean | null }) {
+  if (ok === null) return <span className="text-concrete-500">not checked</span>;
+  const computed = ratio !== null && Number.isFinite(ratio);
+  const word = !computed ? 'fail' : ok ? 'pass' : 'fail';
+  return (
+    <span className={`font-mono tabular-nums ${ok ? 'text-concrete-900' : 'font-semibold text-util-over'}`}>
+      {formatRatio(ratio)} <span className="font-sans text-xs">{word}</span>
+    </span>
+  );
+}

@@ -1,0 +1,58 @@
+import { ArrowDown, ArrowUp, Minus, Plus, X, CircleHelp, type LucideIcon } from 'lucide-react';
+import type { RatioRow, RatioTrend } from '../utils/ratio-rows';
+import { RatioCell } from './ratio-cell';
+
+const TRENDS: Record<RatioTrend, { Icon: LucideIcon; tone: string }> = {
+  worse: { Icon: ArrowUp, tone: 'text-util-over' },
+  better: { Icon: ArrowDown, tone: 'text-util-calm' },
+  unchanged: { Icon: Minus, tone: 'text-concrete-600' },
+  'new check': { Icon: Plus, tone: 'text-concrete-700' },
+  'no longer checked': { Icon: X, tone: 'text-concrete-700' },
+  'not computed': { Icon: CircleHelp, tone: 'text-util-over' },
+};
+
+function signed(change: number | null): string {
+  if (change === null) return '—';
+  const text = Math.abs(change).toFixed(2);
+  return change > 0 ? `+${text}` : change < 0 ? `−${text}` : text;
+}
+
+/** Every check's ratio before and after, the change and a word for it. */
+export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA: string; labelB: string }) {
+  return (
+    <table className="w-full border-collapse text-sm">
+      <caption className="sr-only">Check ratios, {labelA} and {labelB}</caption>
+      <thead>
+        <tr className="border-b border-concrete-300 text-left text-concrete-700">
+          <th scope="col" className="py-1 pr-3 font-medium">Check</th>
+          <th scope="col" className="py-1 pr-3 font-medium">{labelA}</th>
+          <th scope="col" className="py-1 pr-3 font-medium">{labelB}</th>
+          <th scope="col" className="py-1 pr-3 font-medium">Change</th>
+          <th scope="col" className="py-1 font-medium">Trend</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((row) => {
+          const { Icon, tone } = TRENDS[row.trend];
+          return (
+            <tr key={row.id} className="border-b border-concrete-100" data-check={row.id}>
+              <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
+                {row.title}
+                <span className="block font-mono text-[11px] text-concrete-500">{row.id}</span>
+              </th>
+              <td className="py-1 pr-3"><RatioCell ratio={row.ratioA} ok={row.okA} /></td>
+              <td className="py-1 pr-3"><RatioCell ratio={row.ratioB} ok={row.okB} /></td>
+              <td className="py-1 pr-3 font-mono tabular-nums">{signed(row.change)}</td>
+              <td className={`py-1 ${tone}`}>
+                <span className="inline-flex items-center gap-1">
+                  <Icon aria-hidden="true" className="h-4 w-4" />
+                  {row.trend}
+                </span>
+              </td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}

@@ -1,0 +1,101 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useCallback, useEffect, useMemo, useState } from 'react';
+import { FormProvider, useForm, useFormState } from 'react-hook-form';
+import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
+import type { UnitSystem } from '../../../../shared/engine/units';
+import { EDIT_RIGHTS, type CantileverDto, type RevisionDto, type UserDto } from '../../../../shared/schemas/api';
+import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
+import { useUpdateMe } from '../../auth/api/update-me';
+import { ShapePickerDialog } from '../../shapes/components/shape-picker-dialog';
+import { useShapes } from '../../shapes/api/get-shapes';
+import { useLiveDesign } from '../hooks/use-live-design';
+import { useUnitsSwitch } from '../hooks/use-units-switch';
+import { issuesByField } from '../lib/issue-paths';
+import { DeskHeader } from './desk-header';
+import { DeskInputs, IssueSummary } from './desk-inputs';
+import { DeskResults } from './desk-results';
+import { DeskSave } from './desk-save';
+import { EngineIssuesContext } from './field-context';
+import { DeskSide } from './desk-side';
+
+const NO_SHAPES: ShapeRecord[] = [];
+
+export interface DeskEditorProps {
+  cantilever: CantileverDto;
+  revision: RevisionDto | null;
+  initialDoc: DesignDocument;
+  user: UserDto;
+  /** Turns a document from the server into the person's unit system. */
+  toUserUnits: (doc: DesignDocument) => DesignDocument;
+}
+
+/** The design desk: inputs on the left, live results on the right, saving as revisions. */
+export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
+  const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: initialDoc });
+  const { isDirty } = useFormState({ control: form.control });
+  const [base, setBase] = useState<number | null>(revision?.number ?? null);
+  const [units, setUnits] = useState<UnitSystem>(initialDoc.units === 'SI' ? 'SI' : 'US');
+  const [picker, setPicker] = useState<'member' | 'footprint' | null>(null);
+  const shapes = useShapes();
+  const custom = useMemo(() => shapes.data?.shapes.filter((s) => s.custom) ?? NO_SHAPES, [shapes.data]);
+  const { live, busy, submit } = useLiveDesign(custom);
+  const switchUnits = useUnitsSwitch(form);
+  const updateMe = useUpdateMe();
+  const rights = EDIT_RIGHTS[user.role];
+
+  useEffect(() => {
+    submit(form.getValues());
+    return form.subscribe({ formState: { values: true }, callback: ({ values }) => submit(values) });
+  }, [form, submit]);
+
+  const onUnits = useCallback((to: UnitSystem) => {
+    switchUnits(to);
+    setUnits(to);
+    updateMe.mutate({ units: to });
+  }, [switchUnits, updateMe]);
+
+  const openMember = useCallback(() => setPicker('member'), []);
+  const openFootprint = useCallback(() => setPicker('footprint'), []);
+  const engineIssues = useMemo(() => issuesByField(live.issues), [live.issues]);
+  const hasConnection = live.doc?.connection !== undefined;
+
+  function applyShape(target: 'member' | 'footprint', label: string) {
+    const opts = { shouldDirty: true, shouldValidate: true } as const;
+    if (target === 'member') {
+      const section = form.getValues('member.section');
+      form.setValue('member.section', section.plates ? { shape: label } : { ...section, shape: label }, opts);
+    } else {
+      form.setValue('connection.footprint', { shape: label }, opts);
+    }
+    setPicker(null);
+  }
+
+  const actions = [
+    ...(rights.member ? [{ label: 'Use for member', onUse: (l: string) => applyShape('member', l) }] : []),
+    ...(rights.connection && hasConnection ? [{ label: 'Use for post footprint', onUse: (l: string) => applyShape('footprint', l) }] : []),
+  ];
+  if (picker === 'footprint') actions.reverse();
+
+  return (
+    <FormProvider {...form}>
+      <EngineIssuesContext.Provider value={engineIssues}>
+        <div className="flex flex-col">
+          <DeskHeader cantilever={cantilever} base={base} dirty={isDirty} busy={busy} live={live} units={units} onUnits={onUnits}
+            save={<DeskSave cantileverId={cantilever.id} base={base} setBase={setBase} dirty={isDirty} mayEdit={rights.member || rights.connection} toUserUnits={toUserUnits} />} />
+          <div className="grid gap-4 p-4 lg:grid-cols-[24rem_1fr]">
+            <form onSubmit={(e) => e.preventDefault()} noValidate aria-label="Design inputs" className="flex flex-col gap-2">
+              <IssueSummary issues={live.issues} failure={live.failure} />
+              <DeskInputs mayEditMember={rights.member} mayEditConnection={rights.connection} onBrowseMember={openMember} onBrowseFootprint={openFootprint} />
+            </form>
+            <div className="flex min-w-0 flex-col gap-3">
+              <DeskResults live={live} doc={live.doc} />
+              <DeskSide cantileverId={cantilever.id} current={base} />
+            </div>
+          </div>
+        </div>
+        <ShapePickerDialog open={picker !== null} onClose={() => setPicker(null)} actions={actions}
+          initial={picker === 'footprint' ? form.getValues('connection.footprint.shape') ?? null : form.getValues('member.section.shape') ?? null} />
+      </EngineIssuesContext.Provider>
+    </FormProvider>
+  );
+}

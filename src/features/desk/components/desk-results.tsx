@@ -1,0 +1,45 @@
+import type { DesignDocument } from '../../../../shared/schemas/design';
+import type { LiveDesign } from '../hooks/use-live-design';
+import { CheckBoard } from './check-board';
+import { DeskCharts } from './desk-charts';
+import { MemberSketch } from './member-sketch';
+import { PlateSketch } from './plate-sketch';
+import { Verdict } from './verdict';
+
+function Panel({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <section aria-label={title} className="rounded-md border border-concrete-300 bg-white p-3">
+      <h2 className="mb-2 text-sm font-semibold text-concrete-800">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+/** The right side of the desk: verdict and caution, diagrams, check board, sketches. */
+export function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocument | null }) {
+  const result = live.result;
+  const limits = { live: doc?.deflectionLimits?.live ?? 360, total: doc?.deflectionLimits?.total ?? 240 };
+  return (
+    <div className={`flex flex-col gap-3 transition-opacity ${live.stale && result ? 'opacity-80' : ''}`}>
+      <Verdict checks={result ? result.checks : null} stale={live.stale} />
+      {result ? (
+        <>
+          <Panel title="Moment, shear and deflection along the member">
+            <DeskCharts result={result} resultId={live.resultId} limits={limits} />
+          </Panel>
+          <Panel title="Check board">
+            <CheckBoard checks={result.checks} />
+          </Panel>
+          <div className="grid gap-3 2xl:grid-cols-2">
+            <Panel title="Member elevation">
+              <MemberSketch result={result} />
+            </Panel>
+            <Panel title="Plate on the pier">
+              {doc ? <PlateSketch doc={doc} result={result} /> : null}
+            </Panel>
+          </div>
+        </>
+      ) : null}
+    </div>
+  );
+}

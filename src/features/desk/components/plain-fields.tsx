@@ -1,0 +1,72 @@
+import type { ReactNode } from 'react';
+import { useFormContext, useFormState, type FieldPath } from 'react-hook-form';
+import type { DesignDocument } from '../../../../shared/schemas/design';
+import { Field, describedBy, inputClass } from '../../../components/ui/field';
+import { fieldId, useEngineIssue } from './field-context';
+
+type Name = FieldPath<DesignDocument>;
+
+function errorAt(errors: unknown, name: string): string | undefined {
+  let node: unknown = errors;
+  for (const part of name.split('.')) node = (node as Record<string, unknown> | undefined)?.[part];
+  const message = (node as { message?: unknown } | undefined)?.message;
+  return typeof message === 'string' ? message : undefined;
+}
+
+/** The schema's or the engine's error for one field name. */
+export function useFieldError(name: string): string | undefined {
+  const { errors } = useFormState<DesignDocument>({ name: name as Name });
+  const engineIssue = useEngineIssue(name);
+  return errorAt(errors, name) ?? engineIssue;
+}
+
+/** A whole number or ratio; the browser keeps what is typed, the schema says what is wrong. */
+export function NumberField({ name, label, hint, step = 1 }: { name: string; label: string; hint?: string; step?: number }) {
+  const { register } = useFormContext<DesignDocument>();
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <Field id={id} label={label} error={error} hint={hint}>
+      <input id={id} type="number" step={step} inputMode="numeric" className={inputClass(Boolean(error), 'font-mono')}
+        {...describedBy(id, error, Boolean(hint))} {...register(name as Name, { valueAsNumber: true })} />
+    </Field>
+  );
+}
+
+export function SelectField({ name, label, children }: { name: string; label: string; children: ReactNode }) {
+  const { register } = useFormContext<DesignDocument>();
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <Field id={id} label={label} error={error}>
+      <select id={id} className={inputClass(Boolean(error))} {...describedBy(id, error)} {...register(name as Name)}>
+        {children}
+      </select>
+    </Field>
+  );
+}
+
+export function CheckField({ name, label }: { name: string; label: string }) {
+  const { register } = useFormContext<DesignDocument>();
+  const id = fieldId(name);
+  return (
+    <label htmlFor={id} className="flex items-center gap-2 text-sm">
+      <input id={id} type="checkbox" className="h-4 w-4 accent-oxide-500" {...register(name as Name)} />
+      {label}
+    </label>
+  );
+}
+
+/** One input group of the desk, collapsible, with its own heading. */
+export function Group({ title, children, disabled = false, note }: { title: string; children: ReactNode; disabled?: boolean; note?: string }) {
+  return (
+    <details open className="rounded-md border border-concrete-300 bg-white">
+      <summary className="cursor-pointer select-none px-3 py-2 text-sm font-semibold text-concrete-800">{title}</summary>
+      <fieldset disabled={disabled} className="flex flex-col gap-2 px-3 pb-3">
+        <legend className="sr-only">{title}</legend>
+        {disabled && note ? <p className="text-xs text-concrete-500">{note}</p> : null}
+        {children}
+      </fieldset>
+    </details>
+  );
+}

@@ -1,0 +1,122 @@
+import { useCallback, useEffect, useRef, useState } from 'react';
+import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
+import type { DesignResult } from '../../../../shared/engine/types';
+import type { DesignDocument } from '../../../../shared/schemas/design';
+import type { FieldIssue } from '../../../../shared/schemas/quantity';
+import type { WorkerReply, WorkerRequest } from '../lib/worker-protocol';
+
+export interface LiveDesign {
+  /** The newest result that computed (kept while the inputs are being fixed). */
+  result: DesignResult | null;
+  /** The request id behind `result` (for the redraw measure). */
+  resultId: number;
+  /** Problems with the newest document (schema or engine); empty when it computed. */
+  issues: FieldIssue[];
+  /** The engine failed unexpectedly on the newest document. */
+  failure: string | null;
+  /** True when `result` belongs to an older document than the one on screen. */
+  stale: boolean;
+  /** Milliseconds the engine took for the newest answer. */
+  engineMs: number;
+  /** The document behind `result` (for the sketches). */
+  doc: DesignDocument | null;
+}
+
+const EMPTY: LiveDesign = { result: null, resultId: 0, issues: [], failure: null, stale: true, engineMs: 0, doc: null };
+
+interface Engine {
+  post(message: WorkerRequest): void;
+  stop(): void;
+}
+
+/** A worker when the browser has one; otherwise the same code on the main thread, after a tick. */
+function startEngine(onReply: (reply: WorkerReply) => void): Engine {
+  if (typeof Worker !== 'undefined') {
+    const worker = new Worker(new URL('../engine.worker.ts', import.meta.url), { type: 'module' });
+    worker.onmessage = (event: MessageEvent<WorkerReply>) => onReply(event.data);
+    return { post: (m) => worker.postMessage(m), stop: () => worker.terminate() };
+  }
+  let shapes: ShapeRecord[] = [];
+  let stopped = false;
+  return {
+    post(message) {
+      if (message.type === 'shapes') {
+        shapes = message.shapes;
+        return;
+      }
+      void import('../lib/run-design').then(({ runDesign }) => {
+        if (!stopped) onReply({ id: message.id, ...runDesign(message.doc, shapes) });
+      });
+    },
+    stop: () => {
+      stopped = true;
+    },
+  };
+}
+
+/**
+ * Live recomputation, latest wins: at most one document is with the engine; while it works, only the
+ * newest document typed since is kept and sent next. Each request is marked (performance marks
+ * "desk-input-<id>") so the charts can measure the redraw.
+ */
+export function useLiveDesign(customShapes: ShapeRecord[]) {
+  const [live, setLive] = useState<LiveDesign>(EMPTY);
+  const [busy, setBusy] = useState(false);
+  const engine = useRef<Engine | null>(null);
+  const inFlight = useRef(false);
+  const queued = useRef<{ id: number; doc: unknown } | null>(null);
+  const nextId = useRef(0);
+  const docs = useRef(new Map<number, DesignDocument>());
+
+  useEffect(() => {
+    const e = startEngine((reply) => {
+      if (performance.getEntriesByName(`desk-input-${reply.id}`, 'mark').length > 0) performance.measure('desk-engine', `desk-input-${reply.id}`);
+      const next = queued.current;
+      queued.current = null;
+      if (next) engine.current?.post({ type: 'evaluate', ...next });
+      else inFlight.current = false;
+      setBusy(Boolean(next));
+      const doc = docs.current.get(reply.id) ?? null;
+      for (const id of docs.current.keys()) if (id <= reply.id) docs.current.delete(id);
+      setLive((prev) => {
+        if (reply.kind === 'result') {
+          return { result: reply.result, resultId: reply.id, issues: [], failure: null, stale: Boolean(next), engineMs: reply.ms, doc };
+        }
+        if (reply.kind === 'invalid') return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
+        return { ...prev, issues: [], failure: reply.message, stale: true, engineMs: reply.ms };
+      });
+    });
+    engine.current = e;
+    if (queued.current) {
+      inFlight.current = true;
+      e.post({ type: 'evaluate', ...queued.current });
+      queued.current = null;
+    }
+    return () => {
+      e.stop();
+      engine.current = null;
+      inFlight.current = false;
+    };
+  }, []);
+
+  useEffect(() => {
+    engine.current?.post({ type: 'shapes', shapes: customShapes });
+  }, [customShapes]);
+
+  const submit = useCallback((doc: unknown) => {
+    nextId.current += 1;
+    const id = nextId.current;
+    performance.mark(`desk-input-${id}`);
+    const request = { id, doc: structuredClone(doc) };
+    docs.current.set(id, request.doc as DesignDocument);
+    if (inFlight.current || !engine.current) {
+      queued.current = request;
+    } else {
+      inFlight.current = true;
+      engine.current.post({ type: 'evaluate', ...request });
+    }
+    setBusy(true);
+  }, []);
+
+  return { live, busy, submit };
+}

@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiPost } from '../../../lib/api-client';
+import type { RevisionDto } from '../../../../shared/schemas/api';
+import { revisionKeys } from '../../revisions/api/revision-keys';
+import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
+import { projectKeys } from '../../projects/api/project-keys';
+
+/** Asks the project's engineers to review a revision (the server e-mails them). */
+export function submitRevision(revisionId: number): Promise<RevisionDto> {
+  return apiPost<RevisionDto>(`/api/revisions/${revisionId}/submit`);
+}
+
+export function useSubmitRevision(cantileverId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: submitRevision,
+    onSuccess: (_review, revisionId) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: revisionKeys.list(cantileverId) }),
+        queryClient.invalidateQueries({ queryKey: revisionKeys.detail(revisionId) }),
+        queryClient.invalidateQueries({ queryKey: cantileverKeys.detail(cantileverId) }),
+        queryClient.invalidateQueries({ queryKey: projectKeys.all }),
+      ]),
+  });
+}

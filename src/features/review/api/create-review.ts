@@ -1,0 +1,30 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiPost } from '../../../lib/api-client';
+import type { RevisionDto } from '../../../../shared/schemas/api';
+import { revisionKeys } from '../../revisions/api/revision-keys';
+import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
+import { projectKeys } from '../../projects/api/project-keys';
+
+export interface ReviewBody {
+  decision: 'approve' | 'request-changes';
+  comment: string;
+}
+
+export function createReview(revisionId: number, body: ReviewBody): Promise<RevisionDto> {
+  return apiPost<RevisionDto>(`/api/revisions/${revisionId}/reviews`, { ...body });
+}
+
+/** The engineer's decision; afterwards the revision, its timeline and its cantilever are fetched again. */
+export function useCreateReview(revisionId: number, cantileverId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ReviewBody) => createReview(revisionId, body),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: revisionKeys.detail(revisionId) }),
+        queryClient.invalidateQueries({ queryKey: revisionKeys.list(cantileverId) }),
+        queryClient.invalidateQueries({ queryKey: cantileverKeys.detail(cantileverId) }),
+        queryClient.invalidateQueries({ queryKey: projectKeys.all }),
+      ]),
+  });
+}

@@ -1,0 +1,46 @@
+import type { DesignResult } from '../../../../shared/engine/types';
+import type { DesignDocument } from '../../../../shared/schemas/design';
+import { formatQuantity, type Quantity } from '../../../../shared/engine/units';
+
+function largest<T>(items: T[], value: (item: T) => number): T | undefined {
+  return items.reduce<T | undefined>((best, item) => (best === undefined || value(item) > value(best) ? item : best), undefined);
+}
+
+function Item({ term, value, detail }: { term: string; value: Quantity | string | null | undefined; detail?: string }) {
+  return (
+    <div className="rounded border border-concrete-200 bg-concrete-50 p-2">
+      <dt className="text-xs text-concrete-600">{term}</dt>
+      <dd className="font-mono text-base tabular-nums text-concrete-900">
+        {value === null || value === undefined ? 'not available' : typeof value === 'string' ? value : formatQuantity(value)}
+      </dd>
+      {detail && <dd className="text-xs text-concrete-600">{detail}</dd>}
+    </div>
+  );
+}
+
+/** Root moment, tip deflection, frequency and the connection at the pier, as stored with the revision. */
+export function KeyResults({ result, input }: { result: DesignResult; input: DesignDocument }) {
+  const combos = result.member.combinations;
+  const moment = largest(combos, (c) => c.rootMoment.value);
+  const deflection = largest(combos, (c) => c.tipDeflection.value);
+  const live = result.member.cases.L;
+  const connection = result.connection;
+  return (
+    <dl className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
+      <Item term="Root moment (largest combination)" value={moment?.rootMoment} detail={moment?.name} />
+      <Item term="Tip deflection, live load" value={live?.tipDeflection} detail={live ? 'case L, unfactored' : 'no live load'} />
+      <Item term="Tip deflection (largest combination)" value={deflection?.tipDeflection} detail={deflection?.name} />
+      <Item term="First natural frequency" value={result.member.frequency} />
+      <Item term="Section" value={result.member.section.label} detail={`steel weight ${formatQuantity(result.member.steelWeight)}`} />
+      {connection ? (
+        <>
+          <Item term="Connection" value={connection.arrangement === 'post-base' ? 'post on a base plate' : 'plate on the pier face'} detail={connection.combination} />
+          <Item term="Anchor tension per rod" value={connection.anchorTensionPerRod} detail={`bearing length ${formatQuantity(connection.bearingLength)}`} />
+          <Item term="Plate thickness required" value={connection.requiredThickness} detail={`provided ${input.connection?.plate.thickness ?? 'not given'}`} />
+        </>
+      ) : (
+        <Item term="Connection" value="not designed in this revision" />
+      )}
+    </dl>
+  );
+}

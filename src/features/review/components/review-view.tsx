@@ -1,0 +1,75 @@
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import type { RevisionDto, UserDto } from '../../../../shared/schemas/api';
+import { paths } from '../../../config/paths';
+import { CautionNote } from '../../history/components/caution-note';
+import { ReviewStateBadge } from '../../history/components/review-state-badge';
+import { VerdictWord } from '../../history/components/verdict-word';
+import { CommentsThread } from '../../history/components/comments-thread';
+import { formatDateTime } from '../../history/utils/format';
+import { CheckList } from './check-list';
+import { KeyResults } from './key-results';
+import { BaseChanges } from './base-changes';
+import { DecisionPanel } from './decision-panel';
+import { ReviewRecord } from './review-record';
+
+function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
+  return (
+    <section aria-labelledby={id} className="rounded border border-concrete-200 bg-white p-4">
+      <h2 id={id} className="mb-2 text-lg font-semibold text-concrete-900">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+/** An engineer's view of one revision: verdict, checks, key results, changes, comments, decision. */
+export function ReviewView({ revision, user }: { revision: RevisionDto; user: UserDto | null | undefined }) {
+  const failing = revision.result.checks.filter((c) => !c.ok || c.ratio === null).length;
+  return (
+    <div className="space-y-4">
+      <header className="space-y-1">
+        <nav aria-label="Breadcrumb" className="text-sm text-concrete-600">
+          <Link to={paths.history(revision.cantileverId)} className="underline hover:text-oxide-700">History</Link>
+          {' · '}
+          <Link to={paths.desk(revision.cantileverId)} className="underline hover:text-oxide-700">Design desk</Link>
+        </nav>
+        <h1 className="flex flex-wrap items-center gap-3 text-xl font-semibold text-concrete-900">
+          Review of revision {revision.number}
+          <ReviewStateBadge state={revision.reviewState} />
+        </h1>
+        <p className="text-sm text-concrete-800">“{revision.message}”</p>
+        <p className="text-xs text-concrete-600">
+          {revision.authorName} · {formatDateTime(revision.createdAt)} ·{' '}
+          {revision.baseRevisionNumber === null ? 'first revision' : `based on revision ${revision.baseRevisionNumber}`} · engine {revision.engineVersion}
+        </p>
+      </header>
+      <CautionNote />
+      <Section id="review-decision" title="Decision">
+        <DecisionPanel revision={revision} user={user} />
+      </Section>
+      <Section id="review-verdict" title="Verdict and checks">
+        <p className="mb-2 text-sm">
+          <VerdictWord ok={revision.result.ok} />{' '}
+          <span className="text-concrete-700">
+            {failing === 0 ? `All ${revision.result.checks.length} checks pass.` : `${failing} of ${revision.result.checks.length} checks fail or were not computed.`}{' '}
+            {revision.result.method}, results in {revision.result.units} units.
+          </span>
+        </p>
+        <CheckList checks={revision.result.checks} />
+      </Section>
+      <Section id="review-key" title="Key results">
+        <KeyResults result={revision.result} input={revision.input} />
+      </Section>
+      <Section id="review-changes" title={revision.baseRevisionNumber === null ? 'Changes' : `Changes from revision ${revision.baseRevisionNumber}`}>
+        <BaseChanges revision={revision} />
+      </Section>
+      <Section id="review-comments" title="Comments">
+        <CommentsThread revisionId={revision.id} />
+      </Section>
+      <Section id="review-record" title="Review record">
+        <ReviewRecord reviews={revision.reviews} />
+      </Section>
+      <CautionNote />
+    </div>
+  );
+}

@@ -1,0 +1,115 @@
+/**
+ * The design desk in a real browser: each input group edited, a check flipping from pass to fail
+ * and back, US / SI with the same physical values, a shape picked from the browser.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startE2E, type E2E } from '../helpers/e2e';
+
+let e2e: E2E;
+let page: Page;
+
+beforeAll(async () => {
+  e2e = await startE2E();
+  const session = await e2e.newSession();
+  page = session.page;
+  await e2e.signInAs(session.context, 'engineer');
+  await page.goto('/projects');
+  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
+  await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+  await page.getByTestId('tip-deflection').waitFor();
+});
+
+afterAll(async () => {
+  await e2e?.close();
+});
+
+const field = (label: string) => page.getByLabel(label, { exact: true });
+const word = (id: string) => page.locator(`tr[data-check="${id}"]`).getAttribute('data-word');
+const tip = async () => (await page.getByTestId('tip-deflection').textContent()) ?? '';
+
+/** Waits until the desk has recomputed the newest inputs. */
+async function settled() {
+  await expect.poll(async () => page.getByTestId('recompute-status').textContent(), { timeout: 10_000 }).toMatch(/^Up to date/);
+}
+
+describe('design desk', () => {
+  it('Reach: a long reach makes the live deflection check fail, and restoring it passes again', async () => {
+    const length = await field('Length (root to tip)').inputValue();
+    expect(await word('member.deflection.live')).not.toBe('exceeds');
+    await field('Length (root to tip)').fill('30 ft');
+    await expect.poll(() => word('member.deflection.live'), { timeout: 10_000 }).toBe('exceeds');
+    expect(await page.getByTestId('verdict').textContent()).toContain('Does not pass');
+    await e2e.screenshot(page, 'desk-failing');
+    await field('Length (root to tip)').fill(length);
+    await expect.poll(() => word('member.deflection.live'), { timeout: 10_000 }).not.toBe('exceeds');
+  });
+
+  it('Reach: a plain number is refused next to the field, without NaN', async () => {
+    const length = await field('Length (root to tip)').inputValue();
+    await field('Length (root to tip)').fill('12');
+    await page.getByText('Length (root to tip) needs a unit, got "12"').first().waitFor();
+    expect(await page.locator('body').textContent()).not.toContain('NaN');
+    await field('Length (root to tip)').fill(length);
+    await settled();
+  });
+
+  it('Support: a thin plate fails the plate thickness check, and back; "no connection" drops the plate checks', async () => {
+    const thickness = await field('Thickness').inputValue();
+    await field('Thickness').fill('0.25 in');
+    await expect.poll(() => word('plate.thickness'), { timeout: 10_000 }).toBe('exceeds');
+    await field('Thickness').fill(thickness);
+    await expect.poll(() => word('plate.thickness'), { timeout: 10_000 }).not.toBe('exceeds');
+    await page.getByLabel('Held at the pier by').selectOption('none');
+    await expect.poll(() => page.locator('tr[data-check^="plate."]').count(), { timeout: 10_000 }).toBe(0);
+    await page.getByLabel('Held at the pier by').selectOption('post-base');
+    await expect.poll(() => page.locator('tr[data-check="plate.thickness"]').count(), { timeout: 10_000 }).toBe(1);
+  });
+
+  it('Loads: a preset adds a load row with its source and changes the tip deflection; removing it restores', async () => {
+    const before = await tip();
+    const rows = page.getByRole('button', { name: /^Remove area load/ });
+    const count = await rows.count();
+    await page.getByRole('button', { name: 'Add preset: Residential deck live load, 60 psf' }).click();
+    await expect.poll(() => rows.count()).toBe(count + 1);
+    await expect.poll(tip, { timeout: 10_000 }).not.toBe(before);
+    await rows.nth(count).click();
+    await expect.poll(tip, { timeout: 10_000 }).toBe(before);
+  });
+
+  it('Section: picks a shape from the shapes browser for the member', async () => {
+    await page.getByRole('button', { name: 'Browse shapes for the member' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Pick a shape' });
+    await dialog.getByRole('searchbox').fill('W10X33');
+    await dialog.locator('tr[data-shape="W10X33"]').click();
+    await dialog.getByText('Torsion constant J').waitFor();
+    await e2e.screenshot(page, 'shape-picker');
+    await dialog.getByRole('button', { name: 'Use for member' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(await field('Shape').inputValue()).toBe('W10X33');
+    await settled();
+    await page.getByLabel('Kind of section').selectOption('plates');
+    await field('Depth at the root').waitFor();
+    await field('Web thickness').fill('0.3125 in');
+    await settled();
+    expect(await page.locator('#member-sketch-desc').textContent()).toMatch(/built-up/i);
+  });
+
+  it('Units: SI shows the same physical values, and US again restores the text', async () => {
+    const lengthUS = await field('Length (root to tip)').inputValue();
+    const tipUS = await tip();
+    await page.getByRole('radio', { name: 'SI' }).click();
+    await expect.poll(() => field('Length (root to tip)').inputValue()).toMatch(/ m$/);
+    await expect.poll(tip, { timeout: 10_000 }).toMatch(/mm$/);
+    const feet = Number.parseFloat(lengthUS);
+    const metres = Number.parseFloat(await field('Length (root to tip)').inputValue());
+    expect(metres / 0.3048).toBeCloseTo(feet, 3);
+    const inches = Number.parseFloat(tipUS);
+    const mm = Number.parseFloat(await tip());
+    expect(mm / 25.4 / inches).toBeCloseTo(1, 2);
+    await e2e.screenshot(page, 'desk-si');
+    await page.getByRole('radio', { name: 'US' }).click();
+    await expect.poll(() => field('Length (root to tip)').inputValue()).toBe(lengthUS);
+    await expect.poll(tip, { timeout: 10_000 }).toBe(tipUS);
+  });
+});

@@ -1,0 +1,197 @@
+/**
+ * The review path in a real browser against the real server: the architect saves a revision and
+ * submits it, the engineers' e-mail is captured in the outbox, the engineer requests changes with a
+ * comment, the architect revises and submits again, the engineer approves, and Compare shows what
+ * changed. Two browser sessions (architect, engineer); the admin is checked through the API and,
+ * at the end, the Outbox screen in the architect's window after signing in as the admin.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { request, type APIRequestContext, type BrowserContext, type Page } from 'playwright-core';
+import { CAUTION } from '../../shared/engine/types';
+import type { OutboxDto, ProjectDetailDto, ProjectDto } from '../../shared/schemas/api';
+import { DEMO_PASSWORD, demoEmail, startE2E, type E2E } from '../helpers/e2e';
+
+const CANTILEVER = 'East deck, typical beam';
+const ENGINEER = 'Priya Vasquez, PE';
+
+let e2e: E2E;
+let arch: { context: BrowserContext; page: Page };
+let eng: { context: BrowserContext; page: Page };
+let admin: APIRequestContext;
+let cantileverId = 0;
+const lengths: number[] = [];
+
+beforeAll(async () => {
+  e2e = await startE2E();
+  arch = await e2e.newSession();
+  eng = await e2e.newSession();
+  await e2e.signInAs(arch.context, 'architect');
+  await e2e.signInAs(eng.context, 'engineer');
+  admin = await request.newContext({ baseURL: e2e.baseUrl });
+  const login = await admin.post('/api/auth/login', { data: { email: demoEmail('admin'), password: DEMO_PASSWORD } });
+  expect(login.ok()).toBe(true);
+  const projects = (await (await arch.context.request.get(`${e2e.baseUrl}/api/projects`)).json()) as ProjectDto[];
+  const project = (await (await arch.context.request.get(`${e2e.baseUrl}/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
+  cantileverId = project.cantilevers.find((c) => c.name === CANTILEVER)?.id ?? 0;
+  expect(cantileverId).toBeGreaterThan(0);
+});
+
+afterAll(async () => {
+  await admin?.dispose();
+  await e2e?.close();
+});
+
+/** On the desk: change the reach by `deltaFeet` and save a revision with `message`. */
+async function saveOnDesk(page: Page, deltaFeet: number, message: string): Promise<void> {
+  await page.goto(`/cantilevers/${cantileverId}`);
+  await page.getByTestId('tip-deflection').waitFor();
+  const length = page.getByLabel('Length (root to tip)', { exact: true });
+  const feet = Number.parseFloat(await length.inputValue());
+  if (lengths.length === 0) lengths.push(feet);
+  await length.fill(`${feet + deltaFeet} ft`);
+  await page.getByTestId('unsaved').waitFor();
+  await page.getByRole('button', { name: 'Save revision' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Save revision' });
+  await dialog.getByLabel('Message').fill(message);
+  await dialog.getByRole('button', { name: 'Save revision' }).click();
+  await dialog.waitFor({ state: 'detached' });
+  lengths.push(feet + deltaFeet);
+}
+
+/** In the history: submit the latest draft, revision `number`, for review. */
+async function submitLatest(page: Page, number: number, message: string): Promise<void> {
+  await page.goto(`/cantilevers/${cantileverId}/history`);
+  const list = page.getByRole('list', { name: 'Revisions, newest first' });
+  await list.getByText(message).waitFor();
+  const latest = list.getByRole('listitem').first();
+  expect(await latest.getByRole('heading').textContent()).toContain(`Revision ${number}Draft`);
+  await latest.getByRole('button', { name: 'Submit for review' }).click();
+  await page.getByText(`Revision ${number} was submitted for review. The project's engineers were notified.`).waitFor();
+  await latest.getByText('Awaiting review').waitFor();
+}
+
+async function outbox(): Promise<OutboxDto[]> {
+  const res = await admin.get('/api/admin/outbox');
+  expect(res.status()).toBe(200);
+  return (await res.json()) as OutboxDto[];
+}
+
+/** The engineer opens the review of revision `number` from the history. */
+async function openReview(number: number): Promise<void> {
+  const page = eng.page;
+  await page.goto(`/cantilevers/${cantileverId}/history`);
+  await page.getByRole('link', { name: `Open review of revision ${number}` }).click();
+  await page.getByRole('heading', { name: new RegExp(`^Review of revision ${number}`) }).waitFor();
+  expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
+  expect(await page.locator('tr[data-check]').count()).toBeGreaterThan(4);
+}
+
+describe('review flow: submit, request changes, revise, approve, compare', () => {
+  it('the architect saves a revision and submits it; the engineer’s e-mail is captured', async () => {
+    await saveOnDesk(arch.page, 1, 'Reach one foot longer for the view');
+    await submitLatest(arch.page, 2, 'Reach one foot longer for the view');
+    const subject = `Review requested: ${CANTILEVER}, revision 2`;
+    await expect.poll(async () => (await outbox()).find((m) => m.subject === subject)?.status, { timeout: 15_000 }).toBe('sent');
+    const mail = (await outbox()).find((m) => m.subject === subject) as OutboxDto;
+    expect(mail.to).toEqual([demoEmail('engineer')]);
+    expect(mail.text).toContain('Reach one foot longer for the view');
+  });
+
+  it('the engineer requests changes with a comment; the form checks the comment first', async () => {
+    await openReview(2);
+    const page = eng.page;
+    await e2e.screenshot(page, 'review');
+    const form = page.getByRole('form', { name: 'Review decision' });
+    await form.getByRole('radio', { name: 'Request changes' }).check();
+    await form.getByRole('button', { name: 'Record decision' }).click();
+    await form.getByText('Comment is required when you request changes: say what should change').waitFor();
+    await form.getByLabel('Comment').fill('The tip moves too much at this reach; bring it back or deepen the section.');
+    await form.getByRole('button', { name: 'Record decision' }).click();
+    await page.getByText('You requested changes on revision 2.').waitFor();
+    await page.getByText(new RegExp(`^Changes requested by ${ENGINEER} on `)).waitFor();
+    expect(await page.getByRole('form', { name: 'Review decision' }).count()).toBe(0);
+    await expect
+      .poll(async () => (await outbox()).some((m) => m.subject === `Revision 2 of ${CANTILEVER} was returned with changes requested`))
+      .toBe(true);
+  });
+
+  it('the architect sees the request, revises and submits again', async () => {
+    const page = arch.page;
+    await page.goto(`/cantilevers/${cantileverId}/history`);
+    const second = page.getByRole('list', { name: 'Revisions, newest first' }).getByRole('listitem').first();
+    await second.getByText('Changes requested').waitFor();
+    await second.getByRole('link', { name: 'Review record' }).click();
+    await page.getByText('The tip moves too much at this reach; bring it back or deepen the section.').first().waitFor();
+    expect(await page.getByRole('radio').count()).toBe(0);
+
+    await saveOnDesk(page, -2, 'Shorter reach after review');
+    await submitLatest(page, 3, 'Shorter reach after review');
+    await expect.poll(async () => (await outbox()).some((m) => m.subject === `Review requested: ${CANTILEVER}, revision 3`), { timeout: 15_000 }).toBe(true);
+  });
+
+  it('the engineer approves; the approval is final', async () => {
+    await openReview(3);
+    const page = eng.page;
+    const changes = page.getByRole('table', { name: /Changed inputs/ });
+    await changes.waitFor();
+    expect(await changes.getByRole('row', { name: /Reach: length/ }).count()).toBe(1);
+    const form = page.getByRole('form', { name: 'Review decision' });
+    await form.getByRole('radio', { name: 'Approve revision 3' }).check();
+    await form.getByRole('button', { name: 'Record decision' }).click();
+    await page.getByText('You approved revision 3.').waitFor();
+    await page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)).waitFor();
+    expect(await page.getByRole('radio').count()).toBe(0);
+    await page.reload();
+    await page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)).waitFor();
+    expect(await page.getByText(/An approval is final/).count()).toBe(1);
+    await e2e.screenshot(page, 'review-approved');
+  });
+
+  it('the history shows the states, and Compare shows the change between the two reviewed revisions', async () => {
+    const page = eng.page;
+    await page.goto(`/cantilevers/${cantileverId}/history`);
+    const items = page.getByRole('list', { name: 'Revisions, newest first' }).getByRole('listitem');
+    await items.first().getByText('Approved').waitFor();
+    expect(await items.nth(1).getByText('Changes requested').count()).toBe(1);
+    await page.getByRole('checkbox', { name: 'Pick revision 3 for compare' }).check();
+    await page.getByRole('checkbox', { name: 'Pick revision 2 for compare' }).check();
+    await e2e.screenshot(page, 'history');
+    await page.getByRole('link', { name: 'Compare revision 2 with 3' }).click();
+    await page.getByRole('heading', { name: 'Compare revision 2 with revision 3' }).waitFor();
+
+    const row = page.getByRole('table', { name: /Changed inputs/ }).getByRole('row', { name: /Reach: length/ });
+    const cells = await row.getByRole('cell').allTextContents();
+    expect(cells.map((c) => Number.parseFloat(c))).toEqual([lengths[1], lengths[2]]);
+    const ratios = page.getByRole('table', { name: /Check ratios/ });
+    expect(await ratios.locator('tbody tr').count()).toBeGreaterThan(4);
+    // a shorter reach bends the root less
+    expect(await ratios.locator('tr[data-check="member.flexure"]').textContent()).toContain('better');
+    expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
+    await page.locator('.recharts-line').first().waitFor();
+    expect(await page.locator('.recharts-line').count()).toBe(4);
+    expect(await page.getByText(/^Under .+\. Revision 2: reach /).count()).toBe(1);
+    await e2e.screenshot(page, 'compare');
+  });
+
+  it('the admin reads both requests and both decisions on the Outbox screen', async () => {
+    const page = arch.page;
+    await e2e.signInAs(arch.context, 'admin');
+    await page.goto('/admin/outbox');
+    const table = page.getByRole('table', { name: /E-mails captured/ });
+    await table.waitFor();
+    for (const subject of [
+      `Review requested: ${CANTILEVER}, revision 2`,
+      `Revision 2 of ${CANTILEVER} was returned with changes requested`,
+      `Review requested: ${CANTILEVER}, revision 3`,
+      `Revision 3 of ${CANTILEVER} was approved`,
+    ]) {
+      await expect.poll(async () => {
+        await page.getByRole('button', { name: 'Refresh' }).click();
+        return table.getByRole('rowheader', { name: subject }).count();
+      }, { timeout: 15_000 }).toBe(1);
+    }
+    await page.getByRole('button', { name: `Show text of “Review requested: ${CANTILEVER}, revision 3”` }).click();
+    await page.getByText('Message: Shorter reach after review').waitFor();
+    await e2e.screenshot(page, 'outbox');
+  });
+});

@@ -1,0 +1,88 @@
+/**
+ * The walking skeleton in a real browser: sign in, open the demo cantilever, change the length and
+ * see the tip deflection change, save a revision with a message, reload and find it listed.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { DEMO_PASSWORD, demoEmail, startE2E, type E2E } from '../helpers/e2e';
+
+let e2e: E2E;
+let page: Page;
+let context: BrowserContext;
+
+beforeAll(async () => {
+  e2e = await startE2E();
+  ({ page, context } = await e2e.newSession());
+});
+
+afterAll(async () => {
+  await e2e?.close();
+});
+
+async function tipText(): Promise<string> {
+  return (await page.getByTestId('tip-deflection').textContent()) ?? '';
+}
+
+describe('skeleton: sign in, edit, save, reload', () => {
+  it('sends a signed-out person to sign in, with plain errors, then back', async () => {
+    await page.goto('/projects');
+    await page.waitForURL(/\/sign-in\?next=/);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect.poll(() => page.getByText('E-mail must be an e-mail address').count()).toBe(1);
+    await page.getByLabel('E-mail').fill(demoEmail('engineer'));
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByText('That e-mail and password do not match an active account.').waitFor();
+    await e2e.screenshot(page, 'sign-in');
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(/\/projects$/);
+    await page.getByRole('heading', { name: 'Projects' }).waitFor();
+    expect(await page.getByTestId('who').textContent()).toContain('engineer');
+    await e2e.screenshot(page, 'projects');
+    expect(context.pages().length).toBe(1);
+  });
+
+  it('opens the demo cantilever on the desk with a computed result and the caution', async () => {
+    await page.getByRole('link', { name: /Harbor View Studio/ }).click();
+    await page.getByRole('heading', { name: 'Harbor View Studio' }).waitFor();
+    await e2e.screenshot(page, 'project');
+    await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+    await page.getByTestId('tip-deflection').waitFor();
+    expect(await page.getByTestId('caution').textContent()).toContain('licensed engineer');
+    expect(await page.getByTestId('verdict').textContent()).toMatch(/checks/);
+    expect(await page.locator('tr[data-check]').count()).toBeGreaterThan(4);
+  });
+
+  it('changes the length and sees the tip deflection change', async () => {
+    const before = await tipText();
+    const length = page.getByLabel('Length (root to tip)', { exact: true });
+    const old = await length.inputValue();
+    const feet = Number.parseFloat(old);
+    await length.fill(`${feet + 2} ft`);
+    await expect.poll(tipText, { timeout: 10_000 }).not.toBe(before);
+    const tipBefore = Number.parseFloat(before);
+    const tipAfter = Number.parseFloat(await tipText());
+    expect(tipAfter).toBeGreaterThan(tipBefore);
+    await page.getByTestId('unsaved').waitFor();
+    await e2e.screenshot(page, 'desk');
+  });
+
+  it('saves a revision with a message and finds it listed after a reload', async () => {
+    const baseBefore = (await page.getByTestId('base-revision').textContent()) ?? '';
+    await page.getByRole('button', { name: 'Save revision' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Save revision' });
+    await dialog.getByRole('button', { name: 'Save revision' }).click();
+    await dialog.getByText('Message is required: describe what changed').waitFor();
+    await dialog.getByLabel('Message').fill('Reach two feet longer for the view');
+    await dialog.getByRole('button', { name: 'Save revision' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await expect.poll(async () => page.getByTestId('base-revision').textContent()).not.toBe(baseBefore);
+    expect(await page.getByTestId('unsaved').count()).toBe(0);
+    await page.reload();
+    await page.getByTestId('revision-list').getByText('Reach two feet longer for the view').waitFor();
+    const length = await page.getByLabel('Length (root to tip)', { exact: true }).inputValue();
+    expect(Number.parseFloat(length)).toBeGreaterThan(0);
+    expect(await page.getByTestId('unsaved').count()).toBe(0);
+  });
+});

@@ -1,0 +1,86 @@
+/**
+ * Browser-test harness: the real server (real SQLite file, real fake-SMTP, the built client from
+ * dist/) on a random loopback port, seeded with the demo, and headless Debian Chromium driven by
+ * playwright-core. One harness per test file; close() removes every temporary file.
+ */
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { startServer } from '../../server/start';
+
+export const DEMO_PASSWORD = 'reachline-demo';
+export type DemoRole = 'admin' | 'architect' | 'fabricator' | 'engineer';
+export const demoEmail = (role: DemoRole) => `${role}@reachline.test`;
+
+export const SCREEN_DIR = join(process.cwd(), 'tests', 'output', 'screens');
+
+const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export interface E2E {
+  baseUrl: string;
+  /** A fresh browser context (own cookies) with one page. */
+  newSession(): Promise<{ context: BrowserContext; page: Page }>;
+  /** Signs the context in through the API (cookies shared with its pages). */
+  signInAs(context: BrowserContext, role: DemoRole): Promise<void>;
+  screenshot(page: Page, name: string): Promise<void>;
+  close(): Promise<void>;
+}
+
+export async function startE2E(): Promise<E2E> {
+  const dir = mkdtempSync(join(tmpdir(), 'reachline-e2e-'));
+  const uploadDir = join(dir, 'uploads');
+  mkdirSync(uploadDir, { recursive: true });
+  mkdirSync(SCREEN_DIR, { recursive: true });
+  const server = await startServer({
+    port: 0,
+    databaseUrl: join(dir, 'reachline.sqlite'),
+    uploadDir,
+    dataDir: dir,
+  });
+  const contexts: BrowserContext[] = [];
+  const errors: string[] = [];
+
+  async function newSession() {
+    const profile = mkdtempSync(join(dir, 'profile-'));
+    const context = await chromium.launchPersistentContext(profile, {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: CHROMIUM_ARGS,
+      viewport: { width: 1440, height: 960 },
+      baseURL: server.url,
+    });
+    contexts.push(context);
+    const page = context.pages()[0] ?? (await context.newPage());
+    page.on('pageerror', (err) => errors.push(`pageerror: ${err.message}`));
+    return { context, page };
+  }
+
+  async function signInAs(context: BrowserContext, role: DemoRole) {
+    const res = await context.request.post(`${server.url}/api/auth/login`, {
+      data: { email: demoEmail(role), password: DEMO_PASSWORD },
+    });
+    if (!res.ok()) throw new Error(`sign-in as ${role} failed: ${res.status()} ${await res.text()}`);
+  }
+
+  async function screenshot(page: Page, name: string) {
+    await page.screenshot({ path: join(SCREEN_DIR, `${name}.png`), fullPage: true });
+  }
+
+  async function close() {
+    for (const c of contexts) await c.close().catch(() => undefined);
+    await server.close();
+    rmSync(dir, { recursive: true, force: true });
+    if (errors.length > 0) throw new Error(`uncaught errors in the page:\n${errors.join('\n')}`);
+  }
+
+  return { baseUrl: server.url, newSession, signInAs, screenshot, close };
+}

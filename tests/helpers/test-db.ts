@@ -1,0 +1,64 @@
+/**
+ * A real migrated SQLite database per test file: the migrations run once into a template file
+ * (named by a hash of the migration sources, written atomically so parallel workers can share it),
+ * and each test file gets its own copy in a fresh temporary folder.
+ */
+import { createHash, randomUUID } from 'node:crypto';
+import { copyFileSync, existsSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createDb } from '../../server/db/knex';
+import { migrateLatest } from '../../server/db/migrate';
+
+const MIGRATIONS_DIR = new URL('../../migrations/', import.meta.url);
+
+function templatePath(): string {
+  const hash = createHash('sha256');
+  for (const name of readdirSync(MIGRATIONS_DIR).sort()) {
+    hash.update(name);
+    hash.update(readFileSync(new URL(name, MIGRATIONS_DIR)));
+  }
+  return join(tmpdir(), `reachline-test-template-${hash.digest('hex').slice(0, 16)}.sqlite`);
+}
+
+let template: Promise<string> | null = null;
+
+async function buildTemplate(): Promise<string> {
+  const path = templatePath();
+  if (existsSync(path)) return path;
+  const building = `${path}.${randomUUID()}.tmp`;
+  const db = createDb(building);
+  try {
+    await migrateLatest(db);
+    // Fold the WAL into the main file so one file copy is the whole database.
+    await db.raw('PRAGMA wal_checkpoint(TRUNCATE)');
+    await db.raw('PRAGMA journal_mode = DELETE');
+  } finally {
+    await db.destroy();
+  }
+  renameSync(building, path);
+  for (const suffix of ['-wal', '-shm']) rmSync(`${building}${suffix}`, { force: true });
+  return path;
+}
+
+export interface TestDirs {
+  root: string;
+  databaseUrl: string;
+  uploadDir: string;
+  remove(): void;
+}
+
+/** A temporary folder holding a copy of the migrated template database and an uploads folder. */
+export async function freshTestDirs(): Promise<TestDirs> {
+  template ??= buildTemplate();
+  const source = await template;
+  const root = mkdtempSync(join(tmpdir(), 'reachline-test-'));
+  const databaseUrl = join(root, 'test.sqlite');
+  copyFileSync(source, databaseUrl);
+  return {
+    root,
+    databaseUrl,
+    uploadDir: join(root, 'uploads'),
+    remove: () => rmSync(root, { recursive: true, force: true }),
+  };
+}

@@ -1,0 +1,87 @@
+import { describe, expect, it } from 'vitest';
+import { DesignInputError } from '../../../shared/engine/types';
+import { designSchema } from '../../../shared/schemas/design';
+import { toFieldIssues } from '../../../shared/schemas/quantity';
+import { memberDoc, run } from './design-helpers';
+
+/** The issues of the DesignInputError thrown for a document (fails the test if none is thrown). */
+function issuesOf(doc: Parameters<typeof run>[0]): { path: string; message: string }[] {
+  try {
+    run(doc);
+  } catch (e) {
+    expect(e).toBeInstanceOf(DesignInputError);
+    return (e as DesignInputError).issues;
+  }
+  throw new Error('expected a DesignInputError');
+}
+
+const someLoad = { selfWeight: true, area: [], line: [], point: [] };
+
+describe('what the schema cannot see is refused with a field path', () => {
+  it('an unknown shape', () => {
+    expect(issuesOf(memberDoc({ shape: 'W99X1', loads: someLoad }))).toEqual([
+      { path: 'member.section.shape', message: 'unknown shape "W99X1": not in the shapes table' },
+    ]);
+  });
+
+  it('a point load beyond the tip', () => {
+    const issues = issuesOf(memberDoc({ loads: { ...someLoad, point: [{ case: 'L', value: '200 lbf', at: '8 ft' }, { case: 'L', value: '200 lbf', at: '9 ft' }] } }));
+    expect(issues.map((i) => i.path)).toEqual(['loads.point[1].at']);
+    expect(issues[0].message).toContain('beyond the tip');
+  });
+
+  it('a tip depth not less than the root depth, or too shallow to leave a web', () => {
+    expect(issuesOf(memberDoc({ section: { shape: 'W12X26', tipDepth: '12.2 in' }, loads: someLoad }))[0].path).toBe('member.section.tipDepth');
+    const shallow = issuesOf(memberDoc({ section: { shape: 'W12X26', tipDepth: '1 in' }, loads: someLoad }));
+    expect(shallow[0].path).toBe('member.section.tipDepth');
+    expect(shallow[0].message).toContain('too shallow');
+  });
+
+  it('a taper on a shape that is not a W', () => {
+    expect(issuesOf(memberDoc({ section: { shape: 'HSS8X8X1/2', tipDepth: '6 in' }, loads: someLoad }))[0].message).toContain('W shapes only');
+  });
+
+  it('plates that do not make an I', () => {
+    const plates = { rootDepth: '8 in', tipDepth: '10 in', flangeWidth: '3 in', flangeThickness: '0.5 in', webThickness: '3 in' };
+    expect(issuesOf(memberDoc({ section: { plates }, loads: someLoad })).map((i) => i.path)).toEqual([
+      'member.section.plates.tipDepth',
+      'member.section.plates.webThickness',
+    ]);
+  });
+
+  it('an unbraced length longer than the member', () => {
+    expect(issuesOf(memberDoc({ unbracedLength: '9 ft', loads: someLoad }))[0].path).toBe('member.unbracedLength');
+  });
+
+  it('steel properties outside what the engine covers', () => {
+    expect(issuesOf(memberDoc({ steel: { Fy: '500 ksi' }, loads: someLoad }))[0].path).toBe('member.steel.Fy');
+    expect(issuesOf(memberDoc({ steel: { E: '2900 ksi' }, loads: someLoad }))[0].path).toBe('member.steel.E');
+  });
+
+  it('no load at all', () => {
+    expect(issuesOf(memberDoc({}))[0].path).toBe('loads');
+  });
+
+  it('the schema itself names the field of a negative length (the CLI and API message)', () => {
+    const parsed = designSchema.safeParse({ ...memberDoc({}), member: { ...memberDoc({}).member, length: '-3 ft' } });
+    expect(parsed.success).toBe(false);
+    if (!parsed.success) {
+      expect(toFieldIssues(parsed.error)).toContainEqual({ path: 'member.length', message: 'must be a positive length, got "-3 ft"' });
+    }
+  });
+});
+
+describe('sizes outside what the engine checks', () => {
+  it('a length under 1 ft or over 60 ft, plates out of the weldable range', () => {
+    expect(issuesOf(memberDoc({ length: '1e-30 ft', loads: someLoad }))[0].path).toBe('member.length');
+    expect(issuesOf(memberDoc({ length: '61 ft', loads: someLoad }))[0].path).toBe('member.length');
+    const plates = { rootDepth: '16 in', tipDepth: '8 in', flangeWidth: '1e-9 in', flangeThickness: '0.5 in', webThickness: '0.25 in' };
+    expect(issuesOf(memberDoc({ section: { plates }, loads: someLoad }))[0].path).toBe('member.section.plates.flangeWidth');
+  });
+
+  it('numbers too large to compute fail loudly instead of returning Infinity', () => {
+    const issues = issuesOf(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [{ case: 'L', value: '1e307 kip', at: '8 ft' }] } }));
+    expect(issues[0].path).toBe('(document)');
+    expect(issues[0].message).toContain('not a finite number');
+  });
+});

@@ -1,0 +1,63 @@
+import { render, screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import type { Check } from '../../shared/engine/types';
+import { CheckBoard } from '../../src/features/desk/components/check-board';
+import { Verdict } from '../../src/features/desk/components/verdict';
+import { checkWord, passes, sortWorstFirst, verdictOf } from '../../src/features/desk/lib/check-words';
+
+function check(id: string, ratio: number | null, ok = ratio !== null && ratio <= 1): Check {
+  return {
+    id,
+    title: `Title ${id}`,
+    reference: 'AISC 360-16 F2',
+    combination: '1.2D + 1.6L',
+    demand: ratio === null ? null : { value: ratio * 10, unit: 'kip ft' },
+    capacity: ratio === null ? null : { value: 10, unit: 'kip ft' },
+    ratio,
+    ok,
+  };
+}
+
+describe('check words', () => {
+  it('words each band, and never calls an uncomputed check a pass', () => {
+    expect(checkWord(check('a', 0.3))).toBe('ample');
+    expect(checkWord(check('a', 0.6))).toBe('adequate');
+    expect(checkWord(check('a', 0.95))).toBe('near limit');
+    expect(checkWord(check('a', 1.02))).toBe('exceeds');
+    expect(checkWord(check('a', null))).toBe('not computed');
+    expect(checkWord(check('a', 0.5, false))).toBe('fails');
+    expect(passes(check('a', null, true))).toBe(false);
+  });
+
+  it('sorts worst first: not computed, then failing, then passing by ratio', () => {
+    const sorted = sortWorstFirst([check('low', 0.2), check('over', 1.3), check('none', null), check('near', 0.93), check('worse', 2.1)]);
+    expect(sorted.map((c) => c.id)).toEqual(['none', 'worse', 'over', 'near', 'low']);
+  });
+
+  it('states the verdict in words, counting uncomputed checks as failing', () => {
+    expect(verdictOf([check('a', 0.2), check('b', 0.5)]).sentence).toBe('All 2 checks pass.');
+    const v = verdictOf([check('a', 0.2), check('b', null)]);
+    expect(v.pass).toBe(false);
+    expect(v.sentence).toBe('1 of 2 checks do not pass; 1 of them could not be computed.');
+  });
+});
+
+describe('CheckBoard', () => {
+  it('renders rows worst first with ratio and word beside the bar', () => {
+    render(<CheckBoard checks={[check('flexure', 0.42), check('thickness', 1.15), check('breakout', null)]} />);
+    const rows = screen.getAllByRole('row').slice(1);
+    expect(rows.map((r) => r.getAttribute('data-check'))).toEqual(['breakout', 'thickness', 'flexure']);
+    expect(within(rows[0]).getByText(/not computed/)).toBeInTheDocument();
+    expect(within(rows[1]).getByText('1.15')).toBeInTheDocument();
+    expect(within(rows[1]).getByText(/exceeds/)).toBeInTheDocument();
+    expect(within(rows[2]).getByText('0.42')).toBeInTheDocument();
+    expect(within(rows[2]).getByText('ample')).toBeInTheDocument();
+    expect(within(rows[2]).getByText('4.2 kip·ft')).toBeInTheDocument();
+  });
+
+  it('shows the verdict and the caution together', () => {
+    render(<Verdict checks={[check('a', 0.2), check('b', 1.4)]} stale={false} />);
+    expect(screen.getByTestId('verdict')).toHaveTextContent('Does not pass. 1 of 2 checks do not pass.');
+    expect(screen.getByTestId('caution')).toHaveTextContent('licensed engineer');
+  });
+});
