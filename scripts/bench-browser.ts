@@ -40,13 +40,13 @@ async function main() {
     const page = context.pages()[0] ?? (await context.newPage());
     await page.goto(`/cantilevers/${project.cantilevers[0].id}`);
     await page.getByTestId('tip-deflection').waitFor();
-    const length = page.getByLabel('Length (root to tip)', { exact: true });
+    const length = page.locator('#f-member-length');
     await page.evaluate(() => performance.clearMeasures('desk-redraw'));
     const count = () => page.evaluate(() => performance.getEntriesByName('desk-redraw', 'measure').length);
     for (let i = 0; i < runs; i += 1) {
       const before = await count();
       await length.fill(`${(8 + (i % 6) * 0.5).toFixed(1)} ft`);
-      await page.waitForFunction((n) => performance.getEntriesByName('desk-redraw', 'measure').length > n, before, { timeout: 10_000 });
+      await page.waitForFunction((n) => performance.getEntriesByName('desk-redraw', 'measure').length > n, before, { timeout: 10_000, polling: 20 });
     }
     const samples = await page.evaluate(() => performance.getEntriesByName('desk-redraw', 'measure').map((e) => e.duration));
     const engine = await page.evaluate(() => performance.getEntriesByName('desk-engine', 'measure').map((e) => e.duration));

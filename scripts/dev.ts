@@ -13,7 +13,8 @@ if (apiPort !== '3000') {
 const children: ChildProcess[] = [];
 
 function run(label: string, command: string, args: string[], env: NodeJS.ProcessEnv = process.env): void {
-  const child = spawn(command, args, { stdio: 'inherit', env });
+  // Own process group, so stopping kills npx's grandchildren (vite, the tsx watcher) too.
+  const child = spawn(command, args, { stdio: 'inherit', env, detached: true });
   children.push(child);
   child.on('exit', (code, signal) => {
     console.log(`[dev] ${label} stopped (${signal ?? `exit ${code}`}); stopping the rest.`);
@@ -25,7 +26,14 @@ let stopping = false;
 function shutdown(code: number): void {
   if (stopping) return;
   stopping = true;
-  for (const child of children) if (child.exitCode === null && child.pid) child.kill('SIGTERM');
+  for (const child of children) {
+    if (child.exitCode !== null || !child.pid) continue;
+    try {
+      process.kill(-child.pid, 'SIGTERM');
+    } catch {
+      child.kill('SIGTERM');
+    }
+  }
   setTimeout(() => process.exit(code), 500).unref();
 }
 

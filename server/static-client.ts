@@ -11,7 +11,8 @@ export function serveClient(app: Express, distDir: string): void {
   const index = join(distDir, 'index.html');
   app.use(
     '/assets',
-    express.static(join(distDir, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: true }),
+    // A missing hashed asset is a 404, never the page (a browser would try to run HTML as a module).
+    express.static(join(distDir, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: false }),
   );
   app.use(express.static(distDir, { index: false, maxAge: 0 }));
   app.get('/{*splat}', (req, res, next) => {

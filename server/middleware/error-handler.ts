@@ -8,6 +8,7 @@ import { HttpError } from '../lib/http-error';
 interface BodyParserError {
   type?: string;
   status?: number;
+  statusCode?: number;
   expose?: boolean;
 }
 
@@ -33,6 +34,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, _req, res, next)
     res.status(400).json({
       error: { code: 'invalid_json', message: 'The request body is not valid JSON.', issues: [{ path: '(body)', message: 'is not valid JSON' }] },
     });
+    return;
+  }
+  if (parserError && typeof parserError === 'object' && (parserError.status ?? parserError.statusCode) === 404) {
+    // serve-static: a missing file under /assets.
+    res.status(404).json({ error: { code: 'not_found', message: 'No such file.', issues: [] } });
     return;
   }
   if (parserError && typeof parserError === 'object' && parserError.expose && typeof parserError.status === 'number' && parserError.status < 500) {

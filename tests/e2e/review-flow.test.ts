@@ -54,7 +54,7 @@ async function saveOnDesk(page: Page, deltaFeet: number, message: string): Promi
   const dialog = page.getByRole('dialog', { name: 'Save revision' });
   await dialog.getByLabel('Message').fill(message);
   await dialog.getByRole('button', { name: 'Save revision' }).click();
-  await dialog.waitFor({ state: 'detached' });
+  await dialog.waitFor({ state: 'detached', timeout: 8000 }).catch(async (e) => { console.log('DIALOG', await dialog.textContent()); await e2e.screenshot(page, 'debug-dialog'); throw e; });
   lengths.push(feet + deltaFeet);
 }
 

@@ -9,6 +9,8 @@ describe('saving revisions', () => {
   afterAll(async () => env.close());
 
   const url = () => `/api/cantilevers/${env.cantileverId}/revisions`;
+  const latestNumber = async () =>
+    Number(((await env.db('revisions').where({ cantilever_id: env.cantileverId }).max({ n: 'number' })) as { n: number }[])[0].n);
 
   it('numbers revisions per cantilever and records the base, the author and the engine result', async () => {
     const architect = await env.login('architect');
@@ -41,14 +43,34 @@ describe('saving revisions', () => {
     expect(nullBase.status).toBe(409);
   });
 
+  it('lets exactly one of two simultaneous saves from the same base win', async () => {
+    const [architect, engineer] = [await env.login('architect'), await env.login('engineer')];
+    const latest = (await architect.get(url())).body[0].number as number;
+    const a = baseDesign();
+    a.member.length = '7.25 ft';
+    const b = baseDesign();
+    b.member.length = '7.75 ft';
+    const [ra, rb] = await Promise.all([
+      architect.post(url()).send({ baseRevision: latest, message: 'A', input: a }),
+      engineer.post(url()).send({ baseRevision: latest, message: 'B', input: b }),
+    ]);
+    expect([ra.status, rb.status].sort()).toEqual([201, 409]);
+    const winner = ra.status === 201 ? ra : rb;
+    const loser = ra.status === 201 ? rb : ra;
+    expect(winner.body.number).toBe(latest + 1);
+    expect(loser.body.latest.number).toBe(latest + 1);
+    // Put the cantilever back on the shared fixture's design for the tests below.
+    await architect.post(url()).send({ baseRevision: latest + 1, message: 'Back to 7.5 ft', input: { ...baseDesign(), member: { ...baseDesign().member, length: '7.5 ft' } } }).expect(201);
+  });
+
   it('answers 400 naming the field for an invalid document', async () => {
     const engineer = await env.login('engineer');
     const input = { ...baseDesign(), member: { ...baseDesign().member, length: '-3 ft' } };
-    const res = await engineer.post(url()).send({ baseRevision: 2, message: 'bad', input });
+    const res = await engineer.post(url()).send({ baseRevision: await latestNumber(), message: 'bad', input });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_input');
     expect(res.body.error.issues).toContainEqual({ path: 'input.member.length', message: expect.stringContaining('-3 ft') });
-    const noMessage = await engineer.post(url()).send({ baseRevision: 2, message: ' ', input: baseDesign() });
+    const noMessage = await engineer.post(url()).send({ baseRevision: await latestNumber(), message: ' ', input: baseDesign() });
     expect(noMessage.body.error.issues[0].path).toBe('message');
   });
 
@@ -56,14 +78,14 @@ describe('saving revisions', () => {
     const engineer = await env.login('engineer');
     const input = baseDesign();
     input.member.section = { shape: 'W99X999' };
-    const res = await engineer.post(url()).send({ baseRevision: 2, message: 'unknown shape', input });
+    const res = await engineer.post(url()).send({ baseRevision: await latestNumber(), message: 'unknown shape', input });
     expect(res.status).toBe(400);
     expect(res.body.error.issues[0].path).toBe('input.member.section.shape');
   });
 
   it('refuses a design save by an admin (403)', async () => {
     const admin = await env.login('admin');
-    const res = await admin.post(url()).send({ baseRevision: 2, message: 'admin edit', input: baseDesign() });
+    const res = await admin.post(url()).send({ baseRevision: await latestNumber(), message: 'admin edit', input: baseDesign() });
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/admin/);
   });
@@ -73,7 +95,7 @@ describe('saving revisions', () => {
     const input = (await architect.get(url())).body[0];
     const latest = (await architect.get(`/api/revisions/${input.id}`)).body.input;
     latest.connection.plate.thickness = '2 in';
-    const res = await architect.post(url()).send({ baseRevision: 2, message: 'thicker plate', input: latest });
+    const res = await architect.post(url()).send({ baseRevision: await latestNumber(), message: 'thicker plate', input: latest });
     expect(res.status).toBe(403);
     expect(res.body.error.issues).toEqual([{ path: 'input.connection.plate.thickness', message: expect.stringContaining('connection') }]);
   });
@@ -83,21 +105,21 @@ describe('saving revisions', () => {
     const latest = (await fabricator.get(`/api/revisions/${(await fabricator.get(url())).body[0].id}`)).body.input;
     const member = structuredClone(latest);
     member.member.section.shape = 'W12X30';
-    const refused = await fabricator.post(url()).send({ baseRevision: 2, message: 'heavier beam', input: member });
+    const refused = await fabricator.post(url()).send({ baseRevision: await latestNumber(), message: 'heavier beam', input: member });
     expect(refused.status).toBe(403);
     expect(refused.body.error.issues[0].path).toBe('input.member.section.shape');
     const plate = structuredClone(latest);
     plate.connection.plate.thickness = '2 in';
-    const saved = await fabricator.post(url()).send({ baseRevision: 2, message: 'Plate to 2 in', input: plate });
+    const saved = await fabricator.post(url()).send({ baseRevision: await latestNumber(), message: 'Plate to 2 in', input: plate });
     expect(saved.status).toBe(201);
-    expect(saved.body.number).toBe(3);
+    expect(saved.body.number).toBe(5);
     expect(saved.body.input.connection.plate.thickness).toBe('2 in');
   });
 
   it('lets anyone with a design role switch the display units', async () => {
     const fabricator = await env.login('fabricator');
     const latest = (await fabricator.get(`/api/revisions/${(await fabricator.get(url())).body[0].id}`)).body.input;
-    const res = await fabricator.post(url()).send({ baseRevision: 3, message: 'Show SI', input: { ...latest, units: 'SI' } });
+    const res = await fabricator.post(url()).send({ baseRevision: await latestNumber(), message: 'Show SI', input: { ...latest, units: 'SI' } });
     expect(res.status).toBe(201);
     expect(res.body.result.units).toBe('SI');
   });
@@ -130,7 +152,7 @@ describe('saving revisions', () => {
     const project = await fabricator.get(`/api/projects/${env.projectId}/plate-schedule.csv`).expect(200);
     const projectLines = project.text.trimEnd().split('\r\n');
     expect(projectLines).toHaveLength(2);
-    expect(projectLines[1]).toMatch(/^Test beam \(rev 4\),post-base,24 x 16 x 2,/);
+    expect(projectLines[1]).toMatch(/^Test beam \(rev 6\),post-base,24 x 16 x 2,/);
     const outsider = await env.login('outsider');
     await outsider.get(`/api/revisions/${env.revisionId}/plate-schedule.csv`).expect(404);
     await outsider.get(`/api/projects/${env.projectId}/plate-schedule.csv`).expect(404);

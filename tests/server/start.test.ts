@@ -88,6 +88,8 @@ describe('startServer', () => {
     const asset = await fetch(`${server.url}/assets/index-a1b2c3.js`);
     expect(asset.status).toBe(200);
     expect(asset.headers.get('cache-control')).toMatch(/immutable/);
+    const missingAsset = await fetch(`${server.url}/assets/index-000000.js`);
+    expect(missingAsset.status).toBe(404);
     const page = await fetch(`${server.url}/projects/1/cantilevers/2`);
     expect(page.status).toBe(200);
     expect(await page.text()).toContain('<div id="root">');

@@ -22,19 +22,35 @@ export interface CheckContext {
   combos: CombinationResponse[];
 }
 
+export interface Worst {
+  ratio: number;
+  combo: number;
+  node: number;
+  /** The first node with no positive capacity (a section outside the clause), or -1. */
+  noCapacity: number;
+}
+
 /** The node and combination where demand / capacity is largest. */
 export function worstRatio(
   combos: readonly CombinationResponse[],
   demandOf: (r: Response, i: number) => number,
   capacityAt: (i: number) => number,
   nodes: number,
-): { ratio: number; combo: number; node: number } {
-  let best = { ratio: 0, combo: 0, node: 0 };
-  for (let c = 0; c < combos.length; c++) {
-    for (let i = 0; i < nodes; i++) {
-      const cap = capacityAt(i);
-      const ratio = cap > 0 ? demandOf(combos[c].response, i) / cap : Number.POSITIVE_INFINITY;
-      if (ratio > best.ratio) best = { ratio, combo: c, node: i };
+): Worst {
+  const best: Worst = { ratio: 0, combo: 0, node: 0, noCapacity: -1 };
+  for (let i = 0; i < nodes; i++) {
+    const cap = capacityAt(i);
+    if (!(cap > 0)) {
+      if (best.noCapacity < 0) best.noCapacity = i;
+      continue;
+    }
+    for (let c = 0; c < combos.length; c++) {
+      const ratio = demandOf(combos[c].response, i) / cap;
+      if (ratio > best.ratio) {
+        best.ratio = ratio;
+        best.combo = c;
+        best.node = i;
+      }
     }
   }
   return best;

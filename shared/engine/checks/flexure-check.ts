@@ -22,6 +22,7 @@ export function flexureCheck(ctx: CheckContext): Check {
   for (let i = 0; i < nodes; i++) strengths.push(strengthOf(model.props[i]));
   const capacity = (i: number) => available(strengths[i].nominal, method, PHI_B, OMEGA_B);
   const w = worstRatio(ctx.combos, (r, i) => r.M[i], capacity, nodes);
+  if (w.noCapacity >= 0) return noCapacityRow(ctx, strengths[w.noCapacity], w.noCapacity);
   const s = strengths[w.node];
   const combo = ctx.combos[w.combo];
   const notes = [
@@ -42,5 +43,22 @@ export function flexureCheck(ctx: CheckContext): Check {
     note: notes.join('; '),
   };
   if (!section.prismatic) check.at = quantity(model.grid.x[w.node], 'length', units);
+  return check;
+}
+
+/** A section the clauses give no strength (e.g. a web far beyond F13.2): failed, not computed. */
+function noCapacityRow(ctx: CheckContext, s: Strength, node: number): Check {
+  const check: Check = {
+    id: 'member.flexure',
+    title: 'Bending',
+    reference: `AISC 360-16 ${s.clause}`,
+    combination: null,
+    demand: null,
+    capacity: null,
+    ratio: null,
+    ok: false,
+    note: `no flexural strength could be computed for this section (${s.outOfScope ?? s.limitState}); use a stockier web or flange`,
+  };
+  if (!ctx.section.prismatic) check.at = quantity(ctx.model.grid.x[node], 'length', ctx.units);
   return check;
 }

@@ -31,7 +31,7 @@ export function hssFlexure(p: SectionProps, o: { Fy: number; E: number; Lb: numb
     } else {
       // Slender web (F7.3(c)): compression flange yielding reduced by Rpg of F5 with aw = 2 h t / (b t), from memory.
       const aw = Math.min(10, (2 * p.h * t) / (b * t));
-      const Rpg = Math.min(1, 1 - (aw / (1200 + 300 * aw)) * (ht - 5.7 * rootEF));
+      const Rpg = Math.max(0, Math.min(1, 1 - (aw / (1200 + 300 * aw)) * (ht - 5.7 * rootEF)));
       list.push({ nominal: Rpg * Fy * p.Sx, clause: 'F7.3(c)', limitState: 'web local buckling' });
     }
   }

@@ -113,7 +113,7 @@ function slenderWeb(p: SectionProps, o: IFlexureOptions, lambdaW: number): Stren
   const { Fy, E, Lb, Cb } = o;
   const rootEF = Math.sqrt(E / Fy);
   const aw = Math.min(10, (p.h * p.tw) / (p.bf * p.tf));
-  const Rpg = Math.min(1, 1 - (aw / (1200 + 300 * aw)) * (lambdaW - 5.7 * rootEF));
+  const Rpg = Math.max(0, Math.min(1, 1 - (aw / (1200 + 300 * aw)) * (lambdaW - 5.7 * rootEF)));
   const list: Strength[] = [{ nominal: Rpg * Fy * p.Sx, clause: 'F5.1', limitState: 'compression flange yielding' }];
   const rt = rtOf(p);
   const Lp = 1.1 * rt * rootEF;

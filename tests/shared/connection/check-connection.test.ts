@@ -107,6 +107,12 @@ describe('checkConnection fails loudly on impossible geometry', () => {
     expect(layout.note).toMatch(/Rod centre to plate edge along N.*longer plate/);
   });
 
+  it('writes the layout note in the person\'s units', () => {
+    const { checks } = checkConnection(connection({ anchors: { offset: '9.5 in' } }), DEMANDS, W12X26_ROOT, { ...LRFD_US, units: 'SI' });
+    // Rod centre to plate edge: has 0.5 in = 12.7 mm (mathjs conversion); needs 1.5 in = 38.1 mm (1 in rod).
+    expect(byId(checks, 'anchors.layout').note).toMatch(/needs 38\.1 mm, has 12\.7 mm/);
+  });
+
   it('rods outside the pier: the concrete checks are not computed and fail', () => {
     // A face plate, so that the shear goes to the rods (a post-base plate would use friction).
     const input = connection({ arrangement: 'face-plate', plate: { N: '30 in' }, anchors: { offset: '13 in' }, pier: { length: '24 in' } });
@@ -180,6 +186,14 @@ describe('checkConnection options', () => {
     expect(lrfd.reference).toMatch(/^AISC 360-16 J3\.6 \(governs\)/);
     expectWithin(asd.capacity?.value, 16.48, 0.002);
     expect(asd.reference).toMatch(/^ACI 318-19 17\.6\.1 \(governs\)/);
+  });
+
+  it('ASD: ACI concrete capacities are phi Nn / 1.6 (METHOD.md; common practice, from memory)', () => {
+    const lrfd = checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks;
+    const asd = checkConnection(connection(), DEMANDS, W12X26_ROOT, ASD_US).checks;
+    for (const id of ['anchors.concreteBreakout', 'anchors.pullout']) {
+      expectWithin(byId(asd, id).capacity?.value, (byId(lrfd, id).capacity?.value as number) / 1.6, 1e-12);
+    }
   });
 
   it('SI results are the same numbers in mm and kN (mathjs conversion)', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { assertFinite } from '../../../shared/engine/finite-guard';
 import { DesignInputError } from '../../../shared/engine/types';
 import { designSchema } from '../../../shared/schemas/design';
 import { toFieldIssues } from '../../../shared/schemas/quantity';
@@ -79,9 +80,16 @@ describe('sizes outside what the engine checks', () => {
     expect(issuesOf(memberDoc({ section: { plates }, loads: someLoad }))[0].path).toBe('member.section.plates.flangeWidth');
   });
 
-  it('numbers too large to compute fail loudly instead of returning Infinity', () => {
-    const issues = issuesOf(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [{ case: 'L', value: '1e307 kip', at: '8 ft' }] } }));
-    expect(issues[0].path).toBe('(document)');
-    expect(issues[0].message).toContain('not a finite number');
+  it('an absurd load gives finite numbers and a loud failure, never Infinity', () => {
+    const r = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [{ case: 'L', value: '1e300 kip', at: '8 ft' }] } }));
+    expect(r.ok).toBe(false);
+    expect(r.checks.filter((c) => !c.ok).map((c) => c.id)).toContain('member.flexure');
+    expect(r.checks.every((c) => Number.isFinite(c.ratio))).toBe(true);
+  });
+
+  it('the last guard refuses a result holding NaN or Infinity anywhere', () => {
+    expect(() => assertFinite({ member: { a: [1, 2, Number.POSITIVE_INFINITY] } })).toThrow(DesignInputError);
+    expect(() => assertFinite({ x: Number.NaN })).toThrow(/not a finite number/);
+    expect(() => assertFinite({ x: [1, { y: 2 }], s: 'text', n: null })).not.toThrow();
   });
 });

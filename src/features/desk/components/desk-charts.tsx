@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from 'react';
+import { memo, useEffect, useMemo, useState } from 'react';
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { DesignResult } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
@@ -12,27 +12,28 @@ interface ChartProps {
   xUnit: string;
   summary: string;
   color: string;
-  limit?: { value: number; label: string } | null;
+  limitValue?: number | null;
+  limitLabel?: string;
 }
 
 const fmt = (value: number, unit: string) => formatQuantity({ value, unit });
 
-function Chart({ title, rows, dataKey, unit, xUnit, summary, color, limit }: ChartProps) {
+const Chart = memo(function Chart({ title, rows, dataKey, unit, xUnit, summary, color, limitValue, limitLabel }: ChartProps) {
   return (
     <figure className="rounded border border-concrete-200 bg-white p-2">
       <div className="mb-1 text-xs font-semibold text-concrete-700">{title} <span className="font-normal text-concrete-500">({unit.replace(/ /g, '·')})</span></div>
-      <div className="h-36" aria-hidden="true">
+      <div className="h-36 [contain:strict]" aria-hidden="true">
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={rows} margin={{ top: 4, right: 12, bottom: 0, left: 0 }}>
             <CartesianGrid stroke="#eeece8" />
-            <XAxis dataKey="x" type="number" domain={[0, 'dataMax']} tick={{ fontSize: 10 }} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
-            <YAxis tick={{ fontSize: 10 }} width={48} reversed={dataKey === 'd'} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
+            <XAxis dataKey="x" type="number" interval={0} domain={[0, 'dataMax']} tick={{ fontSize: 10 }} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
+            <YAxis interval={0} tick={{ fontSize: 10 }} width={48} reversed={dataKey === 'd'} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
             <Tooltip
               formatter={(v) => [fmt(Number(v), unit), title]}
               labelFormatter={(x) => `x = ${fmt(Number(x), xUnit)} from the root`}
               contentStyle={{ fontSize: 12, fontVariantNumeric: 'tabular-nums' }}
             />
-            {limit ? <ReferenceLine y={limit.value} ifOverflow="extendDomain" stroke="#b3261e" strokeDasharray="4 3" label={{ value: limit.label, fontSize: 10, fill: '#b3261e', position: 'insideBottomRight' }} /> : null}
+            {limitValue != null ? <ReferenceLine y={limitValue} ifOverflow="extendDomain" stroke="#b3261e" strokeDasharray="4 3" label={{ value: limitLabel, fontSize: 10, fill: '#b3261e', position: 'insideBottomRight' }} /> : null}
             <Line type="monotone" dataKey={dataKey} stroke={color} strokeWidth={2} dot={false} isAnimationActive={false} />
           </LineChart>
         </ResponsiveContainer>
@@ -40,10 +41,10 @@ function Chart({ title, rows, dataKey, unit, xUnit, summary, color, limit }: Cha
       <figcaption className="sr-only">{summary}</figcaption>
     </figure>
   );
-}
+});
 
 /** Moment, shear and deflection along the member for a chosen case or combination. */
-export function DeskCharts({ result, resultId, limits }: { result: DesignResult; resultId: number; limits: { live: number; total: number } }) {
+export function DeskCharts({ result, resultId, liveLimit, totalLimit }: { result: DesignResult; resultId: number; liveLimit: number; totalLimit: number }) {
   const choices = useMemo(() => seriesChoices(result), [result]);
   const [picked, setPicked] = useState<string | null>(null);
   const key = choices.some((c) => c.key === picked) ? (picked as string) : defaultSeriesKey(result);
@@ -59,11 +60,11 @@ export function DeskCharts({ result, resultId, limits }: { result: DesignResult;
     return () => cancelAnimationFrame(frame);
   }, [resultId]);
 
+  const rows = useMemo(() => (result.stations && choice ? chartRows(result.stations.x, choice.series) : []), [result, choice]);
   if (!result.stations || !choice) return <p className="text-sm text-concrete-600">No station data in this result.</p>;
   const s = result.stations;
-  const rows = chartRows(s.x, choice.series);
   const isLive = choice.kind === 'case' && choice.series.name === 'L';
-  const ratio = isLive ? limits.live : limits.total;
+  const ratio = isLive ? liveLimit : totalLimit;
   const limit = deflectionLimit(result, ratio);
   const words = describeSeries(result, choice.series, limit);
   const summary = choice.kind === 'case' ? result.member.cases[choice.series.name as 'D'] : result.member.combinations.find((c) => c.name === choice.series.name);
@@ -95,7 +96,7 @@ export function DeskCharts({ result, resultId, limits }: { result: DesignResult;
         <Chart title="Moment" rows={rows} dataKey="M" unit={s.units.M} xUnit={s.units.x} summary={words.moment} color="#c8571b" />
         <Chart title="Shear" rows={rows} dataKey="V" unit={s.units.V} xUnit={s.units.x} summary={words.shear} color="#56504a" />
         <Chart title="Deflection (down)" rows={rows} dataKey="d" unit={s.units.deflection} xUnit={s.units.x} summary={words.deflection} color="#5b8a72"
-          limit={limit ? { value: limit.value, label: `span/${ratio}` } : null} />
+          limitValue={limit?.value ?? null} limitLabel={`span/${ratio}`} />
       </div>
     </section>
   );

@@ -1,3 +1,4 @@
+import { memo, type ReactNode } from 'react';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import type { LiveDesign } from '../hooks/use-live-design';
 import { CheckBoard } from './check-board';
@@ -6,9 +7,9 @@ import { MemberSketch } from './member-sketch';
 import { PlateSketch } from './plate-sketch';
 import { Verdict } from './verdict';
 
-function Panel({ title, children }: { title: string; children: React.ReactNode }) {
+function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <section aria-label={title} className="rounded-md border border-concrete-300 bg-white p-3">
+    <section aria-label={title} className="rounded-md border border-concrete-300 bg-white p-3 [contain:layout_paint]">
       <h2 className="mb-2 text-sm font-semibold text-concrete-800">{title}</h2>
       {children}
     </section>
@@ -16,16 +17,17 @@ function Panel({ title, children }: { title: string; children: React.ReactNode }
 }
 
 /** The right side of the desk: verdict and caution, diagrams, check board, sketches. */
-export function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocument | null }) {
+export const DeskResults = memo(function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocument | null }) {
   const result = live.result;
-  const limits = { live: doc?.deflectionLimits?.live ?? 360, total: doc?.deflectionLimits?.total ?? 240 };
+  const liveLimit = doc?.deflectionLimits?.live ?? 360;
+  const totalLimit = doc?.deflectionLimits?.total ?? 240;
   return (
     <div className={`flex flex-col gap-3 transition-opacity ${live.stale && result ? 'opacity-80' : ''}`}>
       <Verdict checks={result ? result.checks : null} stale={live.stale} />
       {result ? (
         <>
           <Panel title="Moment, shear and deflection along the member">
-            <DeskCharts result={result} resultId={live.resultId} limits={limits} />
+            <DeskCharts result={result} resultId={live.resultId} liveLimit={liveLimit} totalLimit={totalLimit} />
           </Panel>
           <Panel title="Check board">
             <CheckBoard checks={result.checks} />
@@ -42,4 +44,4 @@ export function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocume
       ) : null}
     </div>
   );
-}
+});

@@ -1,28 +1,19 @@
 /**
- * The plate in plan on the pier, from the design document (internal inches): plate, pier, footprint,
- * rod centres with holes and washers (AISC Design Guide 1 Table 2.3 sizes), edge distances, bearing zone.
- * x runs along N toward the tension row, y along B; the origin is the plate centre.
+ * The plate in plan on the pier for the sketch, from the engine's own layout (plateLayout: plate,
+ * pier, footprint outline, rods, DG1 holes and washers, edge distances) and the result's bearing
+ * length. Internal inches; x along N toward the tension row, y along B, origin at the plate centre.
  */
-import { ROD_SIZES, rodSize } from '../../../../shared/engine/connection/rod-data';
-import { findShape } from '../../../../shared/engine/shapes/table';
-import type { DesignResult } from '../../../../shared/engine/types';
-import { convert, parseQuantity } from '../../../../shared/engine/units';
+import { bearingZoneFromResult, plateLayout, type PlateLayout, type Rect } from '../../../../shared/engine/connection/plate-layout';
+import { lookupWith } from '../../../../shared/engine/shapes/table';
+import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
+import type { DesignResult, RootFootprint } from '../../../../shared/engine/types';
+import { parseQuantity } from '../../../../shared/engine/units';
+import { connectionSchema } from '../../../../shared/schemas/connection';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 
 export interface PlatePlan {
-  N: number;
-  B: number;
-  pierL: number;
-  pierW: number;
-  footprint: { d: number; bf: number; label: string } | null;
-  rods: { x: number; y: number }[];
-  hole: number;
-  washer: number;
-  diameter: number;
-  /** Rod centre to plate edge and to pier edge, along N. */
-  edgePlate: number;
-  edgePier: number;
-  bearingLength: number | null;
+  layout: PlateLayout;
+  bearing: Rect | null;
 }
 
 function len(text: string | undefined): number | null {
@@ -31,43 +22,31 @@ function len(text: string | undefined): number | null {
   return r.ok && r.value > 0 ? r.value : null;
 }
 
-function footprintOf(doc: DesignDocument): PlatePlan['footprint'] {
-  const label = doc.connection?.footprint?.shape ?? doc.member.section.shape;
-  if (label) {
-    const shape = findShape(label);
-    const d = shape?.d ?? shape?.Ht ?? shape?.OD;
-    const bf = shape?.bf ?? shape?.B ?? shape?.OD;
-    return shape && d && bf ? { d, bf, label: shape.label } : null;
+/** The member's section at the root, the default footprint (as the engine takes it). */
+function rootOf(doc: DesignDocument, find: (label: string) => ShapeRecord | undefined): RootFootprint | null {
+  const s = doc.member.section;
+  if (s.shape) {
+    const shape = find(s.shape);
+    if (!shape) return null;
+    const d = shape.d ?? shape.Ht ?? shape.OD;
+    const bf = shape.bf ?? shape.B ?? shape.OD;
+    const tf = shape.tf ?? shape.tdes;
+    return d && bf && tf ? { label: shape.label, family: shape.family, d, bf, tf } : null;
   }
-  const p = doc.member.section.plates;
-  const d = len(p?.rootDepth);
-  const bf = len(p?.flangeWidth);
-  return d && bf ? { d, bf, label: 'built-up I' } : null;
+  const [d, bf, tf] = [len(s.plates?.rootDepth), len(s.plates?.flangeWidth), len(s.plates?.flangeThickness)];
+  return d && bf && tf ? { label: 'built-up I', family: 'I', d, bf, tf } : null;
 }
 
-export function platePlan(doc: DesignDocument, result: DesignResult | null): PlatePlan | null {
-  const c = doc.connection;
-  if (!c) return null;
-  const [N, B, pierL, pierW, da, f] = [c.plate.N, c.plate.B, c.pier.length, c.pier.width, c.anchors.diameter, c.anchors.offset].map(len);
-  if (!N || !B || !pierL || !pierW || !da || f === null) return null;
-  const perSide = Number.isInteger(c.anchors.perSide) && c.anchors.perSide > 0 ? Math.min(c.anchors.perSide, 8) : 1;
-  const gauge = perSide > 1 ? (parseQuantity(c.anchors.gauge, 'length').ok ? len(c.anchors.gauge) ?? 0 : 0) : 0;
-  const rods: { x: number; y: number }[] = [];
-  for (const x of [-f, f]) for (let k = 0; k < perSide; k += 1) rods.push({ x, y: -((perSide - 1) * gauge) / 2 + k * gauge });
-  const size = rodSize(da) ?? ROD_SIZES.find((r) => r.diameter >= da) ?? ROD_SIZES[ROD_SIZES.length - 1];
-  const bl = result?.connection?.bearingLength;
-  return {
-    N,
-    B,
-    pierL,
-    pierW,
-    footprint: footprintOf(doc),
-    rods,
-    hole: size.hole,
-    washer: size.washerSize,
-    diameter: da,
-    edgePlate: N / 2 - f,
-    edgePier: pierL / 2 - f,
-    bearingLength: bl && Number.isFinite(bl.value) ? convert(bl.value, bl.unit, 'in') : null,
-  };
+export function platePlan(doc: DesignDocument, result: DesignResult | null, custom: readonly ShapeRecord[] = []): PlatePlan | null {
+  const parsed = connectionSchema.safeParse(doc.connection);
+  if (!doc.connection || !parsed.success) return null;
+  const find = lookupWith(custom);
+  const root = rootOf(doc, find);
+  if (!root) return null;
+  try {
+    const layout = plateLayout(parsed.data, root, find);
+    return { layout, bearing: bearingZoneFromResult(layout, result?.connection ?? null) };
+  } catch {
+    return null;
+  }
 }
