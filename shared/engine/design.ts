@@ -57,13 +57,13 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   const present = new Set(caseLoads.map((c) => c.case));
   const combos = (method === 'LRFD' ? strengthCombinations(present) : allowableCombinations(present)).map((c) => ({
     name: c.name,
-    response: combine(model, c.factors),
+    response: combine(model, c.factors, options.stations === true),
   }));
   const Lb = member.unbracedLength ? toInternal(member.unbracedLength, 'length') : L;
   const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos };
 
   const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight));
-  const tipByCase = Object.fromEntries(model.cases.map((c) => [c.case, c.response.y[c.response.y.length - 1]]));
+  const tipByCase = Object.fromEntries(model.cases.map((c) => [c.case, c.response.tip]));
   const checks: Check[] = [
     flexureCheck(ctx),
     shearCheck(ctx),
@@ -96,6 +96,11 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
         kind: section.kind,
         rootDepth: quantity(section.root.d, 'smallLength', units),
         tipDepth: quantity(section.tip.d, 'smallLength', units),
+      },
+      steel: {
+        grade: member.steel?.Fy ? 'as given (member.steel.Fy)' : section.defaultGrade,
+        Fy: quantity(Fy, 'stress', units),
+        E: quantity(E, 'stress', units),
       },
       cases: caseSummaries(model, units),
       combinations: combinationSummaries(combos, units),

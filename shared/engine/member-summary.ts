@@ -13,7 +13,7 @@ function summary(r: Response, units: UnitSystem): EffectSummary {
   return {
     rootMoment: quantity(r.M[0], 'moment', units),
     rootShear: quantity(r.V[0], 'force', units),
-    tipDeflection: quantity(r.y[r.y.length - 1], 'smallLength', units),
+    tipDeflection: quantity(r.tip, 'smallLength', units),
   };
 }
 

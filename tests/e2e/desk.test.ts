@@ -3,17 +3,19 @@
  * and back, US / SI with the same physical values, a shape picked from the browser.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { startE2E, type E2E } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
+let context: BrowserContext;
 
 beforeAll(async () => {
   e2e = await startE2E();
   const session = await e2e.newSession();
   page = session.page;
-  await e2e.signInAs(session.context, 'engineer');
+  context = session.context;
+  await e2e.signInAs(context, 'engineer');
   await page.goto('/projects');
   await page.getByRole('link', { name: /Harbor View Studio/ }).click();
   await page.getByRole('link', { name: 'East deck, typical beam' }).click();
@@ -111,5 +113,48 @@ describe('design desk', () => {
     await page.getByRole('radio', { name: 'US' }).click();
     await expect.poll(() => field('Length (root to tip)').inputValue()).toBe(lengthUS);
     await expect.poll(tip, { timeout: 10_000 }).toBe(tipUS);
+  });
+
+  it('stale save: shows what changed in the newer revision and keeps my changes on top of it', async () => {
+    const cantileverId = Number(/cantilevers\/(\d+)/.exec(page.url())?.[1]);
+    const list = (await (await context.request.get(`${e2e.baseUrl}/api/cantilevers/${cantileverId}/revisions`)).json()) as { id: number; number: number }[];
+    const newest = list.reduce((a, b) => (b.number > a.number ? b : a));
+    const current = (await (await context.request.get(`${e2e.baseUrl}/api/revisions/${newest.id}`)).json()) as { input: { connection: { plate: { thickness: string } } } };
+    current.input.connection.plate.thickness = '2 in';
+    const theirs = await context.request.post(`${e2e.baseUrl}/api/cantilevers/${cantileverId}/revisions`, {
+      data: { baseRevision: newest.number, message: 'Thicker plate from the shop', input: current.input },
+    });
+    expect(theirs.status()).toBe(201);
+    const next = newest.number + 1;
+
+    await field('Length (root to tip)').fill('8 ft');
+    await page.getByRole('button', { name: 'Save revision' }).click();
+    const save = page.getByRole('dialog', { name: 'Save revision' });
+    await save.getByLabel('Message').fill('Shorter reach');
+    await save.getByRole('button', { name: 'Save revision' }).click();
+    const conflict = page.getByRole('dialog', { name: `Revision ${next} was saved while you worked` });
+    await conflict.waitFor();
+    const row = conflict.getByRole('row').filter({ hasText: 'connection.plate.thickness' });
+    expect(await row.textContent()).toContain('2 in');
+    expect(await conflict.getByRole('row').filter({ hasText: 'member.length' }).textContent()).toContain('8 ft');
+    await e2e.screenshot(page, 'desk-conflict');
+    await conflict.getByRole('button', { name: `Keep my changes on top of revision ${next}` }).click();
+    await save.waitFor();
+    expect(await save.getByLabel('Message').inputValue()).toBe('Shorter reach');
+    await save.getByRole('button', { name: 'Save revision' }).click();
+    await expect.poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 }).toBe(`rev ${next + 1}`);
+    expect(await field('Length (root to tip)').inputValue()).toBe('8 ft');
+    await page.getByTestId('revision-list').getByText('Shorter reach').waitFor();
+  });
+
+  it('asks before leaving with unsaved changes', async () => {
+    await field('Length (root to tip)').fill('8.5 ft');
+    await page.getByTestId('unsaved').waitFor();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
+    const ask = page.getByRole('dialog', { name: 'Leave without saving?' });
+    await ask.waitFor();
+    await ask.getByRole('button', { name: 'Stay on the desk' }).click();
+    expect(page.url()).toMatch(/\/cantilevers\/\d+$/);
+    expect(await field('Length (root to tip)').inputValue()).toBe('8.5 ft');
   });
 });

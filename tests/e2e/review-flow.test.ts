@@ -54,7 +54,9 @@ async function saveOnDesk(page: Page, deltaFeet: number, message: string): Promi
   const dialog = page.getByRole('dialog', { name: 'Save revision' });
   await dialog.getByLabel('Message').fill(message);
   await dialog.getByRole('button', { name: 'Save revision' }).click();
-  await dialog.waitFor({ state: 'detached', timeout: 8000 }).catch(async (e) => { console.log('DIALOG', await dialog.textContent()); await e2e.screenshot(page, 'debug-dialog'); throw e; });
+  await dialog.waitFor({ state: 'detached', timeout: 15_000 }).catch(async () => {
+    throw new Error(`the save dialog stayed open: ${await dialog.textContent()}`);
+  });
   lengths.push(feet + deltaFeet);
 }
 
@@ -124,7 +126,7 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await page.getByText('The tip moves too much at this reach; bring it back or deepen the section.').first().waitFor();
     expect(await page.getByRole('radio').count()).toBe(0);
 
-    await saveOnDesk(page, -2, 'Shorter reach after review');
+    await saveOnDesk(page, -1, 'Shorter reach after review');
     await submitLatest(page, 3, 'Shorter reach after review');
     await expect.poll(async () => (await outbox()).some((m) => m.subject === `Review requested: ${CANTILEVER}, revision 3`), { timeout: 15_000 }).toBe(true);
   });
@@ -169,7 +171,8 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
     await page.locator('.recharts-line').first().waitFor();
     expect(await page.locator('.recharts-line').count()).toBe(4);
-    expect(await page.getByText(/^Under .+\. Revision 2: reach /).count()).toBe(1);
+    expect(await page.getByText(/^Moment under .+\. Revision 2: reach 8\.00 ft, root moment /).count()).toBe(1);
+    expect(await page.getByText(/^Revision 3 total-load limit /).count()).toBe(1);
     await e2e.screenshot(page, 'compare');
   });
 
@@ -193,5 +196,12 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await page.getByRole('button', { name: `Show text of “Review requested: ${CANTILEVER}, revision 3”` }).click();
     await page.getByText('Message: Shorter reach after review').waitFor();
     await e2e.screenshot(page, 'outbox');
+
+    await page.goto('/admin/team');
+    const accounts = page.getByRole('table', { name: 'Accounts' });
+    await accounts.waitFor({ timeout: 5000 }).catch(async (e) => { await e2e.screenshot(page, 'debug-team'); console.log('TEAM', await page.locator('#main').textContent()); throw e; });
+    await accounts.getByRole('row', { name: new RegExp(ENGINEER) }).waitFor();
+    expect(await accounts.locator('tbody tr').count()).toBe(4);
+    await e2e.screenshot(page, 'team');
   });
 });

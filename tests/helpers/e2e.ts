@@ -46,6 +46,8 @@ export async function startE2E(): Promise<E2E> {
     databaseUrl: join(dir, 'reachline.sqlite'),
     uploadDir,
     dataDir: dir,
+    // Browser tests sign the same accounts in many times; the limit itself is tested in tests/server.
+    loginRateLimit: 500,
   });
   const contexts: BrowserContext[] = [];
   const errors: string[] = [];

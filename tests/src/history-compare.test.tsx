@@ -84,8 +84,17 @@ describe('Compare screen', () => {
     const rootA = a.result.stations?.combinations.find((c) => c.name === governing)?.M[0] as number;
     const rootB = b.result.stations?.combinations.find((c) => c.name === governing)?.M[0] as number;
     expect(rootB).toBeGreaterThan(rootA);
-    const summary = screen.getByText(/^Under /);
-    expect(summary.textContent).toContain(`Under ${governing}.`);
+    const total = b.result.checks.find((c) => c.id === 'member.deflection.total');
+    const service = total?.combination as string;
+    const summary = screen.getByText(/^Moment under /);
+    expect(summary.textContent).toContain(`Moment under ${governing}, deflection under ${service}.`);
+    // the service curve is built from the unfactored cases: its tip is the later check's own demand,
+    // and for the earlier revision the sum of its case tip deflections under the same combination
+    expect(service).toBe('D + L');
+    const tipA = (a.result.member.cases.D?.tipDeflection.value as number) + (a.result.member.cases.L?.tipDeflection.value as number);
+    const tipB = total?.demand?.value as number;
+    expect(summary.textContent).toContain(`tip deflection ${tipA.toPrecision(3)} in. Revision 2`);
+    expect(summary.textContent).toContain(`tip deflection ${tipB.toPrecision(3)} in.`);
     expect(summary.textContent).toContain(`Revision 1: reach 9.00 ft, root moment ${rootA.toPrecision(3)} kip ft`);
     expect(summary.textContent).toContain(`Revision 2: reach 10.0 ft, root moment ${rootB.toPrecision(3)} kip ft`);
   });
@@ -94,6 +103,7 @@ describe('Compare screen', () => {
     const a = makeRevision(11, 1, exampleDesign);
     const b = makeRevision(12, 2, exampleDesign);
     b.result.checks = b.result.checks.map((c) => (c.id === 'member.shear' ? { ...c, ratio: null, ok: true } : c));
+    b.result.ok = true;
     stubFetch(({ path }) => (path === '/api/revisions/11' ? { body: a } : path === '/api/revisions/12' ? { body: b } : undefined));
     renderAt(<CompareRoute />, { route: '/cantilevers/7/compare?a=11&b=12', path: '/cantilevers/:cantileverId/compare' });
 
@@ -103,5 +113,7 @@ describe('Compare screen', () => {
     expect(cells[1].textContent).toBe('not computed fail');
     expect(cells[3].textContent).toBe('not computed');
     expect(screen.getByText('The two revisions have the same inputs.')).toBeInTheDocument();
+    // the later revision's verdict follows the uncomputed check, whatever its stored flag says
+    expect(screen.getByRole('region', { name: 'Summary' })).toHaveTextContent('Revision 2: Checks fail');
   });
 });

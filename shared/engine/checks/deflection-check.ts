@@ -20,6 +20,29 @@ export interface DeflectionInputs {
   units: UnitSystem;
 }
 
+interface ServicePart {
+  name: string;
+  factors: Combination['factors'];
+  /** The same combination without D (its variable loads) and that part's name ("" when none). */
+  variable: Combination['factors'];
+  variableName: string;
+}
+
+const parts = new WeakMap<readonly Combination[], ServicePart[]>();
+
+/** The service combinations split into whole and variable parts, once per (memoised) list. */
+function servicePartsOf(service: readonly Combination[]): ServicePart[] {
+  let hit = parts.get(service);
+  if (!hit) {
+    hit = service.map((c) => {
+      const variable = Object.fromEntries(Object.entries(c.factors).filter(([k]) => k !== 'D'));
+      return { name: c.name, factors: c.factors, variable, variableName: combinationName(variable) };
+    });
+    parts.set(service, hit);
+  }
+  return hit;
+}
+
 export function deflectionChecks(d: DeflectionInputs): Check[] {
   const tip = (factors: Combination['factors']) => {
     let y = 0;
@@ -29,15 +52,12 @@ export function deflectionChecks(d: DeflectionInputs): Check[] {
   const span = 2 * d.L;
   let total = { y: 0, name: null as string | null };
   let live = { y: 0, name: null as string | null };
-  for (const c of d.service) {
+  for (const c of servicePartsOf(d.service)) {
     const yt = tip(c.factors);
     if (yt > total.y || total.name === null) total = { y: yt, name: c.name };
-    const variable = { ...c.factors };
-    delete variable.D;
-    const name = combinationName(variable);
-    if (!name) continue;
-    const yl = tip(variable);
-    if (yl > live.y || live.name === null) live = { y: yl, name };
+    if (!c.variableName) continue;
+    const yl = tip(c.variable);
+    if (yl > live.y || live.name === null) live = { y: yl, name: c.variableName };
   }
   const row = (id: string, title: string, ratio: number, y: { y: number; name: string | null }, what: string): Check => {
     const limit = span / ratio;

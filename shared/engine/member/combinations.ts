@@ -35,7 +35,8 @@ const memo = new Map<string, Combination[]>();
 
 /** The same list for the same cases: combinations are built once per set of cases present. */
 function memoised(kind: string, present: ReadonlySet<LoadCase>, build: () => Combination[]): Combination[] {
-  const key = `${kind}|${[...present].sort().join(',')}`;
+  let key = kind;
+  for (const c of ['D', 'L', 'Lr', 'S'] as const) if (present.has(c)) key += c;
   let hit = memo.get(key);
   if (!hit) {
     hit = build();

@@ -32,11 +32,16 @@ export function firstFrequency(model: MemberModel, mass: CaseLoads): number {
   for (let i = 0; i < n; i++) kN[i] = momentAt(mass, L, x[i]) / EInode[i];
   for (let i = 0; i < n - 1; i++) kM[i] = momentAt(mass, L, mid[i]) / EImid[i];
   let shape = deflectedShape(x, kN, kM);
-  let omega2 = G / quotient(x, wNode, wMid, pNode, onesLike(shape), shape);
+  let omega2 = G / quotient(x, wNode, wMid, pNode, ones(n), shape);
   for (let k = 0; k < ITERATIONS; k++) {
-    const qN = wNode.map((w, i) => w * shape.node[i]);
-    const qM = wMid.map((w, i) => w * shape.mid[i]);
-    const pN = pNode.map((P, i) => P * shape.node[i]);
+    const qN = new Float64Array(n);
+    const qM = new Float64Array(n - 1);
+    const pN = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      qN[i] = wNode[i] * shape.node[i];
+      pN[i] = pNode[i] * shape.node[i];
+    }
+    for (let i = 0; i < n - 1; i++) qM[i] = wMid[i] * shape.mid[i];
     const next = shapeUnderLoad(x, qN, qM, pN, EInode, EImid);
     omega2 = G / quotient(x, wNode, wMid, pNode, shape, next);
     shape = next;
@@ -56,17 +61,17 @@ function quotient(x: readonly number[], wN: Float64Array, wM: Float64Array, pN: 
   for (let i = 0; i < x.length - 1; i++) {
     const h = x[i + 1] - x[i];
     ab += (h / 6) * (wN[i] * a.node[i] * b.node[i] + 4 * wM[i] * a.mid[i] * b.mid[i] + wN[i + 1] * a.node[i + 1] * b.node[i + 1]);
-    bb += (h / 6) * (wN[i] * b.node[i] ** 2 + 4 * wM[i] * b.mid[i] ** 2 + wN[i + 1] * b.node[i + 1] ** 2);
+    bb += (h / 6) * (wN[i] * b.node[i] * b.node[i] + 4 * wM[i] * b.mid[i] * b.mid[i] + wN[i + 1] * b.node[i + 1] * b.node[i + 1]);
   }
   for (let i = 0; i < x.length; i++) {
     ab += pN[i] * a.node[i] * b.node[i];
-    bb += pN[i] * b.node[i] ** 2;
+    bb += pN[i] * b.node[i] * b.node[i];
   }
   return bb / ab;
 }
 
-function onesLike(s: Shape): Shape {
-  return { node: s.node.map(() => 1), mid: s.mid.map(() => 1) };
+function ones(n: number): Shape {
+  return { node: new Float64Array(n).fill(1), mid: new Float64Array(n - 1).fill(1) };
 }
 
 /** Deflection at nodes and midpoints from curvature (midpoint: exact for a quadratic curvature). */

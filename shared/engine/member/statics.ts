@@ -3,15 +3,10 @@
  * load q(s) = q0 + q1 s and point loads (AISC Manual Table 3-23 cantilever cases, by superposition).
  * V(x) is the load between x and the tip, M(x) its moment about x (hogging), both positive.
  * A point load at x counts on the root side of x (the shear just toward the support).
+ * The shear, and the moment at the nodes, are inlined in analysis.ts (the hot loop); this is the
+ * moment anywhere else (interval midpoints, the frequency's static shape).
  */
 import type { CaseLoads } from './case-loads';
-
-/** Shear at x, kip. */
-export function shearAt(c: CaseLoads, L: number, x: number): number {
-  let V = c.q0 * (L - x) + (c.q1 * (L * L - x * x)) / 2;
-  for (const p of c.points) if (p.a >= x) V += p.P;
-  return V;
-}
 
 /** Moment at x, kip·in. */
 export function momentAt(c: CaseLoads, L: number, x: number): number {

@@ -5,6 +5,7 @@
 import type { ShapeRecord } from '../shapes/types';
 import type { MemberSection, SectionProps } from './section-types';
 import { DEFAULT_STEEL } from './steel-grades';
+import { iSectionProps } from './i-section';
 
 /** The table's properties in the engine's form, for the shape's family. */
 export function catalogProps(s: ShapeRecord): SectionProps {
@@ -22,19 +23,30 @@ export function catalogProps(s: ShapeRecord): SectionProps {
   }
   const d = s.d ?? 0;
   const tf = s.tf ?? 0;
+  const bf = s.bf ?? 0;
+  const tw = s.tw ?? 0;
   // AISC's h for rolled shapes is the clear distance less the fillets: d - 2 kdes.
   const h = d - 2 * (s.kdes ?? tf);
+  // A user's imported shape may lack the torsional columns: take them from the plate model.
+  const plates = s.Cw === undefined || s.rts === undefined || s.ho === undefined ? iSectionProps(d, bf, tf, tw) : null;
   return {
     ...base,
     d,
-    bf: s.bf ?? 0,
+    bf,
     tf,
-    tw: s.tw ?? 0,
+    tw,
     h,
-    Cw: s.Cw ?? 0,
-    rts: s.rts ?? s.ry,
-    ho: s.ho ?? d - tf,
+    Cw: s.Cw ?? plates!.Cw,
+    rts: s.rts ?? plates!.rts,
+    ho: s.ho ?? plates!.ho,
   };
+}
+
+/** The dimensions a family needs for its checks that a (user-imported) shape does not give. */
+export function missingDimensions(s: ShapeRecord): string[] {
+  const need: (keyof ShapeRecord)[] =
+    s.family === 'HSS' ? ['Ht', 'B', 'tdes'] : s.family === 'PIPE' ? ['OD', 'tdes'] : ['d', 'bf', 'tf', 'tw'];
+  return need.filter((k) => !(typeof s[k] === 'number' && (s[k] as number) > 0)).map(String);
 }
 
 const built = new WeakMap<ShapeRecord, MemberSection>();

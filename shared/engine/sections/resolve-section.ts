@@ -6,7 +6,7 @@
 import type { MemberInput } from '../../schemas/member';
 import type { ShapeLookup } from '../shapes/types';
 import type { MemberSection } from './section-types';
-import { catalogSection } from './catalog-section';
+import { catalogSection, missingDimensions } from './catalog-section';
 import { builtUpSection, taperedRolledSection } from './tapered-section';
 import { toInternal } from '../units';
 
@@ -24,6 +24,10 @@ export function resolveSection(section: SectionInput, shapes: ShapeLookup): Memb
   const shape = shapes(label);
   if (!shape) {
     return [{ path: 'member.section.shape', message: `unknown shape "${label}": not in the shapes table` }];
+  }
+  const missing = missingDimensions(shape);
+  if (missing.length) {
+    return [{ path: 'member.section.shape', message: `${shape.label} lacks ${missing.join(', ')} in the shapes table, needed for the checks` }];
   }
   if (!section.tipDepth) return catalogSection(shape);
   const path = 'member.section.tipDepth';

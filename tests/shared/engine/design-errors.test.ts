@@ -93,3 +93,20 @@ describe('sizes outside what the engine checks', () => {
     expect(() => assertFinite({ x: [1, { y: 2 }], s: 'text', n: null })).not.toThrow();
   });
 });
+
+describe("a user's imported shapes", () => {
+  it('are used through options.shapes; one without the dimensions its checks need is refused', async () => {
+    const { lookupWith } = await import('../../../shared/engine/shapes/table');
+    const { designSchema } = await import('../../../shared/schemas/design');
+    const { evaluateDesign } = await import('../../../shared/engine/design');
+    // A custom welded W of our own: plates 10 x 6 x 3/8 in flanges, 1/4 in web, no torsional columns.
+    const custom = { label: 'MYW10', family: 'W' as const, W: 25, A: 6.81, d: 10, bf: 6, tf: 0.375, tw: 0.25, Ix: 117, Sx: 23.4, Zx: 26.4, Iy: 13.5, ry: 1.41, J: 0.3, custom: true };
+    const doc = designSchema.parse(memberDoc({ shape: 'MYW10', loads: someLoad }));
+    const r = evaluateDesign(doc, { shapes: lookupWith([custom]) });
+    expect(r.member.section.label).toBe('MYW10');
+    expect(r.checks.every((c) => Number.isFinite(c.ratio))).toBe(true);
+    const broken = { ...custom, label: 'BROKEN', tw: undefined };
+    const bad = designSchema.parse(memberDoc({ shape: 'BROKEN', loads: someLoad }));
+    expect(() => evaluateDesign(bad, { shapes: lookupWith([broken]) })).toThrow(/BROKEN lacks tw/);
+  });
+});

@@ -27,6 +27,17 @@ describe('the result document', () => {
     expect(r.ok).toBe(r.checks.every((c) => c.ok));
   });
 
+  it('reports the steel used: the family default (REFERENCES.md material defaults [mem]) unless given', () => {
+    const w = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    expect(w.member.steel).toEqual({ grade: 'ASTM A992', Fy: { value: 50, unit: 'ksi' }, E: { value: 29000, unit: 'ksi' } });
+    const pipe = run(memberDoc({ shape: 'Pipe6STD', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    expect(pipe.member.steel!.Fy.value).toBe(35);
+    const c = run(memberDoc({ shape: 'C10X15.3', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    expect(c.member.steel!.Fy.value).toBe(36);
+    const given = run(memberDoc({ steel: { Fy: '345 MPa' }, loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    expect(given.member.steel!.Fy.value).toBeCloseTo(50.04, 2);
+  });
+
   it('without frequencyMin there is no vibration row, and the frequency is still reported', () => {
     const r = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [] } }));
     expect(r.checks.find((c) => c.id === 'member.vibration')).toBeUndefined();

@@ -46,6 +46,7 @@ export function OutboxTable({ mails }: { mails: OutboxDto[] }) {
                 <td className="py-1">
                   <Button
                     size="sm"
+                    className="whitespace-nowrap"
                     aria-expanded={open === mail.id}
                     aria-controls={textId}
                     aria-label={`${open === mail.id ? 'Hide' : 'Show'} text of “${mail.subject}”`}

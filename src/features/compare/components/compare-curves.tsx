@@ -1,8 +1,9 @@
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import type { Check, Stations } from '../../../../shared/engine/types';
-import { curvePoints, deflectionLimit, governingName, seriesNames } from '../utils/series';
-import { CurvesChart } from './curves-chart';
+import { curvePoints, deflectionLimit, governingName, seriesNames, serviceName } from '../utils/series';
 import { curveSummary } from '../utils/curve-summary';
+import { CurvesChart } from './curves-chart';
+import { SeriesSelect } from './series-select';
 
 interface CompareCurvesProps {
   labelA: string;
@@ -12,63 +13,54 @@ interface CompareCurvesProps {
   checksB: Check[];
 }
 
-/** The moment and deflection curves of both revisions, for one chosen combination or case. */
+/**
+ * The moment and deflection curves of both revisions. Moment defaults to the combination that governs
+ * bending; deflection to the service combination of the total-load check, the one its limit line is for.
+ */
 export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }: CompareCurvesProps) {
-  const selectId = useId();
   const names = seriesNames(stationsB, stationsA);
-  const [chosen, setChosen] = useState<string | undefined>(undefined);
-  const name = chosen && names.includes(chosen) ? chosen : governingName(checksB, names);
+  const service = serviceName(checksB);
+  const deflectionNames = service && !names.includes(service) ? [service, ...names] : names;
+  const [momentChoice, setMomentChoice] = useState<string | undefined>(undefined);
+  const [deflectionChoice, setDeflectionChoice] = useState<string | undefined>(undefined);
+  const momentName = momentChoice && names.includes(momentChoice) ? momentChoice : governingName(checksB, names);
+  const deflectionName = deflectionChoice && deflectionNames.includes(deflectionChoice) ? deflectionChoice : (service ?? momentName);
   const target = stationsB ?? stationsA;
-  if (!target || !name) {
+  if (!target || !momentName || !deflectionName) {
     return <p className="text-sm text-concrete-700">The station values of these revisions are not available, so the curves cannot be drawn.</p>;
   }
-  const pointsA = stationsA ? curvePoints(stationsA, name, 'M', target.units) : null;
-  const pointsB = stationsB ? curvePoints(stationsB, name, 'M', target.units) : null;
-  const defA = stationsA ? curvePoints(stationsA, name, 'deflection', target.units) : null;
-  const defB = stationsB ? curvePoints(stationsB, name, 'deflection', target.units) : null;
-  const limit = deflectionLimit(checksB, target.units.deflection);
-  const missing = [!pointsA && labelA, !pointsB && labelB].filter(Boolean);
+  const points = (s: Stations | undefined, name: string, curve: 'M' | 'deflection') => (s ? curvePoints(s, name, curve, target.units) : null);
+  const limit = deflectionName === service ? deflectionLimit(checksB, target.units.deflection) : null;
 
   return (
     <div className="space-y-3">
-      <div className="flex flex-wrap items-center gap-2 text-sm">
-        <label htmlFor={selectId} className="font-medium text-concrete-800">
-          Combination or load case
-        </label>
-        <select
-          id={selectId}
-          value={name}
-          onChange={(e) => setChosen(e.target.value)}
-          className="rounded border border-concrete-300 bg-white px-2 py-1 focus-visible:ring-2 focus-visible:ring-oxide-500"
-        >
-          {names.map((n) => (
-            <option key={n} value={n}>
-              {n}
-            </option>
-          ))}
-        </select>
-      </div>
-      {missing.length > 0 && <p className="text-sm text-concrete-700">{missing.join(' and ')} has no curve for {name}.</p>}
       <div className="grid gap-4 lg:grid-cols-2">
-        <CurvesChart
-          title={`Moment, ${name}`}
-          xUnit={target.units.x}
-          yUnit={target.units.M}
-          a={{ label: labelA, points: pointsA }}
-          b={{ label: labelB, points: pointsB }}
-        />
-        <CurvesChart
-          title={`Deflection (downward), ${name}`}
-          xUnit={target.units.x}
-          yUnit={target.units.deflection}
-          a={{ label: labelA, points: defA }}
-          b={{ label: labelB, points: defB }}
-          downward
-          limit={limit === null ? null : { value: limit, label: `${labelB} service total-load limit ${limit.toPrecision(3)} ${target.units.deflection}` }}
-        />
+        <div className="space-y-2 text-sm">
+          <SeriesSelect label="Moment under" value={momentName} names={names} onChange={setMomentChoice} />
+          <CurvesChart
+            title={`Moment, ${momentName}`}
+            xUnit={target.units.x}
+            yUnit={target.units.M}
+            a={{ label: labelA, points: points(stationsA, momentName, 'M') }}
+            b={{ label: labelB, points: points(stationsB, momentName, 'M') }}
+          />
+        </div>
+        <div className="space-y-2 text-sm">
+          <SeriesSelect label="Deflection under" value={deflectionName} names={deflectionNames} onChange={setDeflectionChoice} />
+          <CurvesChart
+            title={`Deflection (downward), ${deflectionName}`}
+            xUnit={target.units.x}
+            yUnit={target.units.deflection}
+            a={{ label: labelA, points: points(stationsA, deflectionName, 'deflection') }}
+            b={{ label: labelB, points: points(stationsB, deflectionName, 'deflection') }}
+            downward
+            limit={limit === null ? null : { value: limit, label: `${labelB} total-load limit ${limit.toPrecision(3)} ${target.units.deflection}` }}
+          />
+          {limit === null && service && <p className="text-xs text-concrete-600">The limit line shows under {service}, the service combination of the total-load deflection check.</p>}
+        </div>
       </div>
       <p className="text-sm text-concrete-700" aria-live="polite">
-        {curveSummary(labelA, labelB, stationsA, stationsB, name)}
+        {curveSummary(labelA, labelB, stationsA, stationsB, momentName, deflectionName)}
       </p>
     </div>
   );

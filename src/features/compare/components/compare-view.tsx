@@ -8,6 +8,11 @@ import { ChangedInputsTable } from './changed-inputs-table';
 import { RatioTable } from './ratio-table';
 import { CompareCurves } from './compare-curves';
 
+/** Passes only when the engine said so and every check has a computed ratio. */
+function allComputedPass(revision: RevisionDto): boolean {
+  return revision.result.ok && revision.result.checks.every((c) => c.ok && c.ratio !== null && Number.isFinite(c.ratio));
+}
+
 /** Two stored revisions side by side: changed inputs, check ratios and overlaid curves. */
 export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
   const labelA = `Revision ${a.number}`;
@@ -23,12 +28,12 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
       <section aria-labelledby="compare-summary" className="rounded border border-concrete-200 bg-white p-4">
         <h2 id="compare-summary" className="text-lg font-semibold text-concrete-900">Summary</h2>
         <p className="text-sm text-concrete-800" aria-live="polite">
-          {labelA} by {a.authorName}, “{a.message}”, compared with {labelB} by {b.authorName}, “{b.message}”. {changes.length} inputs changed.{' '}
+          {labelA} by {a.authorName}, “{a.message}”, compared with {labelB} by {b.authorName}, “{b.message}”. {changes.length === 1 ? '1 input changed' : `${changes.length} inputs changed`}.{' '}
           {ratioSummary(rows)}
         </p>
         <p className="mt-1 flex flex-wrap gap-4 text-sm">
-          <span>{labelA}: <VerdictWord ok={a.result.ok} /></span>
-          <span>{labelB}: <VerdictWord ok={b.result.ok} /></span>
+          <span>{labelA}: <VerdictWord ok={allComputedPass(a)} /></span>
+          <span>{labelB}: <VerdictWord ok={allComputedPass(b)} /></span>
         </p>
       </section>
       <section aria-labelledby="compare-inputs" className="rounded border border-concrete-200 bg-white p-4">

@@ -32,11 +32,14 @@ export function CurvesChart({ title, xUnit, yUnit, a, b, downward = false, limit
             )}
             {b.points && <Line data={b.points} dataKey="y" name={b.label} stroke="#c8571b" strokeWidth={2} dot={false} isAnimationActive={false} />}
             {limit && (
-              <ReferenceLine y={limit.value} stroke="#b3261e" strokeDasharray="2 2" label={{ value: limit.label, position: 'insideBottomRight', fontSize: 11, fill: '#b3261e' }} />
+              <ReferenceLine y={limit.value} ifOverflow="extendDomain" stroke="#b3261e" strokeDasharray="2 2" label={{ value: limit.label, position: 'insideBottomRight', fontSize: 11, fill: '#b3261e' }} />
             )}
           </LineChart>
         </ResponsiveContainer>
       </div>
+      {[a, b].filter((s) => !s.points).map((s) => (
+        <p key={s.label} className="text-xs text-concrete-600">{s.label} has no curve for this choice.</p>
+      ))}
     </figure>
   );
 }

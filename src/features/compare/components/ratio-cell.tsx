@@ -4,10 +4,10 @@ import { formatRatio } from '../../history/utils/format';
 export function RatioCell({ ratio, ok }: { ratio: number | null; ok: boolean | null }) {
   if (ok === null) return <span className="text-concrete-500">not checked</span>;
   const computed = ratio !== null && Number.isFinite(ratio);
-  const word = !computed ? 'fail' : ok ? 'pass' : 'fail';
+  const passed = computed && ok;
   return (
-    <span className={`font-mono tabular-nums ${ok ? 'text-concrete-900' : 'font-semibold text-util-over'}`}>
-      {formatRatio(ratio)} <span className="font-sans text-xs">{word}</span>
+    <span className={`font-mono tabular-nums ${passed ? 'text-concrete-900' : 'font-semibold text-util-over'}`}>
+      {formatRatio(ratio)} <span className="font-sans text-xs">{passed ? 'pass' : 'fail'}</span>
     </span>
   );
 }

@@ -14,6 +14,7 @@ const TRENDS: Record<RatioTrend, { Icon: LucideIcon; tone: string }> = {
 function signed(change: number | null): string {
   if (change === null) return '—';
   const text = Math.abs(change).toFixed(2);
+  if (text === '0.00') return text;
   return change > 0 ? `+${text}` : change < 0 ? `−${text}` : text;
 }
 

@@ -53,9 +53,9 @@ export function ratioRows(a: Check[], b: Check[]): RatioRow[] {
 export function ratioSummary(rows: RatioRow[]): string {
   const count = (t: RatioTrend) => rows.filter((r) => r.trend === t).length;
   const failingB = rows.filter((r) => r.okB === false).length;
-  const parts = [`${count('worse')} checks worse`, `${count('better')} better`, `${count('unchanged')} unchanged`];
+  const parts = [`${count('worse')} ${count('worse') === 1 ? 'check' : 'checks'} worse`, `${count('better')} better`, `${count('unchanged')} unchanged`];
   if (count('not computed')) parts.push(`${count('not computed')} not computed`);
   if (count('new check')) parts.push(`${count('new check')} new`);
   if (count('no longer checked')) parts.push(`${count('no longer checked')} no longer checked`);
-  return `${parts.join(', ')}. ${failingB === 0 ? 'Every check of the later revision passes.' : `${failingB} checks of the later revision fail or were not computed.`}`;
+  return `${parts.join(', ')}. ${failingB === 0 ? 'Every check of the later revision passes.' : `${failingB} ${failingB === 1 ? 'check' : 'checks'} of the later revision fail or were not computed.`}`;
 }

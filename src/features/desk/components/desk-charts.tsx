@@ -1,5 +1,5 @@
-import { memo, useEffect, useMemo, useState } from 'react';
-import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { memo, useCallback, useEffect, useMemo, useState } from 'react';
+import { CartesianGrid, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { DesignResult } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
 import { chartRows, defaultSeriesKey, deflectionLimit, describeSeries, seriesChoices, type ChartRow } from '../lib/chart-data';
@@ -18,22 +18,33 @@ interface ChartProps {
 
 const fmt = (value: number, unit: string) => formatQuantity({ value, unit });
 
+// Constant props live outside the component: recharts 3 re-registers an axis or tooltip whose props
+// change identity, which costs a second render of the whole chart on every update.
+const MARGIN = { top: 4, right: 12, bottom: 0, left: 0 };
+const TICK = { fontSize: 10 };
+const X_DOMAIN: [number, string] = [0, 'dataMax'];
+const CONTENT_STYLE = { fontSize: 12, fontVariantNumeric: 'tabular-nums' };
+const tickFormat = (v: number) => `${Number(v.toPrecision(3))}`;
+
 const Chart = memo(function Chart({ title, rows, dataKey, unit, xUnit, summary, color, limitValue, limitLabel }: ChartProps) {
+  performance.mark('dbg-chart-render');
+  const flags = localStorage.getItem('rlflags') ?? '';
+  const formatter = useCallback((v: unknown) => [fmt(Number(v), unit), title] as [string, string], [unit, title]);
+  const labelFormatter = useCallback((x: unknown) => `x = ${fmt(Number(x), xUnit)} from the root`, [xUnit]);
   return (
     <figure className="rounded border border-concrete-200 bg-white p-2">
-      <div className="mb-1 text-xs font-semibold text-concrete-700">{title} <span className="font-normal text-concrete-500">({unit.replace(/ /g, '·')})</span></div>
+      <div className="mb-1 text-xs font-semibold text-concrete-700">
+        {title} <span className="font-normal text-concrete-500">({unit.replace(/ /g, '·')})</span>
+        {limitValue != null ? <span className="ml-2 font-normal text-util-over">- - limit {limitLabel}</span> : null}
+      </div>
       <div className="h-36 [contain:strict]" aria-hidden="true">
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 4, right: 12, bottom: 0, left: 0 }}>
-            <CartesianGrid stroke="#eeece8" />
-            <XAxis dataKey="x" type="number" interval={0} domain={[0, 'dataMax']} tick={{ fontSize: 10 }} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
-            <YAxis interval={0} tick={{ fontSize: 10 }} width={48} reversed={dataKey === 'd'} tickFormatter={(v: number) => `${Number(v.toPrecision(3))}`} />
-            <Tooltip
-              formatter={(v) => [fmt(Number(v), unit), title]}
-              labelFormatter={(x) => `x = ${fmt(Number(x), xUnit)} from the root`}
-              contentStyle={{ fontSize: 12, fontVariantNumeric: 'tabular-nums' }}
-            />
-            {limitValue != null ? <ReferenceLine y={limitValue} ifOverflow="extendDomain" stroke="#b3261e" strokeDasharray="4 3" label={{ value: limitLabel, fontSize: 10, fill: '#b3261e', position: 'insideBottomRight' }} /> : null}
+        <ResponsiveContainer width="100%" height="100%" debounce={flags.includes('deb') ? 0 : 0}>
+          <LineChart data={rows} margin={MARGIN}>
+            {flags.includes('nogrid') ? null : <CartesianGrid stroke="#eeece8" />}
+            <XAxis dataKey="x" type="number" interval={0} domain={X_DOMAIN} tick={TICK} tickFormatter={tickFormat} />
+            <YAxis interval={0} tick={TICK} width={48} reversed={dataKey === 'd'} tickFormatter={tickFormat} />
+            {flags.includes('notip') ? null : <Tooltip formatter={formatter} labelFormatter={labelFormatter} contentStyle={CONTENT_STYLE} />}
+            {limitValue != null ? <Line dataKey="limit" name={limitLabel} stroke="#b3261e" strokeDasharray="4 3" strokeWidth={1} dot={false} activeDot={false} isAnimationActive={false} /> : null}
             <Line type="monotone" dataKey={dataKey} stroke={color} strokeWidth={2} dot={false} isAnimationActive={false} />
           </LineChart>
         </ResponsiveContainer>
@@ -51,21 +62,25 @@ export function DeskCharts({ result, resultId, liveLimit, totalLimit }: { result
   const choice = choices.find((c) => c.key === key);
 
   useEffect(() => {
+    // Measured once React has finished the work queued by this commit (recharts settles its own
+    // store in effects): a MessageChannel task runs after the scheduler's tasks already queued.
     const mark = `desk-input-${resultId}`;
-    const frame = requestAnimationFrame(() => {
+    const channel = new MessageChannel();
+    channel.port1.onmessage = () => {
       if (performance.getEntriesByName(mark, 'mark').length === 0) return;
       performance.measure('desk-redraw', mark);
       performance.clearMarks(mark);
-    });
-    return () => cancelAnimationFrame(frame);
+    };
+    channel.port2.postMessage(null);
+    return () => channel.port1.close();
   }, [resultId]);
 
-  const rows = useMemo(() => (result.stations && choice ? chartRows(result.stations.x, choice.series) : []), [result, choice]);
+  const isLive = choice?.kind === 'case' && choice.series.name === 'L';
+  const ratio = isLive ? liveLimit : totalLimit;
+  const limit = useMemo(() => deflectionLimit(result, ratio), [result, ratio]);
+  const rows = useMemo(() => (result.stations && choice ? chartRows(result.stations.x, choice.series, limit?.value ?? null) : []), [result, choice, limit]);
   if (!result.stations || !choice) return <p className="text-sm text-concrete-600">No station data in this result.</p>;
   const s = result.stations;
-  const isLive = choice.kind === 'case' && choice.series.name === 'L';
-  const ratio = isLive ? liveLimit : totalLimit;
-  const limit = deflectionLimit(result, ratio);
   const words = describeSeries(result, choice.series, limit);
   const summary = choice.kind === 'case' ? result.member.cases[choice.series.name as 'D'] : result.member.combinations.find((c) => c.name === choice.series.name);
   return (

@@ -31,6 +31,7 @@ export interface DeskEditorProps {
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
 export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
+  performance.mark('dbg-editor-render');
   const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: initialDoc });
   const { isDirty } = useFormState({ control: form.control });
   const [base, setBase] = useState<number | null>(revision?.number ?? null);
@@ -82,7 +83,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
         <div className="flex flex-col">
           <DeskHeader cantilever={cantilever} base={base} dirty={isDirty} busy={busy} live={live} units={units} onUnits={onUnits}
             save={<DeskSave cantileverId={cantilever.id} base={base} setBase={setBase} dirty={isDirty} mayEdit={rights.member || rights.connection} toUserUnits={toUserUnits} />} />
-          <div className="grid gap-4 p-4 lg:grid-cols-[24rem_1fr]">
+          <div className="grid gap-4 p-4 lg:grid-cols-[26rem_1fr]">
             <form onSubmit={(e) => e.preventDefault()} noValidate aria-label="Design inputs" className="flex flex-col gap-2">
               <IssueSummary issues={live.issues} failure={live.failure} />
               <DeskInputs mayEditMember={rights.member} mayEditConnection={rights.connection} onBrowseMember={openMember} onBrowseFootprint={openFootprint} />

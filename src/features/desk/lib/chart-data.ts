@@ -31,10 +31,12 @@ export interface ChartRow {
   M: number;
   V: number;
   d: number;
+  /** The deflection limit, the same at every station (drawn as a dashed line). */
+  limit?: number;
 }
 
-export function chartRows(x: readonly number[], series: StationSeries): ChartRow[] {
-  return x.map((xi, i) => ({ x: xi, M: series.M[i], V: series.V[i], d: series.deflection[i] }));
+export function chartRows(x: readonly number[], series: StationSeries, limit: number | null = null): ChartRow[] {
+  return x.map((xi, i) => ({ x: xi, M: series.M[i], V: series.V[i], d: series.deflection[i], ...(limit !== null ? { limit } : {}) }));
 }
 
 /** The deflection limit (span = 2 × length) in the chart's deflection unit. */

@@ -49,7 +49,7 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
       </Section>
       <Section id="review-verdict" title="Verdict and checks">
         <p className="mb-2 text-sm">
-          <VerdictWord ok={revision.result.ok} />{' '}
+          <VerdictWord ok={revision.result.ok && failing === 0} />{' '}
           <span className="text-concrete-700">
             {failing === 0 ? `All ${revision.result.checks.length} checks pass.` : `${failing} of ${revision.result.checks.length} checks fail or were not computed.`}{' '}
             {revision.result.method}, results in {revision.result.units} units.

@@ -100,4 +100,13 @@ describe('first frequency against Roark (uniform cantilever, 3.516 / 2 pi sqrt(E
     const r = run(memberDoc({ loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '100 lbf/ft' }], point: [] } }));
     expect(rel(r.member.frequency.value, 62.3)).toBeLessThan(0.005);
   });
+
+  it.each([0.5, 5, 50])('a %s kip dead point mass at the tip: f = (1/2 pi) sqrt(3 E I g / ((P + 33/140 w L) L^3)) within 0.1 %%', (P) => {
+    // Single-degree cantilever with Rayleigh's effective beam mass 33/140 of the beam (textbook
+    // result, from memory); near exact when the tip mass dominates.
+    const r = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [{ case: 'D', value: `${P} kip`, at: '8 ft' }] } }));
+    const w = (7.65 * 0.49) / 1728; // W12X26 A 7.65 in^2 at 490 lb/ft^3, kip/in
+    const f = Math.sqrt((3 * 29000 * 204 * 386.0886) / ((P + (33 / 140) * w * 96) * 96 ** 3)) / (2 * Math.PI);
+    expect(rel(r.member.frequency.value, f)).toBeLessThan(0.001);
+  });
 });
