@@ -38,7 +38,6 @@ async function main() {
     const projects = (await (await context.request.get(`${server.url}/api/projects`)).json()) as { id: number }[];
     const project = (await (await context.request.get(`${server.url}/api/projects/${projects[0].id}`)).json()) as { cantilevers: { id: number }[] };
     const page = context.pages()[0] ?? (await context.newPage());
-    if (process.env.RLFLAGS) await page.addInitScript((f) => localStorage.setItem('rlflags', f), process.env.RLFLAGS);
     await page.goto(`/cantilevers/${project.cantilevers[0].id}`);
     await page.getByTestId('tip-deflection').waitFor();
     const length = page.locator('#f-member-length');

@@ -5,10 +5,9 @@
  * problem on stderr, `path: message`, and nothing on stdout).
  */
 import { readFile } from 'node:fs/promises';
-import { designSchema } from '../../shared/schemas/design';
-import { toFieldIssues, type FieldIssue } from '../../shared/schemas/quantity';
-import { evaluateDesign } from '../../shared/engine/design';
-import { CAUTION, DesignInputError } from '../../shared/engine/types';
+import type { FieldIssue } from '../../shared/schemas/quantity';
+import { checkDocument } from '../../shared/engine/check-document';
+import { CAUTION } from '../../shared/engine/types';
 
 export interface CliIo {
   out(text: string): void;
@@ -29,15 +28,9 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   } catch (e) {
     return invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
   }
-  const parsed = designSchema.safeParse(json);
-  if (!parsed.success) return invalid(io, toFieldIssues(parsed.error));
-  let result;
-  try {
-    result = evaluateDesign(parsed.data, { stations });
-  } catch (e) {
-    if (e instanceof DesignInputError) return invalid(io, e.issues);
-    throw e;
-  }
+  const outcome = checkDocument(json, { stations });
+  if (!outcome.ok) return invalid(io, outcome.issues);
+  const { result } = outcome;
   io.out(`${JSON.stringify(result, null, 2)}\n`);
   const failed = result.checks.filter((c) => !c.ok).map((c) => c.id);
   io.err(

@@ -92,7 +92,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       selfWeight: quantity(sw.q0, 'lineLoad', units),
       steelWeight: quantity(STEEL_DENSITY * L * ((section.root.A + section.tip.A) / 2), 'weight', units),
       section: {
-        label: section.label,
+        label: units === 'SI' && section.labelSI ? section.labelSI : section.label,
         kind: section.kind,
         rootDepth: quantity(section.root.d, 'smallLength', units),
         tipDepth: quantity(section.tip.d, 'smallLength', units),

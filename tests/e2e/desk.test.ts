@@ -66,6 +66,7 @@ describe('design desk', () => {
     await expect.poll(() => page.locator('tr[data-check^="plate."]').count(), { timeout: 10_000 }).toBe(0);
     await page.getByLabel('Held at the pier by').selectOption('post-base');
     await expect.poll(() => page.locator('tr[data-check="plate.thickness"]').count(), { timeout: 10_000 }).toBe(1);
+    expect(await field('Thickness').inputValue()).toBe(thickness);
   });
 
   it('Loads: a preset adds a load row with its source and changes the tip deflection; removing it restores', async () => {

@@ -199,9 +199,38 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
 
     await page.goto('/admin/team');
     const accounts = page.getByRole('table', { name: 'Accounts' });
-    await accounts.waitFor({ timeout: 5000 }).catch(async (e) => { await e2e.screenshot(page, 'debug-team'); console.log('TEAM', await page.locator('#main').textContent()); throw e; });
     await accounts.getByRole('row', { name: new RegExp(ENGINEER) }).waitFor();
     expect(await accounts.locator('tbody tr').count()).toBe(4);
     await e2e.screenshot(page, 'team');
+  });
+
+  it('the admin creates an account and adds it to the project, then removes it', async () => {
+    const page = arch.page;
+    const form = page.getByRole('form', { name: 'Create an account' });
+    await form.getByLabel('E-mail').fill('second.engineer@reachline.test');
+    await form.getByLabel('Name').fill('Noor Haddad');
+    await form.getByLabel('Role').selectOption('engineer');
+    await form.getByLabel('First password').fill('short');
+    await form.getByRole('button', { name: 'Create account' }).click();
+    await form.getByText('First password must be at least 10 characters').waitFor();
+    await form.getByLabel('First password').fill('a-long-first-password');
+    await form.getByRole('button', { name: 'Create account' }).click();
+    await page.getByText('Account created for Noor Haddad (second.engineer@reachline.test) as engineer.').waitFor();
+    await page.getByRole('table', { name: 'Accounts' }).getByRole('row', { name: /Noor Haddad/ }).waitFor();
+
+    const projects = (await (await admin.get('/api/projects')).json()) as ProjectDto[];
+    await page.goto(`/projects/${projects[0].id}`);
+    const panel = page.getByRole('region', { name: 'Project members' });
+    await panel.getByLabel('Add an account').selectOption({ label: 'Noor Haddad (engineer, second.engineer@reachline.test)' });
+    await panel.getByRole('button', { name: 'Add member' }).click();
+    await panel.getByText('Noor Haddad was added to the project.').waitFor();
+    await panel.getByRole('button', { name: 'Remove Noor Haddad' }).waitFor();
+    const detail = (await (await admin.get(`/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
+    expect(detail.members.map((m) => m.email)).toContain('second.engineer@reachline.test');
+    await e2e.screenshot(page, 'project-members');
+    await panel.getByRole('button', { name: 'Remove Noor Haddad' }).click();
+    await panel.getByText('Noor Haddad was removed from the project.').waitFor();
+    const after = (await (await admin.get(`/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
+    expect(after.members.map((m) => m.email)).not.toContain('second.engineer@reachline.test');
   });
 });

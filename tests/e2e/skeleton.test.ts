@@ -85,4 +85,23 @@ describe('skeleton: sign in, edit, save, reload', () => {
     expect(Number.parseFloat(length)).toBeGreaterThan(0);
     expect(await page.getByTestId('unsaved').count()).toBe(0);
   });
+
+  it('creates a cantilever that starts from the example design and saves it as revision 1', async () => {
+    await page.getByRole('link', { name: 'Project', exact: true }).click();
+    await page.getByRole('button', { name: 'New cantilever' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New cantilever' });
+    await dialog.getByRole('button', { name: 'Create cantilever' }).click();
+    await dialog.getByText('Name is required').waitFor();
+    await dialog.getByLabel('Name').fill('West deck, corner beam');
+    await dialog.getByRole('button', { name: 'Create cantilever' }).click();
+    await page.waitForURL(/\/cantilevers\/\d+$/);
+    expect(await page.getByTestId('base-revision').textContent()).toBe('not saved yet');
+    await page.getByTestId('tip-deflection').waitFor();
+    await page.getByRole('button', { name: 'Save revision' }).click();
+    const save = page.getByRole('dialog', { name: 'Save revision' });
+    await save.getByLabel('Message').fill('Starting point for the corner');
+    await save.getByRole('button', { name: 'Save revision' }).click();
+    await expect.poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 }).toBe('rev 1');
+    await page.getByTestId('revision-list').getByText('Starting point for the corner').waitFor();
+  });
 });

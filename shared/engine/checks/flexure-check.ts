@@ -25,8 +25,11 @@ export function flexureCheck(ctx: CheckContext): Check {
   if (w.noCapacity >= 0) return noCapacityRow(ctx, strengths[w.noCapacity], w.noCapacity);
   const s = strengths[w.node];
   const combo = ctx.combos[w.combo];
+  // Cb and the unbraced length matter only to lateral-torsional buckling, so they are named with it.
   const notes = [
-    `${s.limitState} governs (Cb = ${CANTILEVER_CB.toFixed(1)}, unbraced bottom flange ${(Lb / 12).toFixed(2)} ft)`,
+    s.limitState === 'lateral-torsional buckling'
+      ? `${s.limitState} governs (Cb = ${CANTILEVER_CB.toFixed(1)}, unbraced bottom flange ${(Lb / 12).toFixed(2)} ft)`
+      : `${s.limitState} governs`,
   ];
   if (s.outOfScope) notes.push(s.outOfScope);
   const ok = w.ratio <= 1 && !s.outOfScope;

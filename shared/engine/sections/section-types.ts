@@ -36,6 +36,8 @@ export type SectionKind = 'catalog' | 'tapered-rolled' | 'built-up';
 /** The member's section along its length. */
 export interface MemberSection {
   label: string;
+  /** The label with its sizes in mm, for SI results (tapered and built-up sections). */
+  labelSI?: string;
   kind: SectionKind;
   family: SectionFamily;
   /** True when the properties do not change along x. */

@@ -22,7 +22,7 @@ export interface TaperPlates {
 
 function taperedSection(
   plates: TaperPlates,
-  label: string,
+  label: [string, string],
   kind: 'tapered-rolled' | 'built-up',
   family: 'W' | 'I',
 ): MemberSection {
@@ -35,7 +35,8 @@ function taperedSection(
   const tip = at(1);
   const steel = DEFAULT_STEEL[family];
   return {
-    label,
+    label: label[0],
+    labelSI: label[1],
     kind,
     family,
     prismatic: rootDepth === tipDepth,
@@ -55,18 +56,23 @@ export function taperedRolledSection(s: ShapeRecord, tipDepth: number): MemberSe
   const tf = s.tf ?? 0;
   const fillet = Math.max(0, (s.kdes ?? tf) - tf);
   const plates = { rootDepth: d, tipDepth, flangeWidth: s.bf ?? 0, flangeThickness: tf, webThickness: s.tw ?? 0, filletAllowance: fillet };
-  return taperedSection(plates, `${s.label} tapered to ${fmt(tipDepth)} in`, 'tapered-rolled', 'W');
+  const label: [string, string] = [`${s.label} tapered to ${fmt(tipDepth)} in`, `${s.label} tapered to ${mm(tipDepth)} mm`];
+  return taperedSection(plates, label, 'tapered-rolled', 'W');
 }
 
 /** A built-up I welded from plates (all in). */
 export function builtUpSection(p: Omit<TaperPlates, 'filletAllowance'>): MemberSection {
-  const label =
+  const text = (f: (v: number) => string, unit: string) =>
     p.rootDepth === p.tipDepth
-      ? `Built-up I ${fmt(p.rootDepth)} x ${fmt(p.flangeWidth)} in`
-      : `Built-up I ${fmt(p.rootDepth)} to ${fmt(p.tipDepth)} x ${fmt(p.flangeWidth)} in`;
-  return taperedSection({ ...p, filletAllowance: 0 }, label, 'built-up', 'I');
+      ? `Built-up I ${f(p.rootDepth)} x ${f(p.flangeWidth)} ${unit}`
+      : `Built-up I ${f(p.rootDepth)} to ${f(p.tipDepth)} x ${f(p.flangeWidth)} ${unit}`;
+  return taperedSection({ ...p, filletAllowance: 0 }, [text(fmt, 'in'), text(mm, 'mm')], 'built-up', 'I');
 }
 
 function fmt(v: number): string {
   return String(Number(v.toPrecision(4)));
+}
+
+function mm(inches: number): string {
+  return String(Math.round(inches * 25.4));
 }

@@ -61,6 +61,9 @@ describe('the result document', () => {
     expect(rel(si.member.cases.L!.rootShear.value, us.member.cases.L!.rootShear.value * 4.4482216)).toBeLessThan(1e-6);
     expect(si.member.cases.L!.tipDeflection.unit).toBe('mm');
     expect(rel(si.member.cases.L!.tipDeflection.value, us.member.cases.L!.tipDeflection.value * 25.4)).toBeLessThan(1e-9);
+    const tapered = run({ ...exampleTapered, units: 'SI' });
+    expect(tapered.member.section.label).toBe('W10X19 tapered to 152 mm');
+    expect(run(exampleTapered).member.section.label).toBe('W10X19 tapered to 6 in');
   });
 
   it('ASD lists the ASCE 7-16 2.4.1 combinations, LRFD the 2.3.1 ones, named as ASCE 7 writes them', () => {
@@ -87,5 +90,21 @@ describe('the result document', () => {
     expect(D.rotation![0]).toBe(0); // fixed root
     expect(D.rotation!.every((v, i) => i === 0 || v >= D.rotation![i - 1])).toBe(true); // hogging: slope grows toward the tip
     expect(run(exampleTapered).stations).toBeUndefined();
+  });
+});
+
+describe('checkDocument: schema and engine checks in one call', () => {
+  it('returns the result for a valid document and the field issues otherwise, never throwing for bad input', async () => {
+    const { checkDocument } = await import('../../../shared/engine/check-document');
+    const good = checkDocument(exampleMemberOnly);
+    expect(good.ok && good.result.caution).toBe(CAUTION);
+    expect(checkDocument({ member: { length: '-3 ft', spacing: '4 ft', section: { shape: 'W12X26' } } })).toEqual({
+      ok: false,
+      issues: [{ path: 'member.length', message: 'must be a positive length, got "-3 ft"' }],
+    });
+    expect(checkDocument({ member: { length: '3 ft', spacing: '4 ft', section: { shape: 'W99X1' } } })).toEqual({
+      ok: false,
+      issues: [{ path: 'member.section.shape', message: 'unknown shape "W99X1": not in the shapes table' }],
+    });
   });
 });

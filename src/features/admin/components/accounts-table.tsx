@@ -49,7 +49,7 @@ export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number 
               </td>
               <td className="py-1 pr-3">
                 {user.active ? (
-                  <span className="inline-flex items-center gap-1 text-util-calm"><UserCheck aria-hidden="true" className="h-4 w-4" />active</span>
+                  <span className="inline-flex items-center gap-1 text-concrete-800 [&_svg]:text-util-calm"><UserCheck aria-hidden="true" className="h-4 w-4" />active</span>
                 ) : (
                   <span className="inline-flex items-center gap-1 text-concrete-600"><UserX aria-hidden="true" className="h-4 w-4" />deactivated</span>
                 )}

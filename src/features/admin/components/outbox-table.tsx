@@ -6,7 +6,7 @@ import { formatDateTime } from '../../history/utils/format';
 
 const STATUS: Record<OutboxDto['status'], { word: string; Icon: LucideIcon; tone: string }> = {
   pending: { word: 'waiting to send', Icon: Hourglass, tone: 'text-concrete-700' },
-  sent: { word: 'sent', Icon: CircleCheck, tone: 'text-util-calm' },
+  sent: { word: 'sent', Icon: CircleCheck, tone: 'text-concrete-800 [&_svg]:text-util-calm' },
   failed: { word: 'failed', Icon: CircleX, tone: 'text-util-over' },
 };
 

@@ -1,7 +1,7 @@
 import { Download, Eye } from 'lucide-react';
 import type { AttachmentDto } from '../../../../shared/schemas/api';
 import { attachmentUrl } from '../api/get-attachments';
-import { formatBytes } from './upload-messages';
+import { formatBytes } from '../utils/upload-messages';
 import { formatDate } from '../../history/utils/format';
 
 const TYPE_WORDS: Record<string, string> = {

@@ -2,7 +2,7 @@ import { useId, useRef, useState } from 'react';
 import { Upload } from 'lucide-react';
 import { Button } from '../../../components/ui/button';
 import { useUploadAttachment } from '../api/upload-attachment';
-import { ACCEPTED, uploadErrorText, uploadHint } from './upload-messages';
+import { ACCEPTED, uploadErrorText, uploadHint } from '../utils/upload-messages';
 
 /** Choose a file and upload it with a progress bar; the outcome is announced. */
 export function UploadControl({ cantileverId }: { cantileverId: number }) {

@@ -4,7 +4,7 @@ import { RatioCell } from './ratio-cell';
 
 const TRENDS: Record<RatioTrend, { Icon: LucideIcon; tone: string }> = {
   worse: { Icon: ArrowUp, tone: 'text-util-over' },
-  better: { Icon: ArrowDown, tone: 'text-util-calm' },
+  better: { Icon: ArrowDown, tone: 'text-concrete-800 [&_svg]:text-util-calm' },
   unchanged: { Icon: Minus, tone: 'text-concrete-600' },
   'new check': { Icon: Plus, tone: 'text-concrete-700' },
   'no longer checked': { Icon: X, tone: 'text-concrete-700' },
@@ -39,7 +39,7 @@ export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA:
             <tr key={row.id} className="border-b border-concrete-100" data-check={row.id}>
               <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
                 {row.title}
-                <span className="block font-mono text-[11px] text-concrete-500">{row.id}</span>
+                <span className="block font-mono text-[11px] text-concrete-600">{row.id}</span>
               </th>
               <td className="py-1 pr-3"><RatioCell ratio={row.ratioA} ok={row.okA} /></td>
               <td className="py-1 pr-3"><RatioCell ratio={row.ratioB} ok={row.okB} /></td>

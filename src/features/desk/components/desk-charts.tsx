@@ -27,9 +27,10 @@ const CONTENT_STYLE = { fontSize: 12, fontVariantNumeric: 'tabular-nums' };
 const tickFormat = (v: number) => `${Number(v.toPrecision(3))}`;
 
 const Chart = memo(function Chart({ title, rows, dataKey, unit, xUnit, summary, color, limitValue, limitLabel }: ChartProps) {
-  performance.mark('dbg-chart-render');
-  const flags = localStorage.getItem('rlflags') ?? '';
-  const formatter = useCallback((v: unknown) => [fmt(Number(v), unit), title] as [string, string], [unit, title]);
+  const formatter = useCallback(
+    (v: unknown, name: unknown) => [fmt(Number(v), unit), name === limitLabel ? `limit ${limitLabel}` : title] as [string, string],
+    [unit, title, limitLabel],
+  );
   const labelFormatter = useCallback((x: unknown) => `x = ${fmt(Number(x), xUnit)} from the root`, [xUnit]);
   return (
     <figure className="rounded border border-concrete-200 bg-white p-2">
@@ -38,12 +39,12 @@ const Chart = memo(function Chart({ title, rows, dataKey, unit, xUnit, summary, 
         {limitValue != null ? <span className="ml-2 font-normal text-util-over">- - limit {limitLabel}</span> : null}
       </div>
       <div className="h-36 [contain:strict]" aria-hidden="true">
-        <ResponsiveContainer width="100%" height="100%" debounce={flags.includes('deb') ? 0 : 0}>
+        <ResponsiveContainer width="100%" height="100%">
           <LineChart data={rows} margin={MARGIN}>
-            {flags.includes('nogrid') ? null : <CartesianGrid stroke="#eeece8" />}
+            <CartesianGrid stroke="#eeece8" />
             <XAxis dataKey="x" type="number" interval={0} domain={X_DOMAIN} tick={TICK} tickFormatter={tickFormat} />
             <YAxis interval={0} tick={TICK} width={48} reversed={dataKey === 'd'} tickFormatter={tickFormat} />
-            {flags.includes('notip') ? null : <Tooltip formatter={formatter} labelFormatter={labelFormatter} contentStyle={CONTENT_STYLE} />}
+            <Tooltip formatter={formatter} labelFormatter={labelFormatter} contentStyle={CONTENT_STYLE} />
             {limitValue != null ? <Line dataKey="limit" name={limitLabel} stroke="#b3261e" strokeDasharray="4 3" strokeWidth={1} dot={false} activeDot={false} isAnimationActive={false} /> : null}
             <Line type="monotone" dataKey={dataKey} stroke={color} strokeWidth={2} dot={false} isAnimationActive={false} />
           </LineChart>

@@ -31,7 +31,6 @@ export interface DeskEditorProps {
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
 export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
-  performance.mark('dbg-editor-render');
   const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: initialDoc });
   const { isDirty } = useFormState({ control: form.control });
   const [base, setBase] = useState<number | null>(revision?.number ?? null);

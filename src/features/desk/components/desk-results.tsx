@@ -19,8 +19,6 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
 /** The right side of the desk: verdict and caution, diagrams, check board, sketches. */
 export const DeskResults = memo(function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocument | null }) {
   const result = live.result;
-  performance.mark('dbg-results-render');
-  const flags = typeof localStorage !== 'undefined' ? (localStorage.getItem('rlflags') ?? '') : '';
   const liveLimit = doc?.deflectionLimits?.live ?? 360;
   const totalLimit = doc?.deflectionLimits?.total ?? 240;
   return (
@@ -29,17 +27,17 @@ export const DeskResults = memo(function DeskResults({ live, doc }: { live: Live
       {result ? (
         <>
           <Panel title="Moment, shear and deflection along the member">
-            {flags.includes('nocharts') ? null : <DeskCharts result={result} resultId={live.resultId} liveLimit={liveLimit} totalLimit={totalLimit} />}
+            <DeskCharts result={result} resultId={live.resultId} liveLimit={liveLimit} totalLimit={totalLimit} />
           </Panel>
           <Panel title="Check board">
-            {flags.includes('noboard') ? null : <CheckBoard checks={result.checks} />}
+            <CheckBoard checks={result.checks} />
           </Panel>
           <div className="grid gap-3 2xl:grid-cols-2">
             <Panel title="Member elevation">
-              {flags.includes('nosketch') ? null : <MemberSketch result={result} />}
+              <MemberSketch result={result} />
             </Panel>
             <Panel title="Plate on the pier">
-              {doc && !flags.includes('nosketch') ? <PlateSketch doc={doc} result={result} /> : null}
+              {doc ? <PlateSketch doc={doc} result={result} /> : null}
             </Panel>
           </div>
         </>

@@ -1,4 +1,5 @@
 import { BookOpen } from 'lucide-react';
+import { useRef } from 'react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';
 import { ANCHOR_GRADES } from '../../../../shared/schemas/connection';
 import type { DesignDocument } from '../../../../shared/schemas/design';
@@ -43,12 +44,18 @@ export function SupportGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
   const arrangement = useWatch({ control, name: 'connection.arrangement' });
   const hasConnection = useWatch({ control, name: 'connection' }) !== undefined;
   const current: Arrangement = hasConnection ? (arrangement ?? 'post-base') : 'none';
+  // The connection as it was before "no connection" was chosen, so switching back loses nothing typed.
+  const lastConnection = useRef<DesignDocument['connection']>(undefined);
 
   function choose(next: Arrangement) {
     const opts = { shouldDirty: true, shouldValidate: true } as const;
-    if (next === 'none') return setValue('connection', undefined, opts);
+    if (next === 'none') {
+      lastConnection.current = getValues('connection');
+      return setValue('connection', undefined, opts);
+    }
     const existing = getValues('connection');
     if (existing) return setValue('connection.arrangement', next, opts);
+    if (lastConnection.current) return setValue('connection', { ...lastConnection.current, arrangement: next }, opts);
     const system = getValues('units') === 'SI' ? 'SI' : 'US';
     const base = { ...DEFAULT_CONNECTION, arrangement: next };
     const converted = switchUnits({ member: { length: '1 ft', spacing: '1 ft', section: { shape: 'W12X26' } }, connection: base }, system).doc;

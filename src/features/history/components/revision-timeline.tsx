@@ -44,7 +44,7 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3 rounded border border-concrete-200 bg-concrete-50 p-3 text-sm">
-        <span id="compare-hint" className="text-concrete-700">
+        <span id="compare-hint" aria-live="polite" className="text-concrete-700">
           {pair.length === 2 ? `Revisions ${pair[0].number} and ${pair[1].number} picked.` : `Pick two revisions to compare (${pair.length} of 2 picked).`}
         </span>
         {pair.length === 2 ? (

@@ -28,7 +28,7 @@ export function CheckList({ checks }: { checks: Check[] }) {
           <tr key={check.id} className="border-b border-concrete-100 align-top" data-check={check.id}>
             <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
               {check.title}
-              <span className="block text-[11px] text-concrete-500">{check.reference}</span>
+              <span className="block text-[11px] text-concrete-600">{check.reference}</span>
               {check.note && <span className="block text-xs text-concrete-700">{check.note}</span>}
             </th>
             <td className="py-1 pr-3 text-concrete-700">{check.combination ?? '—'}</td>

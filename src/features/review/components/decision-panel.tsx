@@ -17,7 +17,7 @@ export function DecisionPanel({ revision, user }: { revision: RevisionDto; user:
         {status}
       </p>
       {revision.reviewState === 'approved' && decision && (
-        <p className="flex items-center gap-2 text-base font-medium text-util-calm">
+        <p className="flex items-center gap-2 text-base font-medium text-concrete-800 [&_svg]:text-util-calm">
           <BadgeCheck aria-hidden="true" className="h-5 w-5" />
           Approved by {decision.reviewerName} on {formatDate(decision.createdAt)}
         </p>
