@@ -3,9 +3,11 @@
  * charts' commit with the new result (performance marks "desk-input-<id>" set in the change
  * handler, the measure "desk-redraw" taken one animation frame after the charts' effect).
  * Builds nothing: run `npx vite build` first. Usage:
- *   npm run bench:browser [-- --runs 40] [-- --json]
+ *   npm run bench:browser [-- --runs 40] [-- --json] [-- --profile] [-- --dist DIR]
+ * `--profile` records a CPU profile of the main thread over the changes and prints the functions
+ * with the most self time (build with `--minify false --outDir DIR` and pass `--dist DIR` for names).
  */
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
@@ -15,6 +17,82 @@ const args = process.argv.slice(2);
 const json = args.includes('--json');
 const runsAt = args.indexOf('--runs');
 const runs = runsAt >= 0 ? Number(args[runsAt + 1]) : 40;
+const profile = args.includes('--profile');
+const trace = args.includes('--trace');
+const distAt = args.indexOf('--dist');
+const distDir = distAt >= 0 ? args[distAt + 1] : undefined;
+
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+  children?: number[];
+}
+interface CpuProfile {
+  nodes: ProfileNode[];
+  samples: number[];
+  timeDeltas: number[];
+}
+
+interface TraceEvent {
+  name: string;
+  ph: string;
+  ts: number;
+  dur?: number;
+  tid: number;
+  pid: number;
+  args?: { name?: string };
+}
+
+/** Self time of the renderer main thread's trace events by name, in ms per change, the largest first. */
+function summariseTrace(events: TraceEvent[], changes: number): [string, number][] {
+  const main = events.find((e) => e.ph === 'M' && e.name === 'thread_name' && e.args?.name === 'CrRendererMain');
+  const spans = events
+    .filter((e) => main && e.pid === main.pid && e.tid === main.tid && e.ph === 'X' && typeof e.dur === 'number')
+    .sort((a, b) => a.ts - b.ts || (b.dur ?? 0) - (a.dur ?? 0));
+  const self = new Map<string, number>();
+  const stack: { end: number; name: string }[] = [];
+  for (const e of spans) {
+    while (stack.length > 0 && stack[stack.length - 1].end <= e.ts) stack.pop();
+    const parent = stack[stack.length - 1];
+    if (parent) self.set(parent.name, (self.get(parent.name) ?? 0) - (e.dur ?? 0) / 1000);
+    self.set(e.name, (self.get(e.name) ?? 0) + (e.dur ?? 0) / 1000);
+    stack.push({ end: e.ts + (e.dur ?? 0), name: e.name });
+  }
+  return [...self].map(([n, ms]) => [n, ms / changes] as [string, number]).sort((a, b) => b[1] - a[1]).slice(0, 25);
+}
+
+/** Self time by function and by script file, and total time by function, in ms per change, the largest first. */
+function summariseProfile(cpu: CpuProfile, changes: number): { byFunction: [string, number][]; byFile: [string, number][]; inclusive: [string, number][] } {
+  const self = new Map<number, number>();
+  cpu.samples.forEach((id, i) => self.set(id, (self.get(id) ?? 0) + (cpu.timeDeltas[i] ?? 0) / 1000));
+  const parent = new Map<number, ProfileNode>();
+  const byId = new Map(cpu.nodes.map((n) => [n.id, n]));
+  for (const node of cpu.nodes) for (const child of node.children ?? []) parent.set(child, node);
+  const inclusive = new Map<string, number>();
+  for (const [id, ms] of self) {
+    // Each function once per sample, however deep it recurses.
+    const seen = new Set<string>();
+    for (let node = byId.get(id); node; node = parent.get(node.id)) {
+      const { functionName, url, lineNumber } = node.callFrame;
+      if (!url) continue;
+      seen.add(`${functionName || '(anonymous)'} ${url.slice(url.lastIndexOf('/') + 1)}:${lineNumber + 1}`);
+    }
+    for (const name of seen) inclusive.set(name, (inclusive.get(name) ?? 0) + ms / changes);
+  }
+  const byFunction = new Map<string, number>();
+  const byFile = new Map<string, number>();
+  for (const node of cpu.nodes) {
+    const ms = (self.get(node.id) ?? 0) / changes;
+    if (ms === 0) continue;
+    const { functionName, url, lineNumber } = node.callFrame;
+    const file = url ? url.slice(url.lastIndexOf('/') + 1) : '(native)';
+    const name = `${functionName || '(anonymous)'} ${file}:${lineNumber + 1}`;
+    byFunction.set(name, (byFunction.get(name) ?? 0) + ms);
+    byFile.set(file, (byFile.get(file) ?? 0) + ms);
+  }
+  const top = (m: Map<string, number>, n: number) => [...m].sort((a, b) => b[1] - a[1]).slice(0, n);
+  return { byFunction: top(byFunction, 30), byFile: top(byFile, 15), inclusive: top(inclusive, 60) };
+}
 
 function percentile(sorted: number[], p: number): number {
   const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil(p * sorted.length) - 1));
@@ -25,7 +103,7 @@ async function main() {
   const dir = mkdtempSync(join(tmpdir(), 'reachline-bench-'));
   const uploadDir = join(dir, 'uploads');
   mkdirSync(uploadDir, { recursive: true });
-  const server = await startServer({ port: 0, databaseUrl: join(dir, 'bench.sqlite'), uploadDir, dataDir: dir });
+  const server = await startServer({ port: 0, databaseUrl: join(dir, 'bench.sqlite'), uploadDir, dataDir: dir, ...(distDir ? { distDir } : {}) });
   const context = await chromium.launchPersistentContext(join(dir, 'profile'), {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
@@ -52,11 +130,41 @@ async function main() {
     const cpuBefore = await metric('ThreadTime');
     const scriptBefore = await metric('ScriptDuration');
     const layoutBefore = (await metric('LayoutDuration')) + (await metric('RecalcStyleDuration'));
+    if (profile) {
+      await cdp.send('Profiler.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
+      await cdp.send('Profiler.start');
+    }
+    const traceEvents: TraceEvent[] = [];
+    if (trace) {
+      cdp.on('Tracing.dataCollected', (e) => { traceEvents.push(...(e.value as unknown as TraceEvent[])); });
+      await cdp.send('Tracing.start', { categories: 'devtools.timeline,disabled-by-default-devtools.timeline,blink,v8', transferMode: 'ReportEvents' });
+    }
     const count = () => page.evaluate(() => performance.getEntriesByName('desk-redraw', 'measure').length);
     for (let i = 0; i < runs; i += 1) {
       const before = await count();
       await length.fill(`${(8 + (i % 6) * 0.5).toFixed(1)} ft`);
       await page.waitForFunction((n) => performance.getEntriesByName('desk-redraw', 'measure').length > n, before, { timeout: 10_000, polling: 20 });
+    }
+    if (trace) {
+      const done = new Promise<void>((resolve) => cdp.once('Tracing.tracingComplete', () => resolve()));
+      await cdp.send('Tracing.end');
+      await done;
+      console.log('main-thread trace, self time per change by event (ms):');
+      for (const [name, ms] of summariseTrace(traceEvents, runs)) console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
+    }
+    if (profile) {
+      const { profile: cpu } = (await cdp.send('Profiler.stop')) as unknown as { profile: CpuProfile };
+      const { byFunction, byFile, inclusive } = summariseProfile(cpu, runs);
+      const saved = join(tmpdir(), 'reachline-desk.cpuprofile');
+      writeFileSync(saved, JSON.stringify(cpu));
+      console.log(`profile saved to ${saved} (opens in Chrome DevTools' Performance panel)`);
+      console.log('self time per change, by file (ms):');
+      for (const [file, ms] of byFile) console.log(`  ${ms.toFixed(2).padStart(7)}  ${file}`);
+      console.log('self time per change, by function (ms):');
+      for (const [name, ms] of byFunction) console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
+      console.log('total time per change, by function (ms):');
+      for (const [name, ms] of inclusive) console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
     }
     const cpuPerChange = ((await metric('ThreadTime')) - cpuBefore) * 1000 / runs;
     const scriptPerChange = ((await metric('ScriptDuration')) - scriptBefore) * 1000 / runs;
