@@ -106,7 +106,11 @@ function parseUncached(text: string, dimension: Dimension): ParseResult {
   if (!unit.equalBase(math.unit(`1 ${target}`))) {
     return { ok: false, message: `must be ${DIMENSION_WORDS[dimension]}, got "${text}"` };
   }
-  const value = unit.toNumber(target);
+  // mathjs converts through SI base units, so "12 in" can come back as 11.999999999999998 in and a
+  // rod exactly at a required edge distance would fail by 1e-16. Fourteen significant digits keep
+  // every real input and make exact inputs (and exact SI conversions of them) exact again.
+  const raw = unit.toNumber(target);
+  const value = Number.isFinite(raw) ? Number(raw.toPrecision(14)) : raw;
   if (!Number.isFinite(value)) {
     return { ok: false, message: `must be a finite value, got "${text}"` };
   }

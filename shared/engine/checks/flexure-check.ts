@@ -5,7 +5,7 @@
  * with its position.
  */
 import type { Check } from '../types';
-import { quantity } from '../units';
+import { formatQuantity, quantity } from '../units';
 import type { CheckContext } from './check-context';
 import { worstRatio } from './check-context';
 import { CANTILEVER_CB, flexuralStrengthOf } from './flexural-strength';
@@ -31,8 +31,14 @@ export function flexureCheck(ctx: CheckContext): Check {
       ? `${s.limitState} governs (Cb = ${CANTILEVER_CB.toFixed(1)}, unbraced bottom flange ${(Lb / 12).toFixed(2)} ft)`
       : `${s.limitState} governs`,
   ];
-  if (s.outOfScope) notes.push(s.outOfScope);
-  const ok = w.ratio <= 1 && !s.outOfScope;
+  // A station outside the clauses (e.g. the deep root of a taper beyond F13.2) fails the check even
+  // when another station has the worst ratio.
+  const outside = s.outOfScope ? w.node : strengths.findIndex((st) => st.outOfScope !== undefined);
+  if (outside >= 0) {
+    const where = section.prismatic ? '' : ` (at ${formatQuantity(quantity(model.grid.x[outside], 'length', units))} from the root)`;
+    notes.push(`${strengths[outside].outOfScope}${where}`);
+  }
+  const ok = w.ratio <= 1 && outside < 0;
   if (w.ratio > 1) notes.push('over capacity: a deeper or heavier section, or a brace on the bottom flange, would help');
   const check: Check = {
     id: 'member.flexure',

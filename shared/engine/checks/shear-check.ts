@@ -19,6 +19,22 @@ export function shearCheck(ctx: CheckContext): Check {
   }
   const capacity = (i: number) => available(strengths[i].Vn, method, strengths[i].phi, strengths[i].omega);
   const w = worstRatio(ctx.combos, (r, i) => r.V[i], capacity, nodes);
+  if (w.noCapacity >= 0) {
+    // No positive shear strength at a station: a failed, uncomputed check, never a silent pass.
+    const failed: Check = {
+      id: 'member.shear',
+      title: 'Shear',
+      reference: `AISC 360-16 ${strengths[w.noCapacity].clause}`,
+      combination: null,
+      demand: null,
+      capacity: null,
+      ratio: null,
+      ok: false,
+      note: 'no shear strength could be computed for this section; check the web dimensions',
+    };
+    if (!section.prismatic) failed.at = quantity(model.grid.x[w.noCapacity], 'length', units);
+    return failed;
+  }
   const s = strengths[w.node];
   const combo = ctx.combos[w.combo];
   const factor = method === 'LRFD' ? `phi_v = ${s.phi.toFixed(2)}` : `Omega_v = ${s.omega.toFixed(2)}`;

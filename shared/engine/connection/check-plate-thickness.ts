@@ -21,6 +21,12 @@ export function evaluatePlateThickness(s: ComboState, t: number, footprintKnown:
   if (!s.thickness) {
     return notComputed('smallLength', 'No real bearing length, so the plate thickness could not be found. Enlarge the plate first.');
   }
+  if (!s.thickness.tensionModelled) {
+    return notComputed(
+      'smallLength',
+      'The rods in tension are not beyond the tension flange (f <= d/2 - tf/2), so the Design Guide 1 tension-side plate strip does not apply and the plate thickness is not computed. Move the rows out beyond the section (larger offset f) or design the plate by a yield-line analysis.',
+    );
+  }
   const req = s.thickness.required;
   const ev: Evaluation = { demand: req, capacity: t, kind: 'smallLength', ratio: req / t };
   if (req > t) {

@@ -10,13 +10,14 @@ import type { ConnectionGeometry } from './connection-geometry';
 import { nextStandardThickness } from './plate-thickness';
 import { rodEdgeMinimum } from './rod-positions';
 
-/** The combination with the largest plate utilisation (thickness or bearing) among those with a solution. */
+/** The combination with the largest plate utilisation (thickness or bearing) among those with a modelled solution. */
 function plateGoverning(states: readonly ComboState[], t: number, fpMax: number): ComboState | undefined {
   let best: ComboState | undefined;
   let bestScore = -Infinity;
   for (const s of states) {
     const b = s.bearing;
-    if (!s.thickness || b.fp === null) continue;
+    // A plate whose tension side is outside the DG1 model has no requirement to describe (or schedule).
+    if (!s.thickness || !s.thickness.tensionModelled || b.fp === null) continue;
     const bearing = b.case === 'large-moment' ? b.demandMoment / b.capacityMoment : b.fp / fpMax;
     const score = Math.max(s.thickness.required / t, bearing);
     if (score > bestScore) {

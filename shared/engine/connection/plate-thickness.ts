@@ -17,9 +17,13 @@ export function plateCantilevers(N: number, B: number, fp: Footprint): { m: numb
   return { m: Math.max(0, (N - kd * fp.d) / 2), n: Math.max(0, (B - kb * fp.bf) / 2) };
 }
 
-/** Lever arm of the tension row to the face of the footprint's tension flange: x = f - d/2 + tf/2, in. */
+/**
+ * Lever arm of the tension row to the centre of the footprint's tension flange: x = f - d/2 + tf/2, in
+ * (DG1 3.4). Not positive when the row is not beyond the flange (rods beside the section): the DG1
+ * tension-side strip does not describe that plate, and requiredThickness then flags it.
+ */
 export function tensionLever(f: number, fp: Footprint): number {
-  return Math.max(0, f - fp.d / 2 + fp.tf / 2);
+  return f - fp.d / 2 + fp.tf / 2;
 }
 
 /**
@@ -40,6 +44,11 @@ export interface ThicknessParts {
   m: number;
   n: number;
   x: number;
+  /**
+   * False when the rods carry tension but the row is not beyond the tension flange (x <= 0): the DG1
+   * tension-side model does not apply, `tensionSide` is not a requirement and the check must fail.
+   */
+  tensionModelled: boolean;
 }
 
 /**
@@ -56,13 +65,15 @@ export function requiredThickness(
   if (s.Y === null || s.fp === null || s.T === null) return null;
   const c = COEFF[method];
   const { m, n } = plateCantilevers(plate.N, plate.B, fp);
-  const x = tensionLever(plate.f, fp);
+  const lever = tensionLever(plate.f, fp);
+  const x = Math.max(0, lever);
   const { Y, fp: p } = s;
   let bearingSide = 0;
   if (p > 0 && Y > 0) bearingSide = Math.max(bearingCantilever(m, Y, p, plate.Fy, c), bearingCantilever(n, Y, p, plate.Fy, c));
   const tension = Math.max(s.T, s.Tother);
   const tensionSide = tension > 0 ? c.partial * Math.sqrt((tension * x) / (plate.B * plate.Fy)) : 0;
-  return { bearingSide, tensionSide, required: Math.max(bearingSide, tensionSide), m, n, x };
+  const tensionModelled = !(tension > 0 && lever <= 0);
+  return { bearingSide, tensionSide, required: Math.max(bearingSide, tensionSide), m, n, x, tensionModelled };
 }
 
 /**

@@ -4,10 +4,13 @@
  */
 import { rootFc, type AnchorConcrete } from './aci-factors';
 
-/** Npn = psi_c,P 8 Abrg f'c, kip (17.6.3.2.2; psi_c,P = 1.4 uncracked, 1.0 cracked). */
+/**
+ * Npn = psi_c,P 8 Abrg f'c, kip (17.6.3.2.2; psi_c,P = 1.4 uncracked, 1.0 cracked), with f'c capped
+ * at 10 ksi like every other ch. 17 calculation for cast-in anchors (17.3.1, from memory).
+ */
 export function pulloutStrength(Abrg: number, c: AnchorConcrete): number {
   const psiCP = c.cracked ? 1 : 1.4;
-  return psiCP * 8 * Abrg * c.fc;
+  return psiCP * 8 * Abrg * Math.min(c.fc, 10);
 }
 
 /** Side-face blowout applies to a headed anchor with hef > 2.5 ca1 (17.6.4.1). */
