@@ -36,6 +36,40 @@ async function settled() {
 }
 
 describe('design desk', () => {
+  it('Plate schedule: links the saved revision\'s schedule as CSV, and says why not while changes are unsaved', async () => {
+    const link = page.getByTestId('plate-schedule-link');
+    const href = await link.getAttribute('href');
+    expect(href).toMatch(/^\/api\/revisions\/\d+\/plate-schedule\.csv$/);
+    const revision = (await page.getByTestId('base-revision').textContent())?.replace('rev ', '');
+    const csv = await page.evaluate(async (h) => (await fetch(h)).text(), href as string);
+    const lines = csv.trimEnd().split('\r\n');
+    expect(lines[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
+    expect(lines).toHaveLength(2);
+    expect(lines[1]).toMatch(new RegExp(`^"East deck, typical beam \\(rev ${revision}\\)",post-base,`));
+    const length = await field('Length (root to tip)').inputValue();
+    await field('Length (root to tip)').fill('9 ft');
+    await expect.poll(() => link.getAttribute('aria-disabled')).toBe('true');
+    expect(await link.getAttribute('href')).toBeNull();
+    expect(await page.locator('#plate-schedule-why').textContent()).toContain('Save your changes first');
+    await field('Length (root to tip)').fill(length);
+    await settled();
+    // typed back to the saved value: nothing is unsaved any more, and the link returns
+    await expect.poll(() => page.getByTestId('unsaved').count()).toBe(0);
+    await expect.poll(() => link.getAttribute('href')).toBe(href);
+  });
+
+  it('Diagrams: hovering a chart shows the readout with its unit', async () => {
+    const chart = page.getByTestId('chart-M');
+    const box = await chart.boundingBox();
+    if (!box) throw new Error('the moment chart has no box');
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.move(box.x + box.width / 2 + 5, box.y + box.height / 2);
+    const tooltip = chart.locator('.recharts-tooltip-wrapper');
+    await expect.poll(async () => (await tooltip.textContent()) ?? '', { timeout: 5_000 }).toMatch(/^x = [\d.]+ ft from the root/);
+    expect(await tooltip.textContent()).toMatch(/Moment : -?[\d.]+ kip[·\s]ft/);
+    await page.mouse.move(0, 0);
+  });
+
   it('Reach: a long reach makes the live deflection check fail, and restoring it passes again', async () => {
     const length = await field('Length (root to tip)').inputValue();
     expect(await word('member.deflection.live')).not.toBe('exceeds');

@@ -46,6 +46,11 @@ describe('skeleton: sign in, edit, save, reload', () => {
   it('opens the demo cantilever on the desk with a computed result and the caution', async () => {
     await page.getByRole('link', { name: /Harbor View Studio/ }).click();
     await page.getByRole('heading', { name: 'Harbor View Studio' }).waitFor();
+    const scheduleHref = await page.getByTestId('project-schedule-link').getAttribute('href');
+    expect(scheduleHref).toMatch(/^\/api\/projects\/\d+\/plate-schedule\.csv$/);
+    const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string)).trimEnd().split('\r\n');
+    expect(schedule[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
+    expect(schedule.some((line) => /^"East deck, typical beam \(rev \d+\)",post-base,\d/.test(line))).toBe(true);
     await e2e.screenshot(page, 'project');
     await page.getByRole('link', { name: 'East deck, typical beam' }).click();
     await page.getByTestId('tip-deflection').waitFor();

@@ -3,6 +3,7 @@ import type { MemberModel, Response } from '../member/analysis';
 import type { MemberSection } from '../sections/section-types';
 import type { Method } from '../types';
 import type { UnitSystem } from '../units';
+import { clearlyGreater } from './ties';
 
 export interface CombinationResponse {
   name: string;
@@ -46,7 +47,7 @@ export function worstRatio(
     }
     for (let c = 0; c < combos.length; c++) {
       const ratio = demandOf(combos[c].response, i) / cap;
-      if (ratio > best.ratio) {
+      if (clearlyGreater(ratio, best.ratio)) {
         best.ratio = ratio;
         best.combo = c;
         best.node = i;

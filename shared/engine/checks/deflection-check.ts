@@ -10,6 +10,7 @@ import type { Check } from '../types';
 import type { Combination } from '../member/combinations';
 import { combinationName } from '../member/combinations';
 import { quantity, type UnitSystem } from '../units';
+import { clearlyGreater } from './ties';
 
 export interface DeflectionInputs {
   /** Unfactored tip deflection of each case present, in. */
@@ -54,10 +55,10 @@ export function deflectionChecks(d: DeflectionInputs): Check[] {
   let live = { y: 0, name: null as string | null };
   for (const c of servicePartsOf(d.service)) {
     const yt = tip(c.factors);
-    if (yt > total.y || total.name === null) total = { y: yt, name: c.name };
+    if (clearlyGreater(yt, total.y) || total.name === null) total = { y: yt, name: c.name };
     if (!c.variableName) continue;
     const yl = tip(c.variable);
-    if (yl > live.y || live.name === null) live = { y: yl, name: c.variableName };
+    if (clearlyGreater(yl, live.y) || live.name === null) live = { y: yl, name: c.variableName };
   }
   const row = (id: string, title: string, ratio: number, y: { y: number; name: string | null }, what: string): Check => {
     const limit = span / ratio;

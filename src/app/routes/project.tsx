@@ -11,6 +11,7 @@ import { useMe } from '../../features/auth/api/get-me';
 import { useProject } from '../../features/projects/api/get-project';
 import { CantileverTable } from '../../features/projects/components/cantilever-table';
 import { CreateCantileverForm } from '../../features/projects/components/create-cantilever-form';
+import { ProjectScheduleLink } from '../../features/projects/components/project-schedule-link';
 
 export default function ProjectRoute() {
   const projectId = Number(useParams().projectId);
@@ -30,7 +31,10 @@ export default function ProjectRoute() {
       <p className="text-sm text-concrete-600">{p.site || 'no site given'} · {p.codeBasis} · {p.units}</p>
       <div className="mt-6 mb-2 flex items-center justify-between">
         <h2 className="font-semibold">Cantilevers</h2>
-        {mayCreate ? <Button variant="primary" onClick={() => setCreating(true)}><Plus size={16} aria-hidden="true" /> New cantilever</Button> : null}
+        <div className="flex items-center gap-4">
+          {p.cantilevers.length > 0 ? <ProjectScheduleLink projectId={p.id} /> : null}
+          {mayCreate ? <Button variant="primary" onClick={() => setCreating(true)}><Plus size={16} aria-hidden="true" /> New cantilever</Button> : null}
+        </div>
       </div>
       <CantileverTable cantilevers={p.cantilevers} />
       <h2 className="mt-8 mb-2 font-semibold">Team</h2>

@@ -10,10 +10,12 @@ import { ShapePickerDialog } from '../../shapes/components/shape-picker-dialog';
 import { useShapes } from '../../shapes/api/get-shapes';
 import { useLiveDesign } from '../hooks/use-live-design';
 import { useUnitsSwitch } from '../hooks/use-units-switch';
+import { useDiffersFromSaved } from '../hooks/use-differs-from-saved';
 import { issuesByField } from '../lib/issue-paths';
 import { DeskHeader } from './desk-header';
 import { DeskInputs, IssueSummary } from './desk-inputs';
 import { DeskResults } from './desk-results';
+import { PlateScheduleLink } from './plate-schedule-link';
 import { DeskSave } from './desk-save';
 import { EngineIssuesContext } from './field-context';
 import { DeskSide } from './desk-side';
@@ -32,8 +34,13 @@ export interface DeskEditorProps {
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
 export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
   const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: initialDoc });
-  const { isDirty } = useFormState({ control: form.control });
-  const [base, setBase] = useState<number | null>(revision?.number ?? null);
+  const { isDirty: formSaysDirty } = useFormState({ control: form.control });
+  const differsFromSaved = useDiffersFromSaved(form);
+  // react-hook-form can keep isDirty set after every field is typed back to its saved value, so the
+  // marker also asks whether the document really differs; isDirty still covers the reset after a save.
+  const isDirty = formSaysDirty && differsFromSaved;
+  const [baseRevision, setBase] = useState<{ id: number; number: number } | null>(revision ? { id: revision.id, number: revision.number } : null);
+  const base = baseRevision?.number ?? null;
   const [units, setUnits] = useState<UnitSystem>(initialDoc.units === 'SI' ? 'SI' : 'US');
   const [picker, setPicker] = useState<'member' | 'footprint' | null>(null);
   const shapes = useShapes();
@@ -58,6 +65,9 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const openFootprint = useCallback(() => setPicker('footprint'), []);
   const engineIssues = useMemo(() => issuesByField(live.issues), [live.issues]);
   const hasConnection = live.doc?.connection !== undefined;
+  const baseId = baseRevision?.id ?? null;
+  // Memoised so that the results (a memo component) skip the re-render of every keystroke.
+  const schedule = useMemo(() => <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />, [baseId, isDirty, hasConnection]);
 
   function applyShape(target: 'member' | 'footprint', label: string) {
     const opts = { shouldDirty: true, shouldValidate: true } as const;
@@ -88,7 +98,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
               <DeskInputs mayEditMember={rights.member} mayEditConnection={rights.connection} onBrowseMember={openMember} onBrowseFootprint={openFootprint} />
             </form>
             <div className="flex min-w-0 flex-col gap-3">
-              <DeskResults live={live} doc={live.doc} />
+              <DeskResults live={live} doc={live.doc} schedule={schedule} />
               <DeskSide cantileverId={cantilever.id} current={base} />
             </div>
           </div>

@@ -17,7 +17,7 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
 }
 
 /** The right side of the desk: verdict and caution, diagrams, check board, sketches. */
-export const DeskResults = memo(function DeskResults({ live, doc }: { live: LiveDesign; doc: DesignDocument | null }) {
+export const DeskResults = memo(function DeskResults({ live, doc, schedule }: { live: LiveDesign; doc: DesignDocument | null; schedule?: ReactNode }) {
   const result = live.result;
   const liveLimit = doc?.deflectionLimits?.live ?? 360;
   const totalLimit = doc?.deflectionLimits?.total ?? 240;
@@ -38,6 +38,7 @@ export const DeskResults = memo(function DeskResults({ live, doc }: { live: Live
             </Panel>
             <Panel title="Plate on the pier">
               {doc ? <PlateSketch doc={doc} result={result} /> : null}
+              {schedule}
             </Panel>
           </div>
         </>

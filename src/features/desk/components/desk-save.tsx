@@ -18,7 +18,8 @@ import { SaveDialog } from './save-dialog';
 export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUnits }: {
   cantileverId: number;
   base: number | null;
-  setBase: (n: number) => void;
+  /** The revision the desk now stands on (its number is shown; its id names the plate schedule). */
+  setBase: (revision: { id: number; number: number }) => void;
   dirty: boolean;
   mayEdit: boolean;
   toUserUnits: (doc: DesignDocument) => DesignDocument;
@@ -41,7 +42,7 @@ export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUn
     const input = form.getValues();
     save.mutate({ baseRevision: base, message: text, input }, {
       onSuccess: (revision) => {
-        setBase(revision.number);
+        setBase(revision);
         form.reset(input);
         setOpen(false);
         setMessage('');
@@ -69,7 +70,7 @@ export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUn
     if (!conflict) return;
     const mine = form.getValues();
     replaceKeepingDirty(form, toUserUnits(conflict.input), mine);
-    setBase(conflict.number);
+    setBase(conflict);
     setConflict(null);
     setOpen(true);
   }
@@ -78,7 +79,7 @@ export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUn
     if (!conflict) return;
     setDraft(form.getValues());
     form.reset(toUserUnits(conflict.input));
-    setBase(conflict.number);
+    setBase(conflict);
     setConflict(null);
   }
 

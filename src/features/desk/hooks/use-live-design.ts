@@ -1,8 +1,10 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
+import { flushSync } from 'react-dom';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { DesignResult } from '../../../../shared/engine/types';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import type { FieldIssue } from '../../../../shared/schemas/quantity';
+import { finishRedraw } from '../lib/redraw-measure';
 import type { WorkerReply, WorkerRequest } from '../lib/worker-protocol';
 
 export interface LiveDesign {
@@ -22,7 +24,10 @@ export interface LiveDesign {
   doc: DesignDocument | null;
 }
 
-const EMPTY: LiveDesign = { result: null, resultId: 0, issues: [], failure: null, stale: true, engineMs: 0, doc: null };
+// One shared empty list: a fresh [] per answer would change the engine-issues context on every
+// result and re-render every field of the form.
+const NO_ISSUES: FieldIssue[] = [];
+const EMPTY: LiveDesign = { result: null, resultId: 0, issues: NO_ISSUES, failure: null, stale: true, engineMs: 0, doc: null };
 
 interface Engine {
   post(message: WorkerRequest): void;
@@ -75,16 +80,22 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
       queued.current = null;
       if (next) engine.current?.post({ type: 'evaluate', ...next });
       else inFlight.current = false;
-      setBusy(Boolean(next));
       const doc = docs.current.get(reply.id) ?? null;
       for (const id of docs.current.keys()) if (id <= reply.id) docs.current.delete(id);
-      setLive((prev) => {
-        if (reply.kind === 'result') {
-          return { result: reply.result, resultId: reply.id, issues: [], failure: null, stale: Boolean(next), engineMs: reply.ms, doc };
-        }
-        if (reply.kind === 'invalid') return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
-        return { ...prev, issues: [], failure: reply.message, stale: true, engineMs: reply.ms };
+      // One task from the answer to the charts' final commit: as a sync update, the charts' effects
+      // (which hand the new data to each chart's store) and the re-render they cause run in the same
+      // task, instead of after a browser frame that would paint the half-updated results.
+      flushSync(() => {
+        setBusy(Boolean(next));
+        setLive((prev) => {
+          if (reply.kind === 'result') {
+            return { result: reply.result, resultId: reply.id, issues: NO_ISSUES, failure: null, stale: Boolean(next), engineMs: reply.ms, doc };
+          }
+          if (reply.kind === 'invalid') return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
+          return { ...prev, issues: NO_ISSUES, failure: reply.message, stale: true, engineMs: reply.ms };
+        });
       });
+      finishRedraw(reply.id);
     });
     engine.current = e;
     if (queued.current) {
