@@ -51,6 +51,8 @@ describe('skeleton: sign in, edit, save, reload', () => {
     const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string)).trimEnd().split('\r\n');
     expect(schedule[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
     expect(schedule.some((line) => /^"East deck, typical beam \(rev \d+\)",post-base,\d/.test(line))).toBe(true);
+    // the project page states pass/fail words, so it carries the caution too
+    expect(await page.getByTestId('caution-footer').textContent()).toContain('licensed engineer');
     await e2e.screenshot(page, 'project');
     await page.getByRole('link', { name: 'East deck, typical beam' }).click();
     await page.getByTestId('tip-deflection').waitFor();

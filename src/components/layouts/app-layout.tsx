@@ -3,6 +3,7 @@ import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
 import { useLogout } from '../../features/auth/api/logout';
+import { CAUTION } from '../../../shared/engine/types';
 import { Brand } from './brand';
 
 function navClass({ isActive }: { isActive: boolean }): string {
@@ -47,6 +48,10 @@ export function AppLayout() {
       <main id="main" className="flex-1">
         <Outlet />
       </main>
+      {/* Every signed-in screen shows results or leads to them, so every one carries the caution. */}
+      <footer className="border-t border-concrete-200 px-4 py-3 text-xs text-concrete-600" data-testid="caution-footer">
+        {CAUTION}
+      </footer>
     </div>
   );
 }
