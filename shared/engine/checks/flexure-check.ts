@@ -10,6 +10,7 @@ import type { CheckContext } from './check-context';
 import { worstRatio } from './check-context';
 import { CANTILEVER_CB, flexuralStrengthOf } from './flexural-strength';
 import { available, type Strength } from './strength-types';
+import { notComputedRow } from './not-computed';
 
 const PHI_B = 0.9;
 const OMEGA_B = 1.67;
@@ -57,17 +58,6 @@ export function flexureCheck(ctx: CheckContext): Check {
 
 /** A section the clauses give no strength (e.g. a web far beyond F13.2): failed, not computed. */
 function noCapacityRow(ctx: CheckContext, s: Strength, node: number): Check {
-  const check: Check = {
-    id: 'member.flexure',
-    title: 'Bending',
-    reference: `AISC 360-16 ${s.clause}`,
-    combination: null,
-    demand: null,
-    capacity: null,
-    ratio: null,
-    ok: false,
-    note: `no flexural strength could be computed for this section (${s.outOfScope ?? s.limitState}); use a stockier web or flange`,
-  };
-  if (!ctx.section.prismatic) check.at = quantity(ctx.model.grid.x[node], 'length', ctx.units);
-  return check;
+  const note = `no flexural strength could be computed for this section (${s.outOfScope ?? s.limitState}); use a stockier web or flange`;
+  return notComputedRow(ctx, 'member.flexure', 'Bending', `AISC 360-16 ${s.clause}`, note, node);
 }

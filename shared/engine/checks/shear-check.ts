@@ -9,6 +9,7 @@ import { quantity } from '../units';
 import { worstRatio, type CheckContext } from './check-context';
 import { shearStrength, type ShearStrength } from './shear-strength';
 import { available } from './strength-types';
+import { notComputedRow } from './not-computed';
 
 export function shearCheck(ctx: CheckContext): Check {
   const { model, section, method, units, Fy, E } = ctx;
@@ -21,19 +22,14 @@ export function shearCheck(ctx: CheckContext): Check {
   const w = worstRatio(ctx.combos, (r, i) => r.V[i], capacity, nodes);
   if (w.noCapacity >= 0) {
     // No positive shear strength at a station: a failed, uncomputed check, never a silent pass.
-    const failed: Check = {
-      id: 'member.shear',
-      title: 'Shear',
-      reference: `AISC 360-16 ${strengths[w.noCapacity].clause}`,
-      combination: null,
-      demand: null,
-      capacity: null,
-      ratio: null,
-      ok: false,
-      note: 'no shear strength could be computed for this section; check the web dimensions',
-    };
-    if (!section.prismatic) failed.at = quantity(model.grid.x[w.noCapacity], 'length', units);
-    return failed;
+    return notComputedRow(
+      ctx,
+      'member.shear',
+      'Shear',
+      `AISC 360-16 ${strengths[w.noCapacity].clause}`,
+      'no shear strength could be computed for this section; check the web dimensions',
+      w.noCapacity,
+    );
   }
   const s = strengths[w.node];
   const combo = ctx.combos[w.combo];
