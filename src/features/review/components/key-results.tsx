@@ -18,18 +18,25 @@ function Item({ term, value, detail }: { term: string; value: Quantity | string 
   );
 }
 
+function serviceDetail(combination: string | null | undefined, limit: Quantity | null | undefined): string | undefined {
+  if (!combination) return undefined;
+  return limit ? `${combination}, unfactored; limit ${formatQuantity(limit)}` : `${combination}, unfactored`;
+}
+
 /** Root moment, tip deflection, frequency and the connection at the pier, as stored with the revision. */
 export function KeyResults({ result, input }: { result: DesignResult; input: DesignDocument }) {
   const combos = result.member.combinations;
   const moment = largest(combos, (c) => c.rootMoment.value);
-  const deflection = largest(combos, (c) => c.tipDeflection.value);
-  const live = result.member.cases.L;
+  // Deflection is a serviceability value: show the engine's own service checks (unfactored
+  // ASD combinations), never the deflection under a factored strength combination.
+  const total = result.checks.find((c) => c.id === 'member.deflection.total');
+  const live = result.checks.find((c) => c.id === 'member.deflection.live');
   const connection = result.connection;
   return (
     <dl className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
       <Item term="Root moment (largest combination)" value={moment?.rootMoment} detail={moment?.name} />
-      <Item term="Tip deflection, live load" value={live?.tipDeflection} detail={live ? 'case L, unfactored' : 'no live load'} />
-      <Item term="Tip deflection (largest combination)" value={deflection?.tipDeflection} detail={deflection?.name} />
+      <Item term="Tip deflection, live load (service)" value={live?.demand} detail={serviceDetail(live?.combination, live?.capacity)} />
+      <Item term="Tip deflection, total load (service)" value={total?.demand} detail={serviceDetail(total?.combination, total?.capacity)} />
       <Item term="First natural frequency" value={result.member.frequency} />
       <Item term="Section" value={result.member.section.label} detail={`steel weight ${formatQuantity(result.member.steelWeight)}`} />
       {connection ? (
