@@ -1,7 +1,7 @@
 import type { RevisionDto } from '../../../../shared/schemas/api';
 import { diffDesigns } from '../../../../shared/schemas/diff';
 import { CautionNote } from '../../history/components/caution-note';
-import { VerdictWord } from '../../history/components/verdict-word';
+import { VerdictWord } from '../../../components/ui/verdict-word';
 import { useStations } from '../hooks/use-stations';
 import { ratioRows, ratioSummary } from '../utils/ratio-rows';
 import { ChangedInputsTable } from './changed-inputs-table';

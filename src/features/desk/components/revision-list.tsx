@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { ErrorNote, Loading } from '../../../components/ui/status';
-import { ReviewBadge } from '../../projects/components/review-badge';
+import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { useRevisions } from '../../revisions/api/get-revisions';
 
 /** The cantilever's revisions on the desk: number, author, message, date, review state. */
@@ -20,7 +20,7 @@ export function RevisionList({ cantileverId, current }: { cantileverId: number; 
               <span className="flex-1">{r.message}</span>
               <span className="text-xs text-concrete-600">{r.authorName}</span>
               <time className="num text-xs text-concrete-500" dateTime={r.createdAt}>{new Date(r.createdAt).toLocaleString()}</time>
-              <ReviewBadge state={r.reviewState} />
+              <ReviewStateBadge state={r.reviewState} />
             </li>
           ))}
         </ol>

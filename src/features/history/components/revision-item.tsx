@@ -3,8 +3,8 @@ import { Link } from 'react-router-dom';
 import { MessageSquare, Send } from 'lucide-react';
 import type { RevisionSummaryDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
-import { ReviewStateBadge } from './review-state-badge';
-import { VerdictWord } from './verdict-word';
+import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
+import { VerdictWord } from '../../../components/ui/verdict-word';
 import { CommentsThread } from './comments-thread';
 import { formatDateTime } from '../utils/format';
 

@@ -1,7 +1,8 @@
 import { Link } from 'react-router-dom';
 import type { CantileverDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
-import { ReviewBadge, VerdictWord } from './review-badge';
+import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
+import { VerdictWord } from '../../../components/ui/verdict-word';
 
 /** The project's cantilevers with their current revision, review state and pass/fail word. */
 export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] }) {
@@ -25,7 +26,7 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
               {c.description ? <div className="text-xs text-concrete-500">{c.description}</div> : null}
             </td>
             <td className="num py-2 pr-3">{c.currentRevisionNumber ? `rev ${c.currentRevisionNumber}` : '—'}</td>
-            <td className="py-2 pr-3"><ReviewBadge state={c.reviewState} /></td>
+            <td className="py-2 pr-3"><ReviewStateBadge state={c.reviewState} /></td>
             <td className="py-2 pr-3"><VerdictWord ok={c.ok} /></td>
             <td className="num py-2 text-xs text-concrete-600">{new Date(c.updatedAt).toLocaleString()}</td>
           </tr>

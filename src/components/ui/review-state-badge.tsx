@@ -1,5 +1,5 @@
 import { BadgeCheck, Hourglass, MessageSquareWarning, PencilLine, type LucideIcon } from 'lucide-react';
-import type { ReviewState } from '../../../../shared/schemas/api';
+import type { ReviewState } from '../../../shared/schemas/api';
 
 const STATES: Record<ReviewState, { word: string; Icon: LucideIcon; tone: string }> = {
   draft: { word: 'Draft', Icon: PencilLine, tone: 'border-concrete-300 bg-concrete-50 text-concrete-700' },
@@ -8,12 +8,9 @@ const STATES: Record<ReviewState, { word: string; Icon: LucideIcon; tone: string
   'changes-requested': { word: 'Changes requested', Icon: MessageSquareWarning, tone: 'border-util-over bg-white text-util-over' },
 };
 
-export function reviewStateWord(state: ReviewState): string {
-  return STATES[state].word;
-}
-
-/** The review state as a word and an icon, never colour alone. */
-export function ReviewStateBadge({ state }: { state: ReviewState }) {
+/** The review state as a word and an icon, never colour alone; the same words on every screen. */
+export function ReviewStateBadge({ state }: { state: ReviewState | null }) {
+  if (state === null) return <span className="text-xs text-concrete-500">no revision yet</span>;
   const { word, Icon, tone } = STATES[state];
   return (
     <span className={`inline-flex items-center gap-1 rounded border px-2 py-0.5 text-xs font-medium ${tone}`}>
