@@ -15,7 +15,7 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { chromium } from 'playwright-core';
+import { launchChromium } from '../tests/helpers/chromium';
 import { startServer } from '../server/start';
 
 const args = process.argv.slice(2);
@@ -109,12 +109,7 @@ async function main() {
   const uploadDir = join(dir, 'uploads');
   mkdirSync(uploadDir, { recursive: true });
   const server = await startServer({ port: 0, databaseUrl: join(dir, 'bench.sqlite'), uploadDir, dataDir: dir, ...(distDir ? { distDir } : {}) });
-  const context = await chromium.launchPersistentContext(join(dir, 'profile'), {
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-    viewport: { width: 1440, height: 960 },
-    baseURL: server.url,
-  });
+  const context = await launchChromium(join(dir, 'profile'), server.url);
   try {
     const login = await context.request.post(`${server.url}/api/auth/login`, { data: { email: 'engineer@reachline.test', password: 'reachline-demo' } });
     if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`);

@@ -6,7 +6,8 @@
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
+import { launchChromium } from './chromium';
 import { startServer } from '../../server/start';
 
 export const DEMO_PASSWORD = 'reachline-demo';
@@ -14,17 +15,6 @@ export type DemoRole = 'admin' | 'architect' | 'fabricator' | 'engineer';
 export const demoEmail = (role: DemoRole) => `${role}@reachline.test`;
 
 export const SCREEN_DIR = join(process.cwd(), 'tests', 'output', 'screens');
-
-const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
 
 export interface E2E {
   baseUrl: string;
@@ -54,12 +44,7 @@ export async function startE2E(): Promise<E2E> {
 
   async function newSession() {
     const profile = mkdtempSync(join(dir, 'profile-'));
-    const context = await chromium.launchPersistentContext(profile, {
-      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-      args: CHROMIUM_ARGS,
-      viewport: { width: 1440, height: 960 },
-      baseURL: server.url,
-    });
+    const context = await launchChromium(profile, server.url);
     contexts.push(context);
     const page = context.pages()[0] ?? (await context.newPage());
     page.on('pageerror', (err) => errors.push(`pageerror: ${err.message}`));
