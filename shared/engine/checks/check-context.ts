@@ -3,7 +3,7 @@ import type { MemberModel, Response } from '../member/analysis';
 import type { MemberSection } from '../sections/section-types';
 import type { Method } from '../types';
 import type { UnitSystem } from '../units';
-import { clearlyGreater } from './ties';
+import { clearlyGreater } from '../ties';
 
 export interface CombinationResponse {
   name: string;

@@ -10,7 +10,7 @@ import type { Check } from '../types';
 import type { Combination } from '../member/combinations';
 import { combinationName } from '../member/combinations';
 import { quantity, type UnitSystem } from '../units';
-import { clearlyGreater } from './ties';
+import { clearlyGreater } from '../ties';
 
 export interface DeflectionInputs {
   /** Unfactored tip deflection of each case present, in. */

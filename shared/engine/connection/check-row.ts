@@ -5,6 +5,7 @@
 import type { Check } from '../types';
 import type { ResultKind, UnitSystem } from '../units';
 import { resultQuantity as quantity } from './result-quantity';
+import { clearlyGreater } from '../ties';
 
 /** One check evaluated for one combination, internal units. */
 export interface Evaluation {
@@ -40,7 +41,7 @@ export function governing<T extends { ev: Evaluation }>(rows: readonly T[]): T |
   let worst: T | undefined;
   for (const row of rows) {
     if (row.ev.ratio === null) return row;
-    if (!worst || (worst.ev.ratio !== null && row.ev.ratio > worst.ev.ratio)) worst = row;
+    if (!worst || (worst.ev.ratio !== null && clearlyGreater(row.ev.ratio, worst.ev.ratio))) worst = row;
   }
   return worst;
 }

@@ -9,6 +9,7 @@ import type { ComboState } from './combo-state';
 import type { ConnectionGeometry } from './connection-geometry';
 import { nextStandardThickness } from './plate-thickness';
 import { rodEdgeMinimum } from './rod-positions';
+import { clearlyGreater } from '../ties';
 
 /** The combination with the largest plate utilisation (thickness or bearing) among those with a modelled solution. */
 function plateGoverning(states: readonly ComboState[], t: number, fpMax: number): ComboState | undefined {
@@ -20,7 +21,7 @@ function plateGoverning(states: readonly ComboState[], t: number, fpMax: number)
     if (!s.thickness || !s.thickness.tensionModelled || b.fp === null) continue;
     const bearing = b.case === 'large-moment' ? b.demandMoment / b.capacityMoment : b.fp / fpMax;
     const score = Math.max(s.thickness.required / t, bearing);
-    if (score > bestScore) {
+    if (bestScore === -Infinity || clearlyGreater(score, bestScore)) {
       bestScore = score;
       best = s;
     }
