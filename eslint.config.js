@@ -21,13 +21,19 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      'no-restricted-imports': ['error', { patterns: [{ group: ['**/server/**', '../server/*'], message: 'src/ never imports server/' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/server/**', '../server/*'], message: 'src/ never imports server/' }] },
+      ],
     },
   },
   {
     files: ['server/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['**/src/**'], message: 'server/ never imports src/' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/src/**'], message: 'server/ never imports src/' }] },
+      ],
     },
   },
   {

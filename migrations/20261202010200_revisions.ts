@@ -13,7 +13,12 @@ function sqlite(knex: Knex): boolean {
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('revisions', (t) => {
     t.increments('id').primary();
-    t.integer('cantilever_id').unsigned().notNullable().references('id').inTable('cantilevers').onDelete('CASCADE');
+    t.integer('cantilever_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('cantilevers')
+      .onDelete('CASCADE');
     t.integer('number').notNullable();
     t.integer('author_id').unsigned().notNullable().references('id').inTable('users');
     t.string('message', 500).notNullable();
@@ -27,7 +32,12 @@ export async function up(knex: Knex): Promise<void> {
   });
   await knex.schema.createTable('reviews', (t) => {
     t.increments('id').primary();
-    t.integer('revision_id').unsigned().notNullable().references('id').inTable('revisions').onDelete('CASCADE');
+    t.integer('revision_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('revisions')
+      .onDelete('CASCADE');
     t.string('state', 24).notNullable();
     t.integer('reviewer_id').unsigned().notNullable().references('id').inTable('users');
     t.text('comment').notNullable().defaultTo('');
@@ -36,7 +46,12 @@ export async function up(knex: Knex): Promise<void> {
   });
   await knex.schema.createTable('comments', (t) => {
     t.increments('id').primary();
-    t.integer('revision_id').unsigned().notNullable().references('id').inTable('revisions').onDelete('CASCADE');
+    t.integer('revision_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('revisions')
+      .onDelete('CASCADE');
     t.integer('author_id').unsigned().notNullable().references('id').inTable('users');
     t.text('body').notNullable();
     t.timestamp('created_at').notNullable();
@@ -74,7 +89,12 @@ export async function up(knex: Knex): Promise<void> {
 
 export async function down(knex: Knex): Promise<void> {
   if (sqlite(knex)) {
-    for (const name of ['reviews_immutable', 'reviews_keep_approval', 'revisions_keep_approved', 'revisions_immutable']) {
+    for (const name of [
+      'reviews_immutable',
+      'reviews_keep_approval',
+      'revisions_keep_approved',
+      'revisions_immutable',
+    ]) {
       await knex.raw(`DROP TRIGGER IF EXISTS ${name}`);
     }
   }

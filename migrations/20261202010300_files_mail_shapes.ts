@@ -4,7 +4,12 @@ import type { Knex } from 'knex';
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('attachments', (t) => {
     t.increments('id').primary();
-    t.integer('cantilever_id').unsigned().notNullable().references('id').inTable('cantilevers').onDelete('CASCADE');
+    t.integer('cantilever_id')
+      .unsigned()
+      .notNullable()
+      .references('id')
+      .inTable('cantilevers')
+      .onDelete('CASCADE');
     t.string('original_name', 255).notNullable();
     t.string('stored_name', 64).notNullable().unique();
     t.string('mime_type', 64).notNullable();

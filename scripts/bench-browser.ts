@@ -50,9 +50,13 @@ interface TraceEvent {
 
 /** Self time of the renderer main thread's trace events by name, in ms per change, the largest first. */
 function summariseTrace(events: TraceEvent[], changes: number): [string, number][] {
-  const main = events.find((e) => e.ph === 'M' && e.name === 'thread_name' && e.args?.name === 'CrRendererMain');
+  const main = events.find(
+    (e) => e.ph === 'M' && e.name === 'thread_name' && e.args?.name === 'CrRendererMain',
+  );
   const spans = events
-    .filter((e) => main && e.pid === main.pid && e.tid === main.tid && e.ph === 'X' && typeof e.dur === 'number')
+    .filter(
+      (e) => main && e.pid === main.pid && e.tid === main.tid && e.ph === 'X' && typeof e.dur === 'number',
+    )
     .sort((a, b) => a.ts - b.ts || (b.dur ?? 0) - (a.dur ?? 0));
   const self = new Map<string, number>();
   const stack: { end: number; name: string }[] = [];
@@ -63,11 +67,17 @@ function summariseTrace(events: TraceEvent[], changes: number): [string, number]
     self.set(e.name, (self.get(e.name) ?? 0) + (e.dur ?? 0) / 1000);
     stack.push({ end: e.ts + (e.dur ?? 0), name: e.name });
   }
-  return [...self].map(([n, ms]) => [n, ms / changes] as [string, number]).sort((a, b) => b[1] - a[1]).slice(0, 25);
+  return [...self]
+    .map(([n, ms]) => [n, ms / changes] as [string, number])
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, 25);
 }
 
 /** Self time by function and by script file, and total time by function, in ms per change, the largest first. */
-function summariseProfile(cpu: CpuProfile, changes: number): { byFunction: [string, number][]; byFile: [string, number][]; inclusive: [string, number][] } {
+function summariseProfile(
+  cpu: CpuProfile,
+  changes: number,
+): { byFunction: [string, number][]; byFile: [string, number][]; inclusive: [string, number][] } {
   const self = new Map<number, number>();
   cpu.samples.forEach((id, i) => self.set(id, (self.get(id) ?? 0) + (cpu.timeDeltas[i] ?? 0) / 1000));
   const parent = new Map<number, ProfileNode>();
@@ -108,20 +118,35 @@ async function main() {
   const dir = mkdtempSync(join(tmpdir(), 'reachline-bench-'));
   const uploadDir = join(dir, 'uploads');
   mkdirSync(uploadDir, { recursive: true });
-  const server = await startServer({ port: 0, databaseUrl: join(dir, 'bench.sqlite'), uploadDir, dataDir: dir, ...(distDir ? { distDir } : {}) });
+  const server = await startServer({
+    port: 0,
+    databaseUrl: join(dir, 'bench.sqlite'),
+    uploadDir,
+    dataDir: dir,
+    ...(distDir ? { distDir } : {}),
+  });
   const context = await launchChromium(join(dir, 'profile'), server.url);
   try {
-    const login = await context.request.post(`${server.url}/api/auth/login`, { data: { email: 'engineer@reachline.test', password: 'reachline-demo' } });
+    const login = await context.request.post(`${server.url}/api/auth/login`, {
+      data: { email: 'engineer@reachline.test', password: 'reachline-demo' },
+    });
     if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`);
-    const projects = (await (await context.request.get(`${server.url}/api/projects`)).json()) as { id: number }[];
-    const project = (await (await context.request.get(`${server.url}/api/projects/${projects[0].id}`)).json()) as { cantilevers: { id: number }[] };
+    const projects = (await (await context.request.get(`${server.url}/api/projects`)).json()) as {
+      id: number;
+    }[];
+    const project = (await (
+      await context.request.get(`${server.url}/api/projects/${projects[0].id}`)
+    ).json()) as { cantilevers: { id: number }[] };
     // Snapshot of the chart lines at the moment of each redraw measure, for the guard below.
     await context.addInitScript(() => {
       const measure = performance.measure.bind(performance);
       const snapshots: string[] = [];
       Object.assign(window, { __deskRedrawSnapshots: snapshots });
       performance.measure = ((...args: Parameters<typeof measure>) => {
-        if (args[0] === 'desk-redraw') snapshots.push([...document.querySelectorAll('.recharts-line-curve')].map((p) => p.getAttribute('d')).join('|'));
+        if (args[0] === 'desk-redraw')
+          snapshots.push(
+            [...document.querySelectorAll('.recharts-line-curve')].map((p) => p.getAttribute('d')).join('|'),
+          );
         return measure(...args);
       }) as typeof performance.measure;
     });
@@ -130,7 +155,9 @@ async function main() {
     await page.getByTestId('tip-deflection').waitFor();
     const length = page.locator('#f-member-length');
     // Builds before the measure moved to the commit record only "desk-redraw" (at the next task).
-    const hasNextTask = await page.evaluate(() => performance.getEntriesByName('desk-redraw-next-task', 'measure').length > 0);
+    const hasNextTask = await page.evaluate(
+      () => performance.getEntriesByName('desk-redraw-next-task', 'measure').length > 0,
+    );
     await page.evaluate(() => {
       performance.clearMeasures('desk-redraw');
       performance.clearMeasures('desk-redraw-next-task');
@@ -139,7 +166,9 @@ async function main() {
     const cdp = await context.newCDPSession(page);
     await cdp.send('Performance.enable');
     const metric = async (name: string) => {
-      const { metrics } = (await cdp.send('Performance.getMetrics')) as { metrics: { name: string; value: number }[] };
+      const { metrics } = (await cdp.send('Performance.getMetrics')) as {
+        metrics: { name: string; value: number }[];
+      };
       return metrics.find((m) => m.name === name)?.value ?? 0;
     };
     const cpuBefore = await metric('ThreadTime');
@@ -152,30 +181,55 @@ async function main() {
     }
     const traceEvents: TraceEvent[] = [];
     if (trace) {
-      cdp.on('Tracing.dataCollected', (e) => { traceEvents.push(...(e.value as unknown as TraceEvent[])); });
-      await cdp.send('Tracing.start', { categories: 'devtools.timeline,disabled-by-default-devtools.timeline,blink,v8', transferMode: 'ReportEvents' });
+      cdp.on('Tracing.dataCollected', (e) => {
+        traceEvents.push(...(e.value as unknown as TraceEvent[]));
+      });
+      await cdp.send('Tracing.start', {
+        categories: 'devtools.timeline,disabled-by-default-devtools.timeline,blink,v8',
+        transferMode: 'ReportEvents',
+      });
     }
     const counts = () =>
-      page.evaluate(() => [performance.getEntriesByName('desk-redraw', 'measure').length, performance.getEntriesByName('desk-redraw-next-task', 'measure').length]);
-    const curves = () => page.evaluate(() => [...document.querySelectorAll('.recharts-line-curve')].map((p) => p.getAttribute('d')).join('|'));
+      page.evaluate(() => [
+        performance.getEntriesByName('desk-redraw', 'measure').length,
+        performance.getEntriesByName('desk-redraw-next-task', 'measure').length,
+      ]);
+    const curves = () =>
+      page.evaluate(() =>
+        [...document.querySelectorAll('.recharts-line-curve')].map((p) => p.getAttribute('d')).join('|'),
+      );
     let early = 0;
     for (let i = 0; i < runs; i += 1) {
       const [before, beforeNext] = await counts();
       await length.fill(`${(8 + (i % 6) * 0.5).toFixed(1)} ft`);
-      await page.waitForFunction((n) => performance.getEntriesByName('desk-redraw', 'measure').length > n, before, { timeout: 10_000, polling: 20 });
+      await page.waitForFunction(
+        (n) => performance.getEntriesByName('desk-redraw', 'measure').length > n,
+        before,
+        { timeout: 10_000, polling: 20 },
+      );
       if (hasNextTask) {
-        await page.waitForFunction((n) => performance.getEntriesByName('desk-redraw-next-task', 'measure').length > n, beforeNext, { timeout: 10_000, polling: 20 });
+        await page.waitForFunction(
+          (n) => performance.getEntriesByName('desk-redraw-next-task', 'measure').length > n,
+          beforeNext,
+          { timeout: 10_000, polling: 20 },
+        );
       }
-      const atMeasure = await page.evaluate(() => (window as unknown as { __deskRedrawSnapshots: string[] }).__deskRedrawSnapshots.at(-1));
+      const atMeasure = await page.evaluate(() =>
+        (window as unknown as { __deskRedrawSnapshots: string[] }).__deskRedrawSnapshots.at(-1),
+      );
       if (atMeasure !== (await curves())) early += 1;
     }
-    if (early > 0) throw new Error(`${early} of ${runs} redraw measures were taken before the charts showed the new result`);
+    if (early > 0)
+      throw new Error(
+        `${early} of ${runs} redraw measures were taken before the charts showed the new result`,
+      );
     if (trace) {
       const done = new Promise<void>((resolve) => cdp.once('Tracing.tracingComplete', () => resolve()));
       await cdp.send('Tracing.end');
       await done;
       console.log('main-thread trace, self time per change by event (ms):');
-      for (const [name, ms] of summariseTrace(traceEvents, runs)) console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
+      for (const [name, ms] of summariseTrace(traceEvents, runs))
+        console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
     }
     if (profile) {
       const { profile: cpu } = (await cdp.send('Profiler.stop')) as unknown as { profile: CpuProfile };
@@ -190,27 +244,62 @@ async function main() {
       console.log('total time per change, by function (ms):');
       for (const [name, ms] of inclusive) console.log(`  ${ms.toFixed(2).padStart(7)}  ${name}`);
     }
-    const cpuPerChange = ((await metric('ThreadTime')) - cpuBefore) * 1000 / runs;
-    const scriptPerChange = ((await metric('ScriptDuration')) - scriptBefore) * 1000 / runs;
-    const layoutPerChange = ((await metric('LayoutDuration')) + (await metric('RecalcStyleDuration')) - layoutBefore) * 1000 / runs;
-    const samples = await page.evaluate(() => performance.getEntriesByName('desk-redraw', 'measure').map((e) => e.duration));
-    const nextTask = await page.evaluate(() => performance.getEntriesByName('desk-redraw-next-task', 'measure').map((e) => e.duration));
-    const engine = await page.evaluate(() => performance.getEntriesByName('desk-engine', 'measure').map((e) => e.duration));
+    const cpuPerChange = (((await metric('ThreadTime')) - cpuBefore) * 1000) / runs;
+    const scriptPerChange = (((await metric('ScriptDuration')) - scriptBefore) * 1000) / runs;
+    const layoutPerChange =
+      (((await metric('LayoutDuration')) + (await metric('RecalcStyleDuration')) - layoutBefore) * 1000) /
+      runs;
+    const samples = await page.evaluate(() =>
+      performance.getEntriesByName('desk-redraw', 'measure').map((e) => e.duration),
+    );
+    const nextTask = await page.evaluate(() =>
+      performance.getEntriesByName('desk-redraw-next-task', 'measure').map((e) => e.duration),
+    );
+    const engine = await page.evaluate(() =>
+      performance.getEntriesByName('desk-engine', 'measure').map((e) => e.duration),
+    );
     const points = await page.evaluate(() => document.querySelectorAll('.recharts-line-curve').length);
-    if (!json) console.log(`main thread per change: ${cpuPerChange.toFixed(1)} ms CPU (script ${scriptPerChange.toFixed(1)} ms, style+layout ${layoutPerChange.toFixed(1)} ms)`);
-    if (!json) console.log(`engine round trip median ${[...engine].sort((a, b) => a - b)[Math.floor(engine.length / 2)]?.toFixed(1)} ms; ${points} curves`);
+    if (!json)
+      console.log(
+        `main thread per change: ${cpuPerChange.toFixed(1)} ms CPU (script ${scriptPerChange.toFixed(1)} ms, style+layout ${layoutPerChange.toFixed(1)} ms)`,
+      );
+    if (!json)
+      console.log(
+        `engine round trip median ${[...engine].sort((a, b) => a - b)[Math.floor(engine.length / 2)]?.toFixed(1)} ms; ${points} curves`,
+      );
     const sorted = [...samples].sort((a, b) => a - b);
-    const median = sorted.length % 2 ? sorted[(sorted.length - 1) / 2] : (sorted[sorted.length / 2 - 1] + sorted[sorted.length / 2]) / 2;
+    const median =
+      sorted.length % 2
+        ? sorted[(sorted.length - 1) / 2]
+        : (sorted[sorted.length / 2 - 1] + sorted[sorted.length / 2]) / 2;
     const p95 = percentile(sorted, 0.95);
     // The lower quartile moves least when other work shares the machine: useful to compare builds.
     const p25 = percentile(sorted, 0.25);
     const round = (n: number) => Math.round(n * 10) / 10;
-    if (json) console.log(JSON.stringify({ deskRedrawMedianMs: round(median), deskRedrawP95Ms: round(p95), deskRedrawP25Ms: round(p25), nextTaskMedianMs: nextTask.length > 0 ? round([...nextTask].sort((a, b) => a - b)[Math.floor(nextTask.length / 2)]) : null, mainThreadCpuPerChangeMs: round(cpuPerChange), runs: samples.length }));
+    if (json)
+      console.log(
+        JSON.stringify({
+          deskRedrawMedianMs: round(median),
+          deskRedrawP95Ms: round(p95),
+          deskRedrawP25Ms: round(p25),
+          nextTaskMedianMs:
+            nextTask.length > 0
+              ? round([...nextTask].sort((a, b) => a - b)[Math.floor(nextTask.length / 2)])
+              : null,
+          mainThreadCpuPerChangeMs: round(cpuPerChange),
+          runs: samples.length,
+        }),
+      );
     if (!json && nextTask.length > 0) {
       const n = [...nextTask].sort((a, b) => a - b);
-      console.log(`to the next task after the commit (after any frame painted first): median ${round(n[Math.floor(n.length / 2)])} ms, p95 ${round(percentile(n, 0.95))} ms`);
+      console.log(
+        `to the next task after the commit (after any frame painted first): median ${round(n[Math.floor(n.length / 2)])} ms, p95 ${round(percentile(n, 0.95))} ms`,
+      );
     }
-    if (!json) console.log(`desk redraw over ${samples.length} changes: median ${round(median)} ms, p95 ${round(p95)} ms, p25 ${round(p25)} ms (target: median under 50 ms)`);
+    if (!json)
+      console.log(
+        `desk redraw over ${samples.length} changes: median ${round(median)} ms, p95 ${round(p95)} ms, p25 ${round(p25)} ms (target: median under 50 ms)`,
+      );
   } finally {
     await context.close();
     await server.close();

@@ -33,7 +33,11 @@ function sweepInputs(base: DesignInput): DesignInput[] {
     for (let j = 0; j < 40; j++) {
       const tipDepth = `${(4 + (j * 7.5) / 39).toFixed(3)} in`; // W12X26 is 12.2 in deep at the root
       const loads = { ...base.loads, point: base.loads.point.map((p) => ({ ...p, at: length })) }; // the guard stays at the tip
-      inputs.push({ ...base, loads, member: { ...base.member, length, unbracedLength: undefined, section: { shape: 'W12X26', tipDepth } } });
+      inputs.push({
+        ...base,
+        loads,
+        member: { ...base.member, length, unbracedLength: undefined, section: { shape: 'W12X26', tipDepth } },
+      });
     }
   }
   return inputs;
@@ -65,8 +69,12 @@ function main(): void {
     return;
   }
   console.log(`member design, median of 3000: ${memberDesignMedianMs.toFixed(4)} ms (target < 0.2 ms)`);
-  console.log(`40 x 40 sweep of length x tip depth, median of 5: ${sweep1600Ms.toFixed(1)} ms (target < 500 ms)`);
-  console.log(`full design with connection, median of 3000: ${fullDesignMedianMs.toFixed(4)} ms (target < 0.3 ms)`);
+  console.log(
+    `40 x 40 sweep of length x tip depth, median of 5: ${sweep1600Ms.toFixed(1)} ms (target < 500 ms)`,
+  );
+  console.log(
+    `full design with connection, median of 3000: ${fullDesignMedianMs.toFixed(4)} ms (target < 0.3 ms)`,
+  );
 }
 
 main();

@@ -12,8 +12,31 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 
 const KEEP = [
-  'W', 'A', 'd', 'bf', 'tf', 'tw', 'kdes', 'Ht', 'B', 'tdes', 'OD', 'Ix', 'Zx', 'Sx', 'rx',
-  'Iy', 'Zy', 'Sy', 'ry', 'J', 'Cw', 'rts', 'ho', 'x', 'eo',
+  'W',
+  'A',
+  'd',
+  'bf',
+  'tf',
+  'tw',
+  'kdes',
+  'Ht',
+  'B',
+  'tdes',
+  'OD',
+  'Ix',
+  'Zx',
+  'Sx',
+  'rx',
+  'Iy',
+  'Zy',
+  'Sy',
+  'ry',
+  'J',
+  'Cw',
+  'rts',
+  'ho',
+  'x',
+  'eo',
 ] as const;
 
 function wanted(type: string, label: string, od: string): string | null {

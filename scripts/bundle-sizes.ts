@@ -14,7 +14,8 @@ const gz = new Map(files.map((f) => [f, gzipSync(readFileSync(join(dir, f))).len
 function staticImports(file: string): string[] {
   const code = readFileSync(join(dir, file), 'utf8');
   const out = new Set<string>();
-  for (const m of code.matchAll(/(?:import|export)\s*(?:[\w${}\s,*]*?from\s*)?["']\.\/([^"']+\.js)["']/g)) out.add(m[1]);
+  for (const m of code.matchAll(/(?:import|export)\s*(?:[\w${}\s,*]*?from\s*)?["']\.\/([^"']+\.js)["']/g))
+    out.add(m[1]);
   return [...out];
 }
 
@@ -29,7 +30,18 @@ const html = readFileSync(join(process.cwd(), 'dist', 'index.html'), 'utf8');
 const entry = /assets\/(index-[\w-]+\.js)/.exec(html)?.[1];
 if (!entry) throw new Error('no entry chunk in dist/index.html: run `npx vite build` first');
 const base = closure(entry);
-const routes = ['sign-in', 'projects', 'project', 'design-desk', 'shapes', 'history', 'compare', 'review', 'team', 'outbox'];
+const routes = [
+  'sign-in',
+  'projects',
+  'project',
+  'design-desk',
+  'shapes',
+  'history',
+  'compare',
+  'review',
+  'team',
+  'outbox',
+];
 const kb = (n: number) => Math.round(n / 102.4) / 10;
 const report: Record<string, number> = {};
 for (const route of routes) {
@@ -42,4 +54,6 @@ const workers = files.filter((f) => /worker/i.test(f));
 for (const w of workers) report[`worker:${w.replace(/-[\w-]{8}\.js$/, '')}`] = kb(gz.get(w) ?? 0);
 
 if (process.argv.includes('--json')) console.log(JSON.stringify(report));
-else for (const [name, size] of Object.entries(report)) console.log(`${name.padEnd(28)} ${size.toFixed(1).padStart(7)} KB gzip`);
+else
+  for (const [name, size] of Object.entries(report))
+    console.log(`${name.padEnd(28)} ${size.toFixed(1).padStart(7)} KB gzip`);

@@ -7,7 +7,9 @@ import { spawn, type ChildProcess } from 'node:child_process';
 
 const apiPort = process.env.PORT ?? '3000';
 if (apiPort !== '3000') {
-  console.warn(`PORT=${apiPort}: the Vite proxy in vite.config.ts expects the API on 3000; /api calls from the dev page will miss it.`);
+  console.warn(
+    `PORT=${apiPort}: the Vite proxy in vite.config.ts expects the API on 3000; /api calls from the dev page will miss it.`,
+  );
 }
 
 const children: ChildProcess[] = [];
@@ -40,5 +42,9 @@ function shutdown(code: number): void {
 process.on('SIGINT', () => shutdown(0));
 process.on('SIGTERM', () => shutdown(0));
 
-run('API', 'npx', ['tsx', 'watch', '--clear-screen=false', 'server/index.ts'], { ...process.env, PORT: apiPort, NODE_ENV: process.env.NODE_ENV ?? 'development' });
+run('API', 'npx', ['tsx', 'watch', '--clear-screen=false', 'server/index.ts'], {
+  ...process.env,
+  PORT: apiPort,
+  NODE_ENV: process.env.NODE_ENV ?? 'development',
+});
 run('Vite', 'npx', ['vite']);

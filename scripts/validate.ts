@@ -20,7 +20,9 @@ function run(label: string, cmd: string, args: string[]): boolean {
   console.log(`\n=== ${label}: ${cmd} ${args.join(' ')}`);
   const started = Date.now();
   const r = spawnSync(cmd, args, { stdio: 'inherit', env: process.env });
-  console.log(`=== ${label}: ${r.status === 0 ? 'ok' : `failed (exit ${r.status})`} in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+  console.log(
+    `=== ${label}: ${r.status === 0 ? 'ok' : `failed (exit ${r.status})`} in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+  );
   return r.status === 0;
 }
 
@@ -33,18 +35,30 @@ function vitest(project: string): void {
   const report = `${outDir}/vitest-${project}.json`;
   rmSync(report, { force: true });
   const ok = run(`tests (${project})`, 'npx', [
-    'vitest', 'run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile=${report}`,
+    'vitest',
+    'run',
+    '--project',
+    project,
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile=${report}`,
   ]);
   if (!existsSync(report)) {
     total.failed += 1; // the runner itself failed before reporting
     return;
   }
   const json = JSON.parse(readFileSync(report, 'utf8')) as {
-    numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number;
-    numFailedTestSuites: number; numTotalTests: number;
+    numPassedTests: number;
+    numFailedTests: number;
+    numPendingTests: number;
+    numTodoTests: number;
+    numFailedTestSuites: number;
+    numTotalTests: number;
   };
   total.passed += json.numPassedTests;
-  total.failed += json.numFailedTests + (json.numFailedTestSuites > 0 && json.numFailedTests === 0 ? json.numFailedTestSuites : 0);
+  total.failed +=
+    json.numFailedTests +
+    (json.numFailedTestSuites > 0 && json.numFailedTests === 0 ? json.numFailedTestSuites : 0);
   total.skipped += json.numPendingTests + json.numTodoTests;
   if (json.numTotalTests === 0) {
     console.log(`=== ${project}: no tests ran`);

@@ -5,7 +5,10 @@ import { startServer } from './start';
 async function main(): Promise<void> {
   const running = await startServer();
   console.log(`Reachline is running at ${running.url}`);
-  if (running.fakeSmtp) console.log(`Mail goes to the local fake SMTP server (${running.fakeSmtp.url}); read it on the Outbox screen.`);
+  if (running.fakeSmtp)
+    console.log(
+      `Mail goes to the local fake SMTP server (${running.fakeSmtp.url}); read it on the Outbox screen.`,
+    );
   let stopping = false;
   const stop = (signal: string) => {
     if (stopping) return;

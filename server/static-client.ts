@@ -12,7 +12,12 @@ export function serveClient(app: Express, distDir: string): void {
   app.use(
     '/assets',
     // A missing hashed asset is a 404, never the page (a browser would try to run HTML as a module).
-    express.static(join(distDir, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: false }),
+    express.static(join(distDir, 'assets'), {
+      immutable: true,
+      maxAge: '365d',
+      index: false,
+      fallthrough: false,
+    }),
   );
   app.use(express.static(distDir, { index: false, maxAge: 0 }));
   app.get('/{*splat}', (req, res, next) => {
@@ -21,7 +26,9 @@ export function serveClient(app: Express, distDir: string): void {
       res
         .status(503)
         .type('text/plain')
-        .send('The Reachline client is not built yet. Run `npm run build` (or `npm start`, which builds first), then reload.');
+        .send(
+          'The Reachline client is not built yet. Run `npm run build` (or `npm start`, which builds first), then reload.',
+        );
       return;
     }
     res.setHeader('Cache-Control', 'no-cache');

@@ -24,7 +24,10 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
     return super.set(sid, session, callback).catch(() => undefined);
   }
 
-  override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): Promise<SessionData | null> {
+  override get(
+    sid: string,
+    callback: (err: unknown, session?: SessionData | null) => void,
+  ): Promise<SessionData | null> {
     return super.get(sid, callback).catch(() => null);
   }
 

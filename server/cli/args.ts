@@ -13,7 +13,11 @@ export interface ParsedArgs {
  * @param known flags without a value, e.g. ["--json"]
  * @param withValue flags that take the next argument as value, e.g. ["--family"]
  */
-export function parseArgs(args: readonly string[], known: readonly string[], withValue: readonly string[] = []): ParsedArgs {
+export function parseArgs(
+  args: readonly string[],
+  known: readonly string[],
+  withValue: readonly string[] = [],
+): ParsedArgs {
   const out: ParsedArgs = { positionals: [], flags: new Set(), values: new Map(), unknown: [] };
   for (let i = 0; i < args.length; i++) {
     const a = args[i];

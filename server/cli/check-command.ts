@@ -20,7 +20,12 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   try {
     text = source === '-' ? await io.readStdin() : await readFile(source, 'utf8');
   } catch (e) {
-    return invalid(io, [{ path: '(document)', message: `cannot read ${source}: ${(e as NodeJS.ErrnoException).code ?? String(e)}` }]);
+    return invalid(io, [
+      {
+        path: '(document)',
+        message: `cannot read ${source}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`,
+      },
+    ]);
   }
   let json: unknown;
   try {

@@ -16,10 +16,18 @@ async function main(command: string | undefined): Promise<number> {
   const db = createDb(config.databaseUrl);
   try {
     const ran = await migrateLatest(db);
-    console.log(ran.length ? `Applied ${ran.length} migration(s): ${ran.join(', ')}` : 'The database schema is up to date.');
+    console.log(
+      ran.length
+        ? `Applied ${ran.length} migration(s): ${ran.join(', ')}`
+        : 'The database schema is up to date.',
+    );
     if (command === 'seed') {
       const seeded = await seedDemoIfEmpty(db, config.passwordCost);
-      console.log(seeded ? 'Seeded the demo project and accounts (password: reachline-demo).' : 'The database already has accounts; the demo was not seeded.');
+      console.log(
+        seeded
+          ? 'Seeded the demo project and accounts (password: reachline-demo).'
+          : 'The database already has accounts; the demo was not seeded.',
+      );
     }
     console.log(`Database: ${config.databaseUrl}`);
     return 0;

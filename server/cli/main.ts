@@ -67,7 +67,8 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
   if (command === 'shapes') {
     const a = parseArgs(rest, ['--json', '--help', '-h'], ['--family']);
     if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
-    if (a.unknown.length || a.positionals.length) return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
+    if (a.unknown.length || a.positionals.length)
+      return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
     return shapesCommand(a.flags.has('--json'), a.values.get('--family'), io);
   }
   return usage(io, `unknown command "${command}"`);

@@ -20,11 +20,28 @@ export function shapesCommand(json: boolean, family: string | undefined, io: Cli
     return 0;
   }
   const cols = ['W', 'A', 'd', 'Ix', 'Sx', 'Zx', 'ry'] as const;
-  const lines = [`# ${SHAPES_SOURCE}`, ['label'.padEnd(22), 'family'.padEnd(6), ...cols.map((c) => c.padStart(8))].join(' ')];
+  const lines = [
+    `# ${SHAPES_SOURCE}`,
+    ['label'.padEnd(22), 'family'.padEnd(6), ...cols.map((c) => c.padStart(8))].join(' '),
+  ];
   for (const s of shapes) {
     const depth = s.d ?? s.Ht ?? s.OD;
-    const row: Record<(typeof cols)[number], number | undefined> = { W: s.W, A: s.A, d: depth, Ix: s.Ix, Sx: s.Sx, Zx: s.Zx, ry: s.ry };
-    lines.push([s.label.padEnd(22), s.family.padEnd(6), ...cols.map((c) => (row[c] === undefined ? '' : String(row[c])).padStart(8))].join(' '));
+    const row: Record<(typeof cols)[number], number | undefined> = {
+      W: s.W,
+      A: s.A,
+      d: depth,
+      Ix: s.Ix,
+      Sx: s.Sx,
+      Zx: s.Zx,
+      ry: s.ry,
+    };
+    lines.push(
+      [
+        s.label.padEnd(22),
+        s.family.padEnd(6),
+        ...cols.map((c) => (row[c] === undefined ? '' : String(row[c])).padStart(8)),
+      ].join(' '),
+    );
   }
   io.out(`${lines.join('\n')}\n`);
   return 0;

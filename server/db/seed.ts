@@ -47,8 +47,18 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
     for (const id of Object.values(ids)) await addMember(trx, projectId, id);
 
     const designs = [
-      { name: 'East deck, typical beam', description: 'Six beams at 4 ft, web tapered to 7 in at the tip, posts on piers.', doc: EAST_DECK_DESIGN, author: ids.architect },
-      { name: 'Entry canopy', description: 'Tube outriggers over the front door, end plates on the wall.', doc: ENTRY_CANOPY_DESIGN, author: ids.engineer },
+      {
+        name: 'East deck, typical beam',
+        description: 'Six beams at 4 ft, web tapered to 7 in at the tip, posts on piers.',
+        doc: EAST_DECK_DESIGN,
+        author: ids.architect,
+      },
+      {
+        name: 'Entry canopy',
+        description: 'Tube outriggers over the front door, end plates on the wall.',
+        doc: ENTRY_CANOPY_DESIGN,
+        author: ids.engineer,
+      },
     ];
     for (const d of designs) {
       const parsed = designSchema.safeParse(d.doc);
@@ -56,7 +66,11 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
         const first = toFieldIssues(parsed.error)[0];
         throw new Error(`The demo design "${d.name}" is not valid: ${first.path}: ${first.message}`);
       }
-      const cantileverId = await insertCantilever(trx, { projectId, name: d.name, description: d.description });
+      const cantileverId = await insertCantilever(trx, {
+        projectId,
+        name: d.name,
+        description: d.description,
+      });
       await insertRevision(trx, {
         cantileverId,
         number: 1,

@@ -15,8 +15,10 @@ export class HttpError extends Error {
   }
 }
 
-export const badRequest = (message: string, issues: FieldIssue[] = []) => new HttpError(400, 'invalid_input', message, issues);
+export const badRequest = (message: string, issues: FieldIssue[] = []) =>
+  new HttpError(400, 'invalid_input', message, issues);
 export const unauthorized = () => new HttpError(401, 'unauthorized', 'Sign in first.');
-export const forbidden = (message: string, issues: FieldIssue[] = []) => new HttpError(403, 'forbidden', message, issues);
+export const forbidden = (message: string, issues: FieldIssue[] = []) =>
+  new HttpError(403, 'forbidden', message, issues);
 export const notFound = (what = 'item') => new HttpError(404, 'not_found', `No such ${what}.`);
 export const conflict = (code: string, message: string) => new HttpError(409, code, message);

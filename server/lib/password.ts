@@ -9,7 +9,9 @@ const KEY_LENGTH = 64;
 function derive(password: string, salt: Buffer, N: number): Promise<Buffer> {
   const options: ScryptOptions = { N, r: 8, p: 1, maxmem: 256 * N * 8 + 1024 * 1024 };
   return new Promise((resolve, reject) => {
-    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (err, key) => (err ? reject(err) : resolve(key)));
+    scrypt(password.normalize('NFKC'), salt, KEY_LENGTH, options, (err, key) =>
+      err ? reject(err) : resolve(key),
+    );
   });
 }
 

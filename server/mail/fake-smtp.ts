@@ -51,7 +51,9 @@ function extractText(headers: Map<string, string>, body: string): string {
   }
   const encoding = (headers.get('content-transfer-encoding') ?? '').toLowerCase();
   if (encoding === 'quoted-printable') {
-    const bytes = body.replace(/=\r\n/g, '').replace(/=([0-9A-F]{2})/gi, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+    const bytes = body
+      .replace(/=\r\n/g, '')
+      .replace(/=([0-9A-F]{2})/gi, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16)));
     return Buffer.from(bytes, 'latin1').toString('utf8').trim();
   }
   if (encoding === 'base64') return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8').trim();
@@ -82,7 +84,10 @@ export async function startFakeSmtp(db: Knex | null, port = 0): Promise<FakeSmtp
         };
         received.push(mail);
         const mark = db && mail.outboxId ? markCaptured(db, mail.outboxId) : Promise.resolve();
-        mark.then(() => callback(), (err: Error) => callback(err));
+        mark.then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
       });
     },
   });

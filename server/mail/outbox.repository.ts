@@ -67,14 +67,25 @@ export async function listOutbox(db: Knex, limit = 200): Promise<OutboxRow[]> {
 }
 
 export async function dueMail(db: Knex, now: string, limit = 20): Promise<OutboxRow[]> {
-  return db<OutboxRow>('outbox').where({ status: 'pending' }).andWhere('next_attempt_at', '<=', now).orderBy('id').limit(limit);
+  return db<OutboxRow>('outbox')
+    .where({ status: 'pending' })
+    .andWhere('next_attempt_at', '<=', now)
+    .orderBy('id')
+    .limit(limit);
 }
 
 export async function markSent(db: Knex, id: number): Promise<void> {
-  await db('outbox').where({ id }).update({ status: 'sent', sent_at: nowIso(), last_error: null, attempts: db.raw('attempts + 1') });
+  await db('outbox')
+    .where({ id })
+    .update({ status: 'sent', sent_at: nowIso(), last_error: null, attempts: db.raw('attempts + 1') });
 }
 
-export async function markAttemptFailed(db: Knex, id: number, error: string, nextAttemptAt: string | null): Promise<void> {
+export async function markAttemptFailed(
+  db: Knex,
+  id: number,
+  error: string,
+  nextAttemptAt: string | null,
+): Promise<void> {
   await db('outbox')
     .where({ id })
     .update({
@@ -91,5 +102,7 @@ export async function markCaptured(db: Knex, id: number): Promise<void> {
 
 /** Makes failed and waiting messages due now (the admin's "retry now"). */
 export async function retryNow(db: Knex): Promise<number> {
-  return db('outbox').whereIn('status', ['pending', 'failed']).update({ status: 'pending', next_attempt_at: nowIso() });
+  return db('outbox')
+    .whereIn('status', ['pending', 'failed'])
+    .update({ status: 'pending', next_attempt_at: nowIso() });
 }

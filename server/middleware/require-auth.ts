@@ -10,7 +10,8 @@ export const requireAuth: RequestHandler = (req, _res, next) => {
 export function requireRole(roles: readonly Role[], what: string): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) return next(unauthorized());
-    if (!roles.includes(req.user.role)) return next(forbidden(`Your role (${req.user.role}) may not ${what}.`));
+    if (!roles.includes(req.user.role))
+      return next(forbidden(`Your role (${req.user.role}) may not ${what}.`));
     next();
   };
 }

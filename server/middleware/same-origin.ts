@@ -16,7 +16,10 @@ export const sameOrigin: RequestHandler = (req, _res, next) => {
   } catch {
     return next(forbidden('The request came from a page of another site.'));
   }
-  const expected = req.headers['x-forwarded-host'] && req.app.get('trust proxy') ? String(req.headers['x-forwarded-host']) : req.headers.host;
+  const expected =
+    req.headers['x-forwarded-host'] && req.app.get('trust proxy')
+      ? String(req.headers['x-forwarded-host'])
+      : req.headers.host;
   if (host !== expected) return next(forbidden('The request came from a page of another site.'));
   next();
 };

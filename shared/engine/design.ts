@@ -22,7 +22,15 @@ import type { MemberSection } from './sections/section-types';
 import { E_STEEL, STEEL_DENSITY } from './sections/steel-grades';
 import { findShape } from './shapes/table';
 import type { ShapeLookup } from './shapes/types';
-import { CAUTION, DesignInputError, ENGINE_VERSION, type Check, type DesignResult, type RootDemand, type RootFootprint } from './types';
+import {
+  CAUTION,
+  DesignInputError,
+  ENGINE_VERSION,
+  type Check,
+  type DesignResult,
+  type RootDemand,
+  type RootFootprint,
+} from './types';
 import { quantity, toInternal } from './units';
 
 export interface EvaluateOptions {
@@ -51,14 +59,18 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
 
   const caseLoads = gatherCaseLoads(input.loads, section, L, toInternal(member.spacing, 'length'));
   if (caseLoads.length === 0) {
-    throw new DesignInputError([{ path: 'loads', message: 'there is no load to check: turn on self-weight or add a load' }]);
+    throw new DesignInputError([
+      { path: 'loads', message: 'there is no load to check: turn on self-weight or add a load' },
+    ]);
   }
   const model = analyseMember(section, L, E, caseLoads, options.intervals ?? DEFAULT_INTERVALS);
   const present = new Set(caseLoads.map((c) => c.case));
-  const combos = (method === 'LRFD' ? strengthCombinations(present) : allowableCombinations(present)).map((c) => ({
-    name: c.name,
-    response: combine(model, c.factors, options.stations === true),
-  }));
+  const combos = (method === 'LRFD' ? strengthCombinations(present) : allowableCombinations(present)).map(
+    (c) => ({
+      name: c.name,
+      response: combine(model, c.factors, options.stations === true),
+    }),
+  );
   const Lb = member.unbracedLength ? toInternal(member.unbracedLength, 'length') : L;
   const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos };
 
@@ -67,7 +79,13 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   const checks: Check[] = [
     flexureCheck(ctx),
     shearCheck(ctx),
-    ...deflectionChecks({ tipByCase, service: allowableCombinations(present), L, limits: input.deflectionLimits, units }),
+    ...deflectionChecks({
+      tipByCase,
+      service: allowableCombinations(present),
+      L,
+      limits: input.deflectionLimits,
+      units,
+    }),
   ];
   const fMin = input.frequencyMin ? toInternal(input.frequencyMin, 'frequency') : undefined;
   const vibration = vibrationCheck(frequency, fMin, units);
@@ -75,7 +93,12 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
 
   let connection: DesignResult['connection'] = null;
   if (input.connection) {
-    const demands: RootDemand[] = combos.map((c) => ({ combination: c.name, M: c.response.M[0], V: c.response.V[0], H: 0 }));
+    const demands: RootDemand[] = combos.map((c) => ({
+      combination: c.name,
+      M: c.response.M[0],
+      V: c.response.V[0],
+      H: 0,
+    }));
     const out = checkConnection(input.connection, demands, rootFootprint(section), { units, method, shapes });
     connection = out.result;
     checks.push(...out.checks);
@@ -118,7 +141,12 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
  * The weights that vibrate with the member: the steel (always, even when its weight is left out of
  * the load cases) and every dead load. Live load is not included (METHOD.md).
  */
-function massLoads(caseLoads: CaseLoads[], section: MemberSection, L: number, selfWeightInD: boolean): CaseLoads {
+function massLoads(
+  caseLoads: CaseLoads[],
+  section: MemberSection,
+  L: number,
+  selfWeightInD: boolean,
+): CaseLoads {
   const dead = caseLoads.find((c) => c.case === 'D');
   const sw = selfWeightLine(section, L);
   const mass: CaseLoads = { case: 'D', q0: dead?.q0 ?? 0, q1: dead?.q1 ?? 0, points: dead?.points ?? [] };

@@ -8,7 +8,10 @@ import { DesignInputError } from './types';
 export function assertFinite(value: unknown): void {
   if (!allFinite(value)) {
     throw new DesignInputError([
-      { path: '(document)', message: 'the design cannot be computed (a result is not a finite number); check the sizes and loads' },
+      {
+        path: '(document)',
+        message: 'the design cannot be computed (a result is not a finite number); check the sizes and loads',
+      },
     ]);
   }
 }

@@ -16,14 +16,23 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
   const problems: FieldProblem[] = [];
   const { member, loads } = input;
   if (L > MAX_LENGTH) {
-    problems.push({ path: 'member.length', message: `is longer than the 60 ft the engine checks, got "${member.length}"` });
+    problems.push({
+      path: 'member.length',
+      message: `is longer than the 60 ft the engine checks, got "${member.length}"`,
+    });
   }
   if (L < MIN_LENGTH) {
-    problems.push({ path: 'member.length', message: `is shorter than the 1 ft the engine checks, got "${member.length}"` });
+    problems.push({
+      path: 'member.length',
+      message: `is shorter than the 1 ft the engine checks, got "${member.length}"`,
+    });
   }
   loads.point.forEach((p, i) => {
     if (toInternal(p.at, 'length') > L * (1 + 1e-9)) {
-      problems.push({ path: `loads.point[${i}].at`, message: `is beyond the tip (length ${member.length}), got "${p.at}"` });
+      problems.push({
+        path: `loads.point[${i}].at`,
+        message: `is beyond the tip (length ${member.length}), got "${p.at}"`,
+      });
     }
   });
   if (member.unbracedLength && toInternal(member.unbracedLength, 'length') > L * (1 + 1e-9)) {
@@ -33,13 +42,22 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
     });
   }
   if (!(Fy >= 20 && Fy <= 100)) {
-    problems.push({ path: 'member.steel.Fy', message: `must be between 20 and 100 ksi for a structural steel, got "${member.steel?.Fy}"` });
+    problems.push({
+      path: 'member.steel.Fy',
+      message: `must be between 20 and 100 ksi for a structural steel, got "${member.steel?.Fy}"`,
+    });
   }
   if (!(E >= 25000 && E <= 32000)) {
-    problems.push({ path: 'member.steel.E', message: `must be about 29000 ksi (200 GPa) for steel, got "${member.steel?.E}"` });
+    problems.push({
+      path: 'member.steel.E',
+      message: `must be about 29000 ksi (200 GPa) for steel, got "${member.steel?.E}"`,
+    });
   }
   if (toInternal(member.spacing, 'length') > 240) {
-    problems.push({ path: 'member.spacing', message: `is wider than the 20 ft the engine checks, got "${member.spacing}"` });
+    problems.push({
+      path: 'member.spacing',
+      message: `is wider than the 20 ft the engine checks, got "${member.spacing}"`,
+    });
   }
   return problems;
 }

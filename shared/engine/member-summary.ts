@@ -17,7 +17,10 @@ function summary(r: Response, units: UnitSystem): EffectSummary {
   };
 }
 
-export function caseSummaries(model: MemberModel, units: UnitSystem): Partial<Record<LoadCase, EffectSummary>> {
+export function caseSummaries(
+  model: MemberModel,
+  units: UnitSystem,
+): Partial<Record<LoadCase, EffectSummary>> {
   const out: Partial<Record<LoadCase, EffectSummary>> = {};
   for (const c of model.cases) out[c.case] = summary(c.response, units);
   return out;

@@ -72,7 +72,12 @@ export interface MemberResult {
   selfWeight: Quantity;
   /** Total steel weight of one member. */
   steelWeight: Quantity;
-  section: { label: string; kind: 'catalog' | 'tapered-rolled' | 'built-up'; rootDepth: Quantity; tipDepth: Quantity };
+  section: {
+    label: string;
+    kind: 'catalog' | 'tapered-rolled' | 'built-up';
+    rootDepth: Quantity;
+    tipDepth: Quantity;
+  };
   /** The steel the checks used: the family's default grade unless the document gave Fy or E. */
   steel?: { grade: string; Fy: Quantity; E: Quantity };
   cases: Partial<Record<LoadCase, EffectSummary>>;

@@ -25,7 +25,10 @@ export const sectionSchema = z
       ctx.addIssue({ code: 'custom', message: 'give either a catalog shape or plates, not both' });
     }
     if (!s.shape && !s.plates) {
-      ctx.addIssue({ code: 'custom', message: 'needs a catalog shape ("W12X26") or plates for a built-up I' });
+      ctx.addIssue({
+        code: 'custom',
+        message: 'needs a catalog shape ("W12X26") or plates for a built-up I',
+      });
     }
     if (s.tipDepth && !s.shape) {
       ctx.addIssue({ code: 'custom', path: ['tipDepth'], message: 'applies to a catalog W shape only' });

@@ -36,7 +36,10 @@ export async function api<T>(path: string, options: RequestOptions = {}): Promis
     response = await fetch(path, {
       method,
       credentials: 'same-origin',
-      headers: body && !isForm ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' },
+      headers:
+        body && !isForm
+          ? { 'Content-Type': 'application/json', Accept: 'application/json' }
+          : { Accept: 'application/json' },
       body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
       signal,
     });
@@ -55,7 +58,8 @@ export async function api<T>(path: string, options: RequestOptions = {}): Promis
     }
   }
   if (!response.ok) {
-    const err = (data as { error?: { code?: string; message?: string; issues?: FieldIssue[] } } | null)?.error;
+    const err = (data as { error?: { code?: string; message?: string; issues?: FieldIssue[] } } | null)
+      ?.error;
     throw new ApiError(
       response.status,
       err?.code ?? `http_${response.status}`,

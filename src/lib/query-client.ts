@@ -8,7 +8,8 @@ export function createQueryClient(): QueryClient {
       queries: {
         staleTime: 30_000,
         refetchOnWindowFocus: false,
-        retry: (failures, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failures < 2,
+        retry: (failures, error) =>
+          !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failures < 2,
       },
       mutations: { retry: false },
     },

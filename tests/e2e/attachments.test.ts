@@ -29,7 +29,9 @@ afterAll(async () => {
 describe('attachments on the desk', () => {
   it('uploads a PNG, lists it with its checksum, and downloads identical bytes', async () => {
     const files = page.getByRole('region', { name: 'Attachments' });
-    await files.getByLabel(/Add a file/).setInputFiles({ name: 'pier-detail.png', mimeType: 'image/png', buffer: PNG });
+    await files
+      .getByLabel(/Add a file/)
+      .setInputFiles({ name: 'pier-detail.png', mimeType: 'image/png', buffer: PNG });
     await files.getByRole('button', { name: 'Upload' }).click();
     await expect.poll(() => files.getByRole('status').textContent()).toContain('Uploaded “pier-detail.png”');
     const sha = createHash('sha256').update(PNG).digest('hex');
@@ -47,7 +49,9 @@ describe('attachments on the desk', () => {
   it('refuses a web page renamed .png and says why in words', async () => {
     const files = page.getByRole('region', { name: 'Attachments' });
     const html = Buffer.from('<!doctype html><html><body><script>alert(1)</script></body></html>');
-    await files.getByLabel(/Add a file/).setInputFiles({ name: 'photo.png', mimeType: 'image/png', buffer: html });
+    await files
+      .getByLabel(/Add a file/)
+      .setInputFiles({ name: 'photo.png', mimeType: 'image/png', buffer: html });
     await files.getByRole('button', { name: 'Upload' }).click();
     const alert = files.getByRole('alert');
     await alert.waitFor();

@@ -32,11 +32,13 @@ const tip = async () => (await page.getByTestId('tip-deflection').textContent())
 
 /** Waits until the desk has recomputed the newest inputs. */
 async function settled() {
-  await expect.poll(async () => page.getByTestId('recompute-status').textContent(), { timeout: 10_000 }).toMatch(/^Up to date/);
+  await expect
+    .poll(async () => page.getByTestId('recompute-status').textContent(), { timeout: 10_000 })
+    .toMatch(/^Up to date/);
 }
 
 describe('design desk', () => {
-  it('Plate schedule: links the saved revision\'s schedule as CSV, and says why not while changes are unsaved', async () => {
+  it("Plate schedule: links the saved revision's schedule as CSV, and says why not while changes are unsaved", async () => {
     const link = page.getByTestId('plate-schedule-link');
     const href = await link.getAttribute('href');
     expect(href).toMatch(/^\/api\/revisions\/\d+\/plate-schedule\.csv$/);
@@ -65,7 +67,9 @@ describe('design desk', () => {
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
     await page.mouse.move(box.x + box.width / 2 + 5, box.y + box.height / 2);
     const tooltip = chart.locator('.recharts-tooltip-wrapper');
-    await expect.poll(async () => (await tooltip.textContent()) ?? '', { timeout: 5_000 }).toMatch(/^x = [\d.]+ ft from the root/);
+    await expect
+      .poll(async () => (await tooltip.textContent()) ?? '', { timeout: 5_000 })
+      .toMatch(/^x = [\d.]+ ft from the root/);
     expect(await tooltip.textContent()).toMatch(/Moment : -?[\d.]+ kip[·\s]ft/);
     await page.mouse.move(0, 0);
   });
@@ -99,7 +103,9 @@ describe('design desk', () => {
     await page.getByLabel('Held at the pier by').selectOption('none');
     await expect.poll(() => page.locator('tr[data-check^="plate."]').count(), { timeout: 10_000 }).toBe(0);
     await page.getByLabel('Held at the pier by').selectOption('post-base');
-    await expect.poll(() => page.locator('tr[data-check="plate.thickness"]').count(), { timeout: 10_000 }).toBe(1);
+    await expect
+      .poll(() => page.locator('tr[data-check="plate.thickness"]').count(), { timeout: 10_000 })
+      .toBe(1);
     expect(await field('Thickness').inputValue()).toBe(thickness);
   });
 
@@ -152,9 +158,13 @@ describe('design desk', () => {
 
   it('stale save: shows what changed in the newer revision and keeps my changes on top of it', async () => {
     const cantileverId = Number(/cantilevers\/(\d+)/.exec(page.url())?.[1]);
-    const list = (await (await context.request.get(`${e2e.baseUrl}/api/cantilevers/${cantileverId}/revisions`)).json()) as { id: number; number: number }[];
+    const list = (await (
+      await context.request.get(`${e2e.baseUrl}/api/cantilevers/${cantileverId}/revisions`)
+    ).json()) as { id: number; number: number }[];
     const newest = list.reduce((a, b) => (b.number > a.number ? b : a));
-    const current = (await (await context.request.get(`${e2e.baseUrl}/api/revisions/${newest.id}`)).json()) as { input: { connection: { plate: { thickness: string } } } };
+    const current = (await (
+      await context.request.get(`${e2e.baseUrl}/api/revisions/${newest.id}`)
+    ).json()) as { input: { connection: { plate: { thickness: string } } } };
     current.input.connection.plate.thickness = '2 in';
     const theirs = await context.request.post(`${e2e.baseUrl}/api/cantilevers/${cantileverId}/revisions`, {
       data: { baseRevision: newest.number, message: 'Thicker plate from the shop', input: current.input },
@@ -171,13 +181,17 @@ describe('design desk', () => {
     await conflict.waitFor();
     const row = conflict.getByRole('row').filter({ hasText: 'connection.plate.thickness' });
     expect(await row.textContent()).toContain('2 in');
-    expect(await conflict.getByRole('row').filter({ hasText: 'member.length' }).textContent()).toContain('8 ft');
+    expect(await conflict.getByRole('row').filter({ hasText: 'member.length' }).textContent()).toContain(
+      '8 ft',
+    );
     await e2e.screenshot(page, 'desk-conflict');
     await conflict.getByRole('button', { name: `Keep my changes on top of revision ${next}` }).click();
     await save.waitFor();
     expect(await save.getByLabel('Message').inputValue()).toBe('Shorter reach');
     await save.getByRole('button', { name: 'Save revision' }).click();
-    await expect.poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 }).toBe(`rev ${next + 1}`);
+    await expect
+      .poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 })
+      .toBe(`rev ${next + 1}`);
     expect(await field('Length (root to tip)').inputValue()).toBe('8 ft');
     await page.getByTestId('revision-list').getByText('Shorter reach').waitFor();
   });

@@ -28,10 +28,16 @@ beforeAll(async () => {
   await e2e.signInAs(arch.context, 'architect');
   await e2e.signInAs(eng.context, 'engineer');
   admin = await request.newContext({ baseURL: e2e.baseUrl });
-  const login = await admin.post('/api/auth/login', { data: { email: demoEmail('admin'), password: DEMO_PASSWORD } });
+  const login = await admin.post('/api/auth/login', {
+    data: { email: demoEmail('admin'), password: DEMO_PASSWORD },
+  });
   expect(login.ok()).toBe(true);
-  const projects = (await (await arch.context.request.get(`${e2e.baseUrl}/api/projects`)).json()) as ProjectDto[];
-  const project = (await (await arch.context.request.get(`${e2e.baseUrl}/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
+  const projects = (await (
+    await arch.context.request.get(`${e2e.baseUrl}/api/projects`)
+  ).json()) as ProjectDto[];
+  const project = (await (
+    await arch.context.request.get(`${e2e.baseUrl}/api/projects/${projects[0].id}`)
+  ).json()) as ProjectDetailDto;
   cantileverId = project.cantilevers.find((c) => c.name === CANTILEVER)?.id ?? 0;
   expect(cantileverId).toBeGreaterThan(0);
 });
@@ -68,7 +74,9 @@ async function submitLatest(page: Page, number: number, message: string): Promis
   const latest = list.getByRole('listitem').first();
   expect(await latest.getByRole('heading').textContent()).toContain(`Revision ${number}Draft`);
   await latest.getByRole('button', { name: 'Submit for review' }).click();
-  await page.getByText(`Revision ${number} was submitted for review. The project's engineers were notified.`).waitFor();
+  await page
+    .getByText(`Revision ${number} was submitted for review. The project's engineers were notified.`)
+    .waitFor();
   await latest.getByText('Awaiting review').waitFor();
 }
 
@@ -93,7 +101,9 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await saveOnDesk(arch.page, 1, 'Reach one foot longer for the view');
     await submitLatest(arch.page, 2, 'Reach one foot longer for the view');
     const subject = `Review requested: ${CANTILEVER}, revision 2`;
-    await expect.poll(async () => (await outbox()).find((m) => m.subject === subject)?.status, { timeout: 15_000 }).toBe('sent');
+    await expect
+      .poll(async () => (await outbox()).find((m) => m.subject === subject)?.status, { timeout: 15_000 })
+      .toBe('sent');
     const mail = (await outbox()).find((m) => m.subject === subject) as OutboxDto;
     expect(mail.to).toEqual([demoEmail('engineer')]);
     expect(mail.text).toContain('Reach one foot longer for the view');
@@ -107,13 +117,19 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await form.getByRole('radio', { name: 'Request changes' }).check();
     await form.getByRole('button', { name: 'Record decision' }).click();
     await form.getByText('Comment is required when you request changes: say what should change').waitFor();
-    await form.getByLabel('Comment').fill('The tip moves too much at this reach; bring it back or deepen the section.');
+    await form
+      .getByLabel('Comment')
+      .fill('The tip moves too much at this reach; bring it back or deepen the section.');
     await form.getByRole('button', { name: 'Record decision' }).click();
     await page.getByText('You requested changes on revision 2.').waitFor();
     await page.getByText(new RegExp(`^Changes requested by ${ENGINEER} on `)).waitFor();
     expect(await page.getByRole('form', { name: 'Review decision' }).count()).toBe(0);
     await expect
-      .poll(async () => (await outbox()).some((m) => m.subject === `Revision 2 of ${CANTILEVER} was returned with changes requested`))
+      .poll(async () =>
+        (await outbox()).some(
+          (m) => m.subject === `Revision 2 of ${CANTILEVER} was returned with changes requested`,
+        ),
+      )
       .toBe(true);
   });
 
@@ -123,12 +139,20 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const second = page.getByRole('list', { name: 'Revisions, newest first' }).getByRole('listitem').first();
     await second.getByText('Changes requested').waitFor();
     await second.getByRole('link', { name: 'Review record' }).click();
-    await page.getByText('The tip moves too much at this reach; bring it back or deepen the section.').first().waitFor();
+    await page
+      .getByText('The tip moves too much at this reach; bring it back or deepen the section.')
+      .first()
+      .waitFor();
     expect(await page.getByRole('radio').count()).toBe(0);
 
     await saveOnDesk(page, -1, 'Shorter reach after review');
     await submitLatest(page, 3, 'Shorter reach after review');
-    await expect.poll(async () => (await outbox()).some((m) => m.subject === `Review requested: ${CANTILEVER}, revision 3`), { timeout: 15_000 }).toBe(true);
+    await expect
+      .poll(
+        async () => (await outbox()).some((m) => m.subject === `Review requested: ${CANTILEVER}, revision 3`),
+        { timeout: 15_000 },
+      )
+      .toBe(true);
   });
 
   it('the engineer approves; the approval is final', async () => {
@@ -161,7 +185,9 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await page.getByRole('link', { name: 'Compare revision 2 with 3' }).click();
     await page.getByRole('heading', { name: 'Compare revision 2 with revision 3' }).waitFor();
 
-    const row = page.getByRole('table', { name: /Changed inputs/ }).getByRole('row', { name: /Reach: length/ });
+    const row = page
+      .getByRole('table', { name: /Changed inputs/ })
+      .getByRole('row', { name: /Reach: length/ });
     const cells = await row.getByRole('cell').allTextContents();
     expect(cells.map((c) => Number.parseFloat(c))).toEqual([lengths[1], lengths[2]]);
     const ratios = page.getByRole('table', { name: /Check ratios/ });
@@ -171,7 +197,9 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
     await page.locator('.recharts-line').first().waitFor();
     expect(await page.locator('.recharts-line').count()).toBe(4);
-    expect(await page.getByText(/^Moment under .+\. Revision 2: reach 8\.00 ft, root moment /).count()).toBe(1);
+    expect(await page.getByText(/^Moment under .+\. Revision 2: reach 8\.00 ft, root moment /).count()).toBe(
+      1,
+    );
     expect(await page.getByText(/^Revision 3 total-load limit /).count()).toBe(1);
     await e2e.screenshot(page, 'compare');
   });
@@ -188,12 +216,19 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
       `Review requested: ${CANTILEVER}, revision 3`,
       `Revision 3 of ${CANTILEVER} was approved`,
     ]) {
-      await expect.poll(async () => {
-        await page.getByRole('button', { name: 'Refresh' }).click();
-        return table.getByRole('rowheader', { name: subject }).count();
-      }, { timeout: 15_000 }).toBe(1);
+      await expect
+        .poll(
+          async () => {
+            await page.getByRole('button', { name: 'Refresh' }).click();
+            return table.getByRole('rowheader', { name: subject }).count();
+          },
+          { timeout: 15_000 },
+        )
+        .toBe(1);
     }
-    await page.getByRole('button', { name: `Show text of “Review requested: ${CANTILEVER}, revision 3”` }).click();
+    await page
+      .getByRole('button', { name: `Show text of “Review requested: ${CANTILEVER}, revision 3”` })
+      .click();
     await page.getByText('Message: Shorter reach after review').waitFor();
     await e2e.screenshot(page, 'outbox');
 
@@ -215,13 +250,20 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await form.getByText('First password must be at least 10 characters').waitFor();
     await form.getByLabel('First password').fill('a-long-first-password');
     await form.getByRole('button', { name: 'Create account' }).click();
-    await page.getByText('Account created for Noor Haddad (second.engineer@reachline.test) as engineer.').waitFor();
-    await page.getByRole('table', { name: 'Accounts' }).getByRole('row', { name: /Noor Haddad/ }).waitFor();
+    await page
+      .getByText('Account created for Noor Haddad (second.engineer@reachline.test) as engineer.')
+      .waitFor();
+    await page
+      .getByRole('table', { name: 'Accounts' })
+      .getByRole('row', { name: /Noor Haddad/ })
+      .waitFor();
 
     const projects = (await (await admin.get('/api/projects')).json()) as ProjectDto[];
     await page.goto(`/projects/${projects[0].id}`);
     const panel = page.getByRole('region', { name: 'Project members' });
-    await panel.getByLabel('Add an account').selectOption({ label: 'Noor Haddad (engineer, second.engineer@reachline.test)' });
+    await panel
+      .getByLabel('Add an account')
+      .selectOption({ label: 'Noor Haddad (engineer, second.engineer@reachline.test)' });
     await panel.getByRole('button', { name: 'Add member' }).click();
     await panel.getByText('Noor Haddad was added to the project.').waitFor();
     await panel.getByRole('button', { name: 'Remove Noor Haddad' }).waitFor();

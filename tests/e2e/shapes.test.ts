@@ -30,7 +30,9 @@ describe('shapes browser', () => {
     await page.getByRole('searchbox').fill('HSS8');
     await page.getByLabel('Family').selectOption('HSS');
     await expect.poll(() => page.locator('tr[data-shape]').count()).toBeGreaterThan(0);
-    const labels = await page.locator('tr[data-shape]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-shape') ?? ''));
+    const labels = await page
+      .locator('tr[data-shape]')
+      .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-shape') ?? ''));
     expect(labels.every((l) => l.startsWith('HSS8'))).toBe(true);
     await page.getByRole('searchbox').fill('');
     await page.getByLabel('Family').selectOption('W');
@@ -39,7 +41,11 @@ describe('shapes browser', () => {
     await expect.poll(() => page.locator('tr[data-shape="W12X26"]').count()).toBe(0);
     await page.locator('tr[data-shape]').first().click();
     await page.getByText('Torsion constant J').waitFor();
-    const depth = await page.getByRole('complementary', { name: 'Shape details' }).getByText(/^Depth d$/).locator('xpath=following-sibling::dd[1]').textContent();
+    const depth = await page
+      .getByRole('complementary', { name: 'Shape details' })
+      .getByText(/^Depth d$/)
+      .locator('xpath=following-sibling::dd[1]')
+      .textContent();
     const d = Number.parseFloat(depth ?? '');
     expect(d).toBeGreaterThanOrEqual(20);
     expect(d).toBeLessThanOrEqual(22);
@@ -47,7 +53,9 @@ describe('shapes browser', () => {
   });
 
   it('imports a CSV, reports the bad row with its reason and lists the good shape', async () => {
-    await page.getByLabel('CSV file', { exact: true }).setInputFiles({ name: 'our-shapes.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
+    await page
+      .getByLabel('CSV file', { exact: true })
+      .setInputFiles({ name: 'our-shapes.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
     await page.getByRole('button', { name: 'Import' }).click();
     const result = page.getByTestId('import-result');
     await result.waitFor();

@@ -48,9 +48,13 @@ describe('skeleton: sign in, edit, save, reload', () => {
     await page.getByRole('heading', { name: 'Harbor View Studio' }).waitFor();
     const scheduleHref = await page.getByTestId('project-schedule-link').getAttribute('href');
     expect(scheduleHref).toMatch(/^\/api\/projects\/\d+\/plate-schedule\.csv$/);
-    const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string)).trimEnd().split('\r\n');
+    const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string))
+      .trimEnd()
+      .split('\r\n');
     expect(schedule[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
-    expect(schedule.some((line) => /^"East deck, typical beam \(rev \d+\)",post-base,\d/.test(line))).toBe(true);
+    expect(schedule.some((line) => /^"East deck, typical beam \(rev \d+\)",post-base,\d/.test(line))).toBe(
+      true,
+    );
     // the project page states pass/fail words, so it carries the caution too
     expect(await page.getByTestId('caution-footer').textContent()).toContain('licensed engineer');
     await e2e.screenshot(page, 'project');
@@ -108,7 +112,9 @@ describe('skeleton: sign in, edit, save, reload', () => {
     const save = page.getByRole('dialog', { name: 'Save revision' });
     await save.getByLabel('Message').fill('Starting point for the corner');
     await save.getByRole('button', { name: 'Save revision' }).click();
-    await expect.poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 }).toBe('rev 1');
+    await expect
+      .poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 })
+      .toBe('rev 1');
     await page.getByTestId('revision-list').getByText('Starting point for the corner').waitFor();
   });
 });

@@ -102,22 +102,41 @@ async function populate(db: Knex, config: Config, dirs: TestDirs, options: TestE
   for (const [key, person] of Object.entries(TEAM) as [Person, (typeof TEAM)[Person]][]) {
     ids[key] = await insertUser(db, { ...person, passwordHash: hash });
   }
-  const projectId = await insertProject(db, { name: 'Test terrace', site: 'Test site', codeBasis: 'test basis', units: 'US', createdBy: ids.architect });
-  for (const person of ['admin', 'architect', 'fabricator', 'engineer', 'engineer2'] as const) await addMember(db, projectId, ids[person]);
+  const projectId = await insertProject(db, {
+    name: 'Test terrace',
+    site: 'Test site',
+    codeBasis: 'test basis',
+    units: 'US',
+    createdBy: ids.architect,
+  });
+  for (const person of ['admin', 'architect', 'fabricator', 'engineer', 'engineer2'] as const)
+    await addMember(db, projectId, ids[person]);
   const cantileverId = await insertCantilever(db, { projectId, name: 'Test beam', description: '' });
   const architect = toUserDto((await findUserById(db, ids.architect))!);
-  const first = await saveRevision(db, architect, await cantileverForMember(db, cantileverId, ids.architect), {
-    baseRevision: null,
-    message: 'First design',
-    input: baseDesign(),
-  });
+  const first = await saveRevision(
+    db,
+    architect,
+    await cantileverForMember(db, cantileverId, ids.architect),
+    {
+      baseRevision: null,
+      message: 'First design',
+      input: baseDesign(),
+    },
+  );
 
   let smtp: FakeSmtp | null = null;
   let worker: MailWorker | null = null;
   if (options.mail === 'fake') smtp = await startFakeSmtp(db);
-  const smtpUrl = options.mail === 'fake' ? smtp!.url : typeof options.mail === 'object' ? options.mail.smtpUrl : null;
+  const smtpUrl =
+    options.mail === 'fake' ? smtp!.url : typeof options.mail === 'object' ? options.mail.smtpUrl : null;
   if (smtpUrl) {
-    worker = new MailWorker(db, { smtpUrl, from: config.mailFrom, retryBaseMs: config.mailRetryBaseMs, maxAttempts: config.mailMaxAttempts, pollMs: config.mailPollMs });
+    worker = new MailWorker(db, {
+      smtpUrl,
+      from: config.mailFrom,
+      retryBaseMs: config.mailRetryBaseMs,
+      maxAttempts: config.mailMaxAttempts,
+      pollMs: config.mailPollMs,
+    });
   }
   const env: TestEnv = {
     app: undefined as unknown as ReachlineApp,

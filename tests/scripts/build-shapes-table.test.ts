@@ -23,8 +23,11 @@ describe('scripts/build-shapes-table.ts', () => {
     expect(t.shapes[0]).not.toHaveProperty('OD');
   });
 
-  it.runIf(existsSync(CSV))('regenerates the shipped data/shapes.json exactly from the published file', () => {
-    const built = buildShapesTable(readFileSync(CSV, 'utf8'));
-    expect(built).toEqual(JSON.parse(readFileSync(SHIPPED, 'utf8')));
-  });
+  it.runIf(existsSync(CSV))(
+    'regenerates the shipped data/shapes.json exactly from the published file',
+    () => {
+      const built = buildShapesTable(readFileSync(CSV, 'utf8'));
+      expect(built).toEqual(JSON.parse(readFileSync(SHIPPED, 'utf8')));
+    },
+  );
 });

@@ -13,19 +13,30 @@ const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), 'reachline-cli-'));
 const memberFile = join(dir, 'member.json');
 writeFileSync(memberFile, JSON.stringify(exampleMemberOnly));
-const invalidDoc = JSON.stringify({ member: { length: '-3 ft', spacing: '4 ft', section: { shape: 'W12X26' } } });
+const invalidDoc = JSON.stringify({
+  member: { length: '-3 ft', spacing: '4 ft', section: { shape: 'W12X26' } },
+});
 
 /** Runs main() in this process with captured output (fast; the spawn tests below cover bin.js). */
 async function inProcess(args: string[], stdin = '') {
   let out = '';
   let err = '';
-  const io: CliIo = { out: (t) => void (out += t), err: (t) => void (err += t), readStdin: async () => stdin };
+  const io: CliIo = {
+    out: (t) => void (out += t),
+    err: (t) => void (err += t),
+    readStdin: async () => stdin,
+  };
   const code = await main(args, io);
   return { code, out, err };
 }
 
 function spawn(args: string[], input?: string) {
-  const r = spawnSync(process.execPath, ['server/cli/bin.js', ...args], { cwd: ROOT, input, encoding: 'utf8', timeout: 55000 });
+  const r = spawnSync(process.execPath, ['server/cli/bin.js', ...args], {
+    cwd: ROOT,
+    input,
+    encoding: 'utf8',
+    timeout: 55000,
+  });
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
@@ -67,9 +78,16 @@ describe('reachline CLI (in process)', () => {
   });
 
   it('problems the schema cannot see are reported the same way (exit 2)', async () => {
-    const doc = { ...exampleMemberOnly, member: { ...exampleMemberOnly.member, section: { shape: 'W99X1' } } };
+    const doc = {
+      ...exampleMemberOnly,
+      member: { ...exampleMemberOnly.member, section: { shape: 'W99X1' } },
+    };
     const r = await inProcess(['check', '-'], JSON.stringify(doc));
-    expect(r).toEqual({ code: 2, out: '', err: 'member.section.shape: unknown shape "W99X1": not in the shapes table\n' });
+    expect(r).toEqual({
+      code: 2,
+      out: '',
+      err: 'member.section.shape: unknown shape "W99X1": not in the shapes table\n',
+    });
   });
 
   it('not JSON, a missing file, an unknown option: exit 2 with a plain message', async () => {
@@ -93,6 +111,7 @@ describe('reachline CLI (in process)', () => {
   it('--help explains every option', async () => {
     const r = await inProcess(['--help']);
     expect(r.code).toBe(0);
-    for (const option of ['check', 'shapes', '--stations', '--json', '--family', 'Exit status']) expect(r.out).toContain(option);
+    for (const option of ['check', 'shapes', '--stations', '--json', '--family', 'Exit status'])
+      expect(r.out).toContain(option);
   });
 });

@@ -10,9 +10,18 @@ describe('sign-in', () => {
   afterAll(async () => env.close());
 
   it('signs in with the right password, sets a safe session cookie and records an audit row', async () => {
-    const res = await request(env.app).post('/api/auth/login').send({ email: TEAM.architect.email, password: PASSWORD });
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.architect.email, password: PASSWORD });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ id: env.ids.architect, email: TEAM.architect.email, displayName: TEAM.architect.displayName, role: 'architect', units: 'US', active: true });
+    expect(res.body).toEqual({
+      id: env.ids.architect,
+      email: TEAM.architect.email,
+      displayName: TEAM.architect.displayName,
+      role: 'architect',
+      units: 'US',
+      active: true,
+    });
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/reachline\.sid=/);
     expect(cookie).toMatch(/HttpOnly/i);
@@ -23,7 +32,9 @@ describe('sign-in', () => {
   });
 
   it('answers 401 to a wrong password and records the failed attempt', async () => {
-    const res = await request(env.app).post('/api/auth/login').send({ email: TEAM.engineer.email, password: 'not the password' });
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.engineer.email, password: 'not the password' });
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('sign_in_failed');
     expect(res.headers['set-cookie']).toBeUndefined();
@@ -32,7 +43,9 @@ describe('sign-in', () => {
   });
 
   it('answers 401 to an unknown e-mail with the same message', async () => {
-    const res = await request(env.app).post('/api/auth/login').send({ email: 'nobody@example.test', password: PASSWORD });
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: 'nobody@example.test', password: PASSWORD });
     expect(res.status).toBe(401);
     expect(res.body.error.message).toBe('The e-mail or the password is not right.');
   });
@@ -45,7 +58,9 @@ describe('sign-in', () => {
 
   it('refuses a disabled account', async () => {
     await env.db('users').where({ id: env.ids.engineer2 }).update({ active: false });
-    const res = await request(env.app).post('/api/auth/login').send({ email: TEAM.engineer2.email, password: PASSWORD });
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.engineer2.email, password: PASSWORD });
     expect(res.status).toBe(401);
     expect(res.body.error.message).toMatch(/disabled/);
     await env.db('users').where({ id: env.ids.engineer2 }).update({ active: true });
@@ -61,8 +76,12 @@ describe('sign-in', () => {
 
   it('gives a new session id at sign-in (no session fixation)', async () => {
     const agent = await env.login('architect');
-    const first = await agent.post('/api/auth/login').send({ email: TEAM.architect.email, password: PASSWORD });
-    const second = await agent.post('/api/auth/login').send({ email: TEAM.architect.email, password: PASSWORD });
+    const first = await agent
+      .post('/api/auth/login')
+      .send({ email: TEAM.architect.email, password: PASSWORD });
+    const second = await agent
+      .post('/api/auth/login')
+      .send({ email: TEAM.architect.email, password: PASSWORD });
     const sid = (r: request.Response) => /reachline\.sid=([^;]+)/.exec(String(r.headers['set-cookie']))?.[1];
     expect(sid(first)).toBeTruthy();
     expect(sid(first)).not.toBe(sid(second));
@@ -71,7 +90,9 @@ describe('sign-in', () => {
   it('GET /api/auth/me answers 401 when signed out and the user when signed in; logout ends the session', async () => {
     const anonymous = await request(env.app).get('/api/auth/me');
     expect(anonymous.status).toBe(401);
-    expect(anonymous.body).toEqual({ error: { code: 'unauthorized', message: 'Sign in first.', issues: [] } });
+    expect(anonymous.body).toEqual({
+      error: { code: 'unauthorized', message: 'Sign in first.', issues: [] },
+    });
     const agent = await env.login('engineer');
     const me = await agent.get('/api/auth/me').expect(200);
     expect(me.body.email).toBe(TEAM.engineer.email);
@@ -93,14 +114,20 @@ describe('sign-in', () => {
   });
 
   it('refuses a state-changing request sent from a page of another site', async () => {
-    const res = await request(env.app).post('/api/auth/login').set('Origin', 'https://elsewhere.example').send({ email: TEAM.architect.email, password: PASSWORD });
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .set('Origin', 'https://elsewhere.example')
+      .send({ email: TEAM.architect.email, password: PASSWORD });
     expect(res.status).toBe(403);
     const host = await request(env.app).get('/api/health');
     expect(host.status).toBe(200);
   });
 
   it('sends security headers and no stack traces', async () => {
-    const res = await request(env.app).post('/api/auth/login').set('content-type', 'application/json').send('{"email":');
+    const res = await request(env.app)
+      .post('/api/auth/login')
+      .set('content-type', 'application/json')
+      .send('{"email":');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_json');
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);
@@ -119,12 +146,20 @@ describe('sign-in rate limit', () => {
 
   it('answers 429 after the configured number of attempts for one IP and e-mail', async () => {
     for (let i = 0; i < 3; i += 1) {
-      await request(env.app).post('/api/auth/login').send({ email: TEAM.engineer.email, password: 'wrong' }).expect(401);
+      await request(env.app)
+        .post('/api/auth/login')
+        .send({ email: TEAM.engineer.email, password: 'wrong' })
+        .expect(401);
     }
-    const limited = await request(env.app).post('/api/auth/login').send({ email: TEAM.engineer.email, password: PASSWORD });
+    const limited = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.engineer.email, password: PASSWORD });
     expect(limited.status).toBe(429);
     expect(limited.body.error.code).toBe('too_many_attempts');
     // Another e-mail from the same IP is counted separately.
-    await request(env.app).post('/api/auth/login').send({ email: TEAM.architect.email, password: PASSWORD }).expect(200);
+    await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.architect.email, password: PASSWORD })
+      .expect(200);
   });
 });

@@ -40,7 +40,10 @@ describe('e-mail through the local fake SMTP server', () => {
 
   it('a review e-mails the author', async () => {
     const engineer = await env.login('engineer');
-    await engineer.post(`/api/revisions/${env.revisionId}/reviews`).send({ decision: 'request-changes', comment: 'Thicker plate, please.' }).expect(201);
+    await engineer
+      .post(`/api/revisions/${env.revisionId}/reviews`)
+      .send({ decision: 'request-changes', comment: 'Thicker plate, please.' })
+      .expect(201);
     await env.worker!.runOnce();
     expect(env.smtp!.received).toHaveLength(2);
     const mail = env.smtp!.received[1];
@@ -53,7 +56,13 @@ describe('e-mail through the local fake SMTP server', () => {
     const admin = await env.login('admin');
     const res = await admin.get('/api/admin/outbox').expect(200);
     expect(res.body).toHaveLength(2);
-    expect(res.body[0]).toMatchObject({ to: [TEAM.architect.email], status: 'sent', attempts: 1, lastError: null, sentAt: expect.any(String) });
+    expect(res.body[0]).toMatchObject({
+      to: [TEAM.architect.email],
+      status: 'sent',
+      attempts: 1,
+      lastError: null,
+      sentAt: expect.any(String),
+    });
     for (const person of ['architect', 'engineer', 'fabricator'] as const) {
       const agent = await env.login(person);
       expect((await agent.get('/api/admin/outbox')).status, person).toBe(403);
@@ -66,7 +75,10 @@ describe('e-mail when the SMTP server is down', () => {
   let port: number;
   beforeAll(async () => {
     port = await deadPort();
-    env = await createTestEnv({ mail: { smtpUrl: `smtp://127.0.0.1:${port}` }, config: { mailRetryBaseMs: 1, mailMaxAttempts: 5 } });
+    env = await createTestEnv({
+      mail: { smtpUrl: `smtp://127.0.0.1:${port}` },
+      config: { mailRetryBaseMs: 1, mailMaxAttempts: 5 },
+    });
   });
   afterAll(async () => env.close());
 
@@ -74,7 +86,10 @@ describe('e-mail when the SMTP server is down', () => {
     const architect = await env.login('architect');
     const input = baseDesign();
     input.member.length = '7.5 ft';
-    const saved = await architect.post(`/api/cantilevers/${env.cantileverId}/revisions`).send({ baseRevision: 1, message: 'Shorter', input }).expect(201);
+    const saved = await architect
+      .post(`/api/cantilevers/${env.cantileverId}/revisions`)
+      .send({ baseRevision: 1, message: 'Shorter', input })
+      .expect(201);
     await architect.post(`/api/revisions/${saved.body.id}/submit`).expect(200);
     await env.worker!.runOnce();
     let row = await env.db('outbox').first();
@@ -83,7 +98,12 @@ describe('e-mail when the SMTP server is down', () => {
     expect(row.last_error).toMatch(/ECONNREFUSED|connect/i);
     const admin = await env.login('admin');
     const listed = await admin.get('/api/admin/outbox').expect(200);
-    expect(listed.body[0]).toMatchObject({ status: 'pending', attempts: 1, lastError: expect.any(String), sentAt: null });
+    expect(listed.body[0]).toMatchObject({
+      status: 'pending',
+      attempts: 1,
+      lastError: expect.any(String),
+      sentAt: null,
+    });
 
     // The mail server comes back on the same port; the next due retry delivers.
     const smtp = await startFakeSmtp(env.db, port);
@@ -100,8 +120,22 @@ describe('e-mail when the SMTP server is down', () => {
   });
 
   it('marks a message failed after the last attempt', async () => {
-    const worker = new MailWorker(env.db, { smtpUrl: `smtp://127.0.0.1:${await deadPort()}`, from: 'x@example.test', retryBaseMs: 0, maxAttempts: 2, pollMs: 60_000 });
-    await env.db('outbox').insert({ to_json: '["a@example.test"]', subject: 's', text: 't', status: 'pending', attempts: 0, next_attempt_at: new Date().toISOString(), created_at: new Date().toISOString() });
+    const worker = new MailWorker(env.db, {
+      smtpUrl: `smtp://127.0.0.1:${await deadPort()}`,
+      from: 'x@example.test',
+      retryBaseMs: 0,
+      maxAttempts: 2,
+      pollMs: 60_000,
+    });
+    await env.db('outbox').insert({
+      to_json: '["a@example.test"]',
+      subject: 's',
+      text: 't',
+      status: 'pending',
+      attempts: 0,
+      next_attempt_at: new Date().toISOString(),
+      created_at: new Date().toISOString(),
+    });
     try {
       await worker.runOnce();
       await worker.runOnce();

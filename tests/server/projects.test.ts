@@ -19,7 +19,12 @@ describe('projects, membership and the 404 rule', () => {
   });
 
   it('answers 401 to every project route when signed out', async () => {
-    for (const path of ['/api/projects', `/api/projects/${env.projectId}`, `/api/cantilevers/${env.cantileverId}`, `/api/revisions/${env.revisionId}`]) {
+    for (const path of [
+      '/api/projects',
+      `/api/projects/${env.projectId}`,
+      `/api/cantilevers/${env.cantileverId}`,
+      `/api/revisions/${env.revisionId}`,
+    ]) {
       const res = await request(env.app).get(path);
       expect(res.status, path).toBe(401);
     }
@@ -53,16 +58,35 @@ describe('projects, membership and the 404 rule', () => {
   it('shows a member the project with its team and cantilevers', async () => {
     const agent = await env.login('architect');
     const res = await agent.get(`/api/projects/${env.projectId}`).expect(200);
-    expect(res.body.members.map((m: { role: string }) => m.role).sort()).toEqual(['admin', 'architect', 'engineer', 'engineer', 'fabricator']);
+    expect(res.body.members.map((m: { role: string }) => m.role).sort()).toEqual([
+      'admin',
+      'architect',
+      'engineer',
+      'engineer',
+      'fabricator',
+    ]);
     expect(res.body.cantilevers).toEqual([
-      expect.objectContaining({ id: env.cantileverId, currentRevisionId: env.revisionId, currentRevisionNumber: 1, reviewState: 'draft' }),
+      expect.objectContaining({
+        id: env.cantileverId,
+        currentRevisionId: env.revisionId,
+        currentRevisionNumber: 1,
+        reviewState: 'draft',
+      }),
     ]);
   });
 
   it('lets admins, architects and engineers create projects (creator becomes a member); not fabricators', async () => {
     const architect = await env.login('architect');
-    const created = await architect.post('/api/projects').send({ name: 'Pier house', site: 'Quay 3' }).expect(201);
-    expect(created.body).toMatchObject({ name: 'Pier house', site: 'Quay 3', units: 'US', codeBasis: expect.stringContaining('AISC 360-16') });
+    const created = await architect
+      .post('/api/projects')
+      .send({ name: 'Pier house', site: 'Quay 3' })
+      .expect(201);
+    expect(created.body).toMatchObject({
+      name: 'Pier house',
+      site: 'Quay 3',
+      units: 'US',
+      codeBasis: expect.stringContaining('AISC 360-16'),
+    });
     expect(created.body.members.map((m: { userId: number }) => m.userId)).toEqual([env.ids.architect]);
     const fabricator = await env.login('fabricator');
     const refused = await fabricator.post('/api/projects').send({ name: 'Nope' });
@@ -85,16 +109,24 @@ describe('projects, membership and the 404 rule', () => {
     expect(revision.body.result.caution).toMatch(/licensed engineer/);
     const admin = await env.login('admin');
     await admin.post(`/api/projects/${env.projectId}/cantilevers`).send({ name: 'Admin beam' }).expect(403);
-    const bad = await engineer.post(`/api/projects/${env.projectId}/cantilevers`).send({ name: 'X', input: { ...baseDesign(), member: { ...baseDesign().member, length: '-3 ft' } } });
+    const bad = await engineer
+      .post(`/api/projects/${env.projectId}/cantilevers`)
+      .send({ name: 'X', input: { ...baseDesign(), member: { ...baseDesign().member, length: '-3 ft' } } });
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].path).toBe('input.member.length');
   });
 
   it('lets only an admin add and remove members', async () => {
     const architect = await env.login('architect');
-    await architect.post(`/api/projects/${env.projectId}/members`).send({ userId: env.ids.outsider }).expect(403);
+    await architect
+      .post(`/api/projects/${env.projectId}/members`)
+      .send({ userId: env.ids.outsider })
+      .expect(403);
     const admin = await env.login('admin');
-    const added = await admin.post(`/api/projects/${env.projectId}/members`).send({ userId: env.ids.outsider }).expect(201);
+    const added = await admin
+      .post(`/api/projects/${env.projectId}/members`)
+      .send({ userId: env.ids.outsider })
+      .expect(201);
     expect(added.body.members.map((m: { userId: number }) => m.userId)).toContain(env.ids.outsider);
     const outsider = await env.login('outsider');
     await outsider.get(`/api/projects/${env.projectId}`).expect(200);

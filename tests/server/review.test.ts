@@ -17,7 +17,9 @@ describe('submission, review, comments and immutability', () => {
     const architect = await env.login('architect');
     const submitted = await architect.post(rev('/submit')).expect(200);
     expect(submitted.body.reviewState).toBe('submitted');
-    expect(submitted.body.reviews).toEqual([expect.objectContaining({ state: 'submitted', reviewerId: env.ids.architect })]);
+    expect(submitted.body.reviews).toEqual([
+      expect.objectContaining({ state: 'submitted', reviewerId: env.ids.architect }),
+    ]);
     await architect.post(rev('/submit')).expect(409);
     const fabricator = await env.login('fabricator');
     const byFabricator = await fabricator.post(rev('/reviews')).send({ decision: 'approve' });
@@ -42,7 +44,10 @@ describe('submission, review, comments and immutability', () => {
 
   it('lets another engineer approve a submitted revision and records it in the audit trail', async () => {
     const engineer = await env.login('engineer');
-    const res = await engineer.post(rev('/reviews')).send({ decision: 'approve', comment: 'Checked, fine.' }).expect(201);
+    const res = await engineer
+      .post(rev('/reviews'))
+      .send({ decision: 'approve', comment: 'Checked, fine.' })
+      .expect(201);
     expect(res.body.reviewState).toBe('approved');
     expect(res.body.reviews.map((r: { state: string }) => r.state)).toEqual(['submitted', 'approved']);
     expect(res.body.reviews[1]).toMatchObject({ reviewerId: env.ids.engineer, comment: 'Checked, fine.' });
@@ -56,7 +61,10 @@ describe('submission, review, comments and immutability', () => {
   it('requests changes with a comment, and the revision can be submitted again', async () => {
     const [own] = await env.db('revisions').where({ cantilever_id: env.cantileverId, number: 2 });
     const engineer2 = await env.login('engineer2');
-    const res = await engineer2.post(`/api/revisions/${own.id}/reviews`).send({ decision: 'request-changes', comment: 'Check the plate.' }).expect(201);
+    const res = await engineer2
+      .post(`/api/revisions/${own.id}/reviews`)
+      .send({ decision: 'request-changes', comment: 'Check the plate.' })
+      .expect(201);
     expect(res.body.reviewState).toBe('changes-requested');
     expect(await env.db('audit').where({ kind: 'changes-requested' })).toHaveLength(1);
     const architect = await env.login('architect');
@@ -77,18 +85,34 @@ describe('submission, review, comments and immutability', () => {
   });
 
   it('refuses a direct UPDATE of any revision and a DELETE of an approved one in the database itself', async () => {
-    await expect(env.db('revisions').where({ id: env.revisionId }).update({ input_json: '{}' })).rejects.toThrow(/immutable/);
-    await expect(env.db('revisions').where({ id: env.revisionId }).update({ message: 'changed' })).rejects.toThrow(/immutable/);
-    await expect(env.db('revisions').where({ id: env.revisionId }).del()).rejects.toThrow(/approved revision cannot be deleted/);
-    await expect(env.db('reviews').where({ revision_id: env.revisionId, state: 'approved' }).del()).rejects.toThrow(/approval cannot be deleted/);
+    await expect(
+      env.db('revisions').where({ id: env.revisionId }).update({ input_json: '{}' }),
+    ).rejects.toThrow(/immutable/);
+    await expect(
+      env.db('revisions').where({ id: env.revisionId }).update({ message: 'changed' }),
+    ).rejects.toThrow(/immutable/);
+    await expect(env.db('revisions').where({ id: env.revisionId }).del()).rejects.toThrow(
+      /approved revision cannot be deleted/,
+    );
+    await expect(
+      env.db('reviews').where({ revision_id: env.revisionId, state: 'approved' }).del(),
+    ).rejects.toThrow(/approval cannot be deleted/);
     const row = await env.db('revisions').where({ id: env.revisionId }).first();
     expect(JSON.parse(row.input_json).member.length).toBe(baseDesign().member.length);
   });
 
   it('lets every project member comment on a revision and read the comments', async () => {
     const fabricator = await env.login('fabricator');
-    const posted = await fabricator.post(rev('/comments')).send({ body: 'Plate stock is 1-1/2 in.' }).expect(201);
-    expect(posted.body).toMatchObject({ revisionId: env.revisionId, authorId: env.ids.fabricator, authorName: 'Test Fabricator', body: 'Plate stock is 1-1/2 in.' });
+    const posted = await fabricator
+      .post(rev('/comments'))
+      .send({ body: 'Plate stock is 1-1/2 in.' })
+      .expect(201);
+    expect(posted.body).toMatchObject({
+      revisionId: env.revisionId,
+      authorId: env.ids.fabricator,
+      authorName: 'Test Fabricator',
+      body: 'Plate stock is 1-1/2 in.',
+    });
     const admin = await env.login('admin');
     await admin.post(rev('/comments')).send({ body: 'Noted.' }).expect(201);
     const list = await (await env.login('architect')).get(rev('/comments')).expect(200);

@@ -45,10 +45,17 @@ describe('shapes', () => {
 
   it('imports a custom CSV, reporting each bad row with its number and reason', async () => {
     const agent = await env.login('engineer');
-    const res = await agent.post('/api/shapes/import').attach('file', Buffer.from(CUSTOM_CSV), 'mine.csv').expect(201);
+    const res = await agent
+      .post('/api/shapes/import')
+      .attach('file', Buffer.from(CUSTOM_CSV), 'mine.csv')
+      .expect(201);
     expect(res.body.imported).toBe(2);
     expect(res.body.rejected).toEqual([
-      { row: 4, label: 'RL10X15', reason: expect.stringMatching(/^Sx = 20.5 does not agree with Ix\/\(d\/2\)/) },
+      {
+        row: 4,
+        label: 'RL10X15',
+        reason: expect.stringMatching(/^Sx = 20.5 does not agree with Ix\/\(d\/2\)/),
+      },
       { row: 5, label: 'RL8X10', reason: 'a W shape needs d' },
       { row: 6, label: 'RLX', reason: expect.stringMatching(/^family: must be W, HSS, PIPE or C/) },
     ]);
@@ -62,7 +69,10 @@ describe('shapes', () => {
 
   it('imports the published layout, keeping the built-in shapes and refusing families it does not design with', async () => {
     const agent = await env.login('architect');
-    const res = await agent.post('/api/shapes/import').attach('file', Buffer.from(PUBLISHED_LAYOUT_CSV), 'published.csv').expect(201);
+    const res = await agent
+      .post('/api/shapes/import')
+      .attach('file', Buffer.from(PUBLISHED_LAYOUT_CSV), 'published.csv')
+      .expect(201);
     expect(res.body.imported).toBe(1);
     expect(res.body.rejected).toEqual([
       { row: 3, label: 'W12X26', reason: expect.stringMatching(/built-in/) },
@@ -82,9 +92,14 @@ describe('shapes', () => {
     const none = await agent.post('/api/shapes/import').field('x', '1');
     expect(none.status).toBe(400);
     expect(none.body.error.issues[0].path).toBe('file');
-    const noHeader = await agent.post('/api/shapes/import').attach('file', Buffer.from('a,b\n1,2\n'), 'x.csv');
+    const noHeader = await agent
+      .post('/api/shapes/import')
+      .attach('file', Buffer.from('a,b\n1,2\n'), 'x.csv');
     expect(noHeader.status).toBe(400);
-    expect(noHeader.body.error.issues[0]).toMatchObject({ path: 'file', message: expect.stringMatching(/header/) });
+    expect(noHeader.body.error.issues[0]).toMatchObject({
+      path: 'file',
+      message: expect.stringMatching(/header/),
+    });
   });
 });
 
@@ -103,30 +118,62 @@ describe('admin: accounts', () => {
     expect(JSON.stringify(list.body)).not.toMatch(/scrypt/);
     const created = await admin
       .post('/api/admin/users')
-      .send({ email: 'New.Person@Example.test', displayName: 'New Person', role: 'fabricator', password: 'long enough password' })
+      .send({
+        email: 'New.Person@Example.test',
+        displayName: 'New Person',
+        role: 'fabricator',
+        password: 'long enough password',
+      })
       .expect(201);
-    expect(created.body).toMatchObject({ email: 'new.person@example.test', role: 'fabricator', active: true });
-    await request(env.app).post('/api/auth/login').send({ email: 'new.person@example.test', password: 'long enough password' }).expect(200);
-    const dup = await admin.post('/api/admin/users').send({ email: 'new.person@example.test', displayName: 'Again', role: 'fabricator', password: 'long enough password' });
+    expect(created.body).toMatchObject({
+      email: 'new.person@example.test',
+      role: 'fabricator',
+      active: true,
+    });
+    await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: 'new.person@example.test', password: 'long enough password' })
+      .expect(200);
+    const dup = await admin.post('/api/admin/users').send({
+      email: 'new.person@example.test',
+      displayName: 'Again',
+      role: 'fabricator',
+      password: 'long enough password',
+    });
     expect(dup.status).toBe(409);
     expect(dup.body.error.issues[0].path).toBe('email');
-    const short = await admin.post('/api/admin/users').send({ email: 'x@example.test', displayName: 'X', role: 'engineer', password: 'short' });
+    const short = await admin
+      .post('/api/admin/users')
+      .send({ email: 'x@example.test', displayName: 'X', role: 'engineer', password: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.issues[0].path).toBe('password');
     const engineer = await env.login('engineer');
     await engineer.get('/api/admin/users').expect(403);
-    await engineer.post('/api/admin/users').send({ email: 'y@example.test', displayName: 'Y', role: 'admin', password: 'long enough password' }).expect(403);
+    await engineer
+      .post('/api/admin/users')
+      .send({ email: 'y@example.test', displayName: 'Y', role: 'admin', password: 'long enough password' })
+      .expect(403);
   });
 
   it('changes roles with an audit row, disables accounts, and protects the acting admin', async () => {
     const admin = await env.login('admin');
-    const res = await admin.patch(`/api/admin/users/${env.ids.outsider}`).send({ role: 'architect', displayName: 'Out Sider II' }).expect(200);
+    const res = await admin
+      .patch(`/api/admin/users/${env.ids.outsider}`)
+      .send({ role: 'architect', displayName: 'Out Sider II' })
+      .expect(200);
     expect(res.body).toMatchObject({ role: 'architect', displayName: 'Out Sider II' });
     const audit = await env.db('audit').where({ kind: 'role-change' });
     expect(audit).toHaveLength(1);
-    expect(audit[0]).toMatchObject({ user_id: env.ids.admin, subject: 'outsider@example.test', detail: 'engineer -> architect' });
+    expect(audit[0]).toMatchObject({
+      user_id: env.ids.admin,
+      subject: 'outsider@example.test',
+      detail: 'engineer -> architect',
+    });
     await admin.patch(`/api/admin/users/${env.ids.outsider}`).send({ active: false }).expect(200);
-    await request(env.app).post('/api/auth/login').send({ email: 'outsider@example.test', password: PASSWORD }).expect(401);
+    await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: 'outsider@example.test', password: PASSWORD })
+      .expect(401);
     const self = await admin.patch(`/api/admin/users/${env.ids.admin}`).send({ active: false });
     expect(self.status).toBe(400);
     expect(self.body.error.issues[0].path).toBe('active');

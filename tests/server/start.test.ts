@@ -8,7 +8,9 @@ import { startServer, type RunningServer } from '../../server/start';
 
 describe('configuration', () => {
   it('refuses a PostgreSQL URL with a clear message', () => {
-    expect(() => parseEnv({ DATABASE_URL: 'postgres://u:p@db/reachline' })).toThrow(/PostgreSQL is not supported yet/);
+    expect(() => parseEnv({ DATABASE_URL: 'postgres://u:p@db/reachline' })).toThrow(
+      /PostgreSQL is not supported yet/,
+    );
   });
 
   it('names the bad variable', () => {
@@ -18,7 +20,12 @@ describe('configuration', () => {
 
   it('has working defaults', () => {
     const config = parseEnv({});
-    expect(config).toMatchObject({ port: 3000, smtpUrl: null, attachmentMaxBytes: 10 * 1024 * 1024, sessionSecret: null });
+    expect(config).toMatchObject({
+      port: 3000,
+      smtpUrl: null,
+      attachmentMaxBytes: 10 * 1024 * 1024,
+      sessionSecret: null,
+    });
     expect(config.databaseUrl).toMatch(/data[/\\]reachline\.sqlite$/);
     expect(config.uploadDir).toMatch(/data[/\\]uploads$/);
   });
@@ -71,9 +78,14 @@ describe('startServer', () => {
     });
     expect(login.status).toBe(200);
     const cookie = login.headers.get('set-cookie')!.split(';')[0];
-    const projects = (await (await fetch(`${server.url}/api/projects`, { headers: { cookie } })).json()) as { name: string; id: number }[];
+    const projects = (await (await fetch(`${server.url}/api/projects`, { headers: { cookie } })).json()) as {
+      name: string;
+      id: number;
+    }[];
     expect(projects.map((p) => p.name)).toEqual(['Harbor View Studio']);
-    const detail = (await (await fetch(`${server.url}/api/projects/${projects[0].id}`, { headers: { cookie } })).json()) as {
+    const detail = (await (
+      await fetch(`${server.url}/api/projects/${projects[0].id}`, { headers: { cookie } })
+    ).json()) as {
       members: unknown[];
       cantilevers: { name: string; currentRevisionNumber: number }[];
     };
@@ -126,7 +138,9 @@ describe('startServer', () => {
       body: JSON.stringify({ email: DEMO_ACCOUNTS[0].email, password: DEMO_PASSWORD }),
     });
     const cookie = login.headers.get('set-cookie')!.split(';')[0];
-    const users = (await (await fetch(`${server.url}/api/admin/users`, { headers: { cookie } })).json()) as unknown[];
+    const users = (await (
+      await fetch(`${server.url}/api/admin/users`, { headers: { cookie } })
+    ).json()) as unknown[];
     expect(users).toHaveLength(4);
   });
 });

@@ -8,7 +8,12 @@ import { ProjectMembersPanel } from '../../src/features/admin/components/project
 import type { OutboxDto, UserDto } from '../../shared/schemas/api';
 import { renderAt, stubFetch, users } from './history-fixtures';
 
-const everyone: UserDto[] = [users.admin, users.architect, users.engineer, { ...users.engineer2, active: false }];
+const everyone: UserDto[] = [
+  users.admin,
+  users.architect,
+  users.engineer,
+  { ...users.engineer2, active: false },
+];
 
 describe('Team', () => {
   it('shows field errors next to the fields and sends nothing while the form is invalid', async () => {
@@ -29,10 +34,16 @@ describe('Team', () => {
     await user.click(within(form).getByRole('button', { name: 'Create account' }));
 
     const email = within(form).getByLabelText('E-mail');
-    expect(await within(form).findByText('E-mail must be an e-mail address')).toHaveAttribute('id', 'invite-email-error');
+    expect(await within(form).findByText('E-mail must be an e-mail address')).toHaveAttribute(
+      'id',
+      'invite-email-error',
+    );
     expect(email).toHaveAttribute('aria-describedby', 'invite-email-error');
     expect(within(form).getByText('Name is required')).toHaveAttribute('id', 'invite-name-error');
-    expect(within(form).getByText('First password must be at least 10 characters')).toHaveAttribute('id', 'invite-password-error');
+    expect(within(form).getByText('First password must be at least 10 characters')).toHaveAttribute(
+      'id',
+      'invite-password-error',
+    );
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 
@@ -45,10 +56,29 @@ describe('Team', () => {
       if (path === '/api/admin/users' && method === 'POST') {
         if (taken) {
           taken = false;
-          return { status: 409, body: { error: { code: 'email_taken', message: 'That e-mail is in use.', issues: [{ path: 'email', message: 'already has an account' }] } } };
+          return {
+            status: 409,
+            body: {
+              error: {
+                code: 'email_taken',
+                message: 'That e-mail is in use.',
+                issues: [{ path: 'email', message: 'already has an account' }],
+              },
+            },
+          };
         }
         const b = body as { email: string; displayName: string; role: UserDto['role'] };
-        return { status: 201, body: { id: 9, email: b.email, displayName: b.displayName, role: b.role, units: 'US', active: true } };
+        return {
+          status: 201,
+          body: {
+            id: 9,
+            email: b.email,
+            displayName: b.displayName,
+            role: b.role,
+            units: 'US',
+            active: true,
+          },
+        };
       }
       return undefined;
     });
@@ -64,7 +94,9 @@ describe('Team', () => {
     await user.clear(within(form).getByLabelText('E-mail'));
     await user.type(within(form).getByLabelText('E-mail'), 'fay@reachline.test');
     await user.click(within(form).getByRole('button', { name: 'Create account' }));
-    expect(await screen.findByText('Account created for Fay Fabricator (fay@reachline.test) as fabricator.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Account created for Fay Fabricator (fay@reachline.test) as fabricator.'),
+    ).toBeInTheDocument();
     expect(calls.filter((c) => c.method === 'POST').at(-1)?.body).toEqual({
       email: 'fay@reachline.test',
       displayName: 'Fay Fabricator',
@@ -78,7 +110,8 @@ describe('Team', () => {
     const calls = stubFetch(({ path, method, body }) => {
       if (path === '/api/auth/me') return { body: users.admin };
       if (path === '/api/admin/users' && method === 'GET') return { body: everyone };
-      if (method === 'PATCH' && path.startsWith('/api/admin/users/')) return { body: { ...users.engineer2, ...(body as object) } };
+      if (method === 'PATCH' && path.startsWith('/api/admin/users/'))
+        return { body: { ...users.engineer2, ...(body as object) } };
       return undefined;
     });
     renderAt(<TeamRoute />, { route: '/admin/team', path: '/admin/team' });
@@ -95,7 +128,9 @@ describe('Team', () => {
   it('is closed to anyone but an admin', async () => {
     stubFetch(({ path }) => (path === '/api/auth/me' ? { body: users.architect } : undefined));
     renderAt(<TeamRoute />, { route: '/admin/team', path: '/admin/team' });
-    expect(await screen.findByText('Only an admin manages accounts, members and the outbox.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Only an admin manages accounts, members and the outbox.'),
+    ).toBeInTheDocument();
     expect(screen.queryByRole('form')).not.toBeInTheDocument();
   });
 });
@@ -103,17 +138,29 @@ describe('Team', () => {
 describe('Project members and outbox', () => {
   it('adds an active account that is not yet a member, and removes one', async () => {
     const user = userEvent.setup();
-    const members = [{ userId: 2, email: users.architect.email, displayName: users.architect.displayName, role: 'architect' as const }];
+    const members = [
+      {
+        userId: 2,
+        email: users.architect.email,
+        displayName: users.architect.displayName,
+        role: 'architect' as const,
+      },
+    ];
     const calls = stubFetch(({ path, method }) => {
       if (path === '/api/auth/me') return { body: users.admin };
       if (path === '/api/admin/users') return { body: everyone };
-      if (path === '/api/projects/3' && method === 'GET') return { body: { id: 3, name: 'P', members, cantilevers: [] } };
+      if (path === '/api/projects/3' && method === 'GET')
+        return { body: { id: 3, name: 'P', members, cantilevers: [] } };
       if (path === '/api/projects/3/members' && method === 'POST') return { status: 201, body: {} };
       if (path === '/api/projects/3/members/2' && method === 'DELETE') return { status: 204 };
       return undefined;
     });
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(<QueryClientProvider client={client}><ProjectMembersPanel projectId={3} /></QueryClientProvider>);
+    render(
+      <QueryClientProvider client={client}>
+        <ProjectMembersPanel projectId={3} />
+      </QueryClientProvider>,
+    );
     const select = await screen.findByLabelText('Add an account');
     await screen.findByRole('option', { name: /Enid Engineer/ });
     // members and deactivated accounts are not offered
@@ -133,10 +180,36 @@ describe('Project members and outbox', () => {
   it('lists the captured e-mails with a status word and opens the text', async () => {
     const user = userEvent.setup();
     const mails: OutboxDto[] = [
-      { id: 1, to: ['engineer@reachline.test'], subject: 'Revision 2 needs review', text: 'Please review revision 2.', status: 'sent', attempts: 1, lastError: null, createdAt: '2026-11-02T10:00:00.000Z', sentAt: '2026-11-02T10:00:01.000Z' },
-      { id: 2, to: ['architect@reachline.test'], subject: 'Changes requested', text: 'See the comment.', status: 'failed', attempts: 3, lastError: 'connection refused', createdAt: '2026-11-03T10:00:00.000Z', sentAt: null },
+      {
+        id: 1,
+        to: ['engineer@reachline.test'],
+        subject: 'Revision 2 needs review',
+        text: 'Please review revision 2.',
+        status: 'sent',
+        attempts: 1,
+        lastError: null,
+        createdAt: '2026-11-02T10:00:00.000Z',
+        sentAt: '2026-11-02T10:00:01.000Z',
+      },
+      {
+        id: 2,
+        to: ['architect@reachline.test'],
+        subject: 'Changes requested',
+        text: 'See the comment.',
+        status: 'failed',
+        attempts: 3,
+        lastError: 'connection refused',
+        createdAt: '2026-11-03T10:00:00.000Z',
+        sentAt: null,
+      },
     ];
-    stubFetch(({ path }) => (path === '/api/auth/me' ? { body: users.admin } : path === '/api/admin/outbox' ? { body: mails } : undefined));
+    stubFetch(({ path }) =>
+      path === '/api/auth/me'
+        ? { body: users.admin }
+        : path === '/api/admin/outbox'
+          ? { body: mails }
+          : undefined,
+    );
     renderAt(<OutboxRoute />, { route: '/admin/outbox', path: '/admin/outbox' });
     const table = await screen.findByRole('table', { name: /E-mails captured/ });
     const rows = within(table).getAllByRole('row').slice(1);

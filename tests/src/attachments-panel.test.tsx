@@ -7,10 +7,23 @@ import type { AttachmentDto, UserDto } from '../../shared/schemas/api';
 import { stubFetch, users } from './history-fixtures';
 
 const drawing: AttachmentDto = {
-  id: 5, cantileverId: 7, originalName: 'plate-detail.pdf', mimeType: 'application/pdf', size: 245_760,
-  sha256: 'ab12cd34ef567890aa', uploaderId: 3, uploaderName: 'Fern Fabricator', createdAt: '2026-11-02T10:00:00.000Z',
+  id: 5,
+  cantileverId: 7,
+  originalName: 'plate-detail.pdf',
+  mimeType: 'application/pdf',
+  size: 245_760,
+  sha256: 'ab12cd34ef567890aa',
+  uploaderId: 3,
+  uploaderName: 'Fern Fabricator',
+  createdAt: '2026-11-02T10:00:00.000Z',
 };
-const photo: AttachmentDto = { ...drawing, id: 6, originalName: 'pier.jpg', mimeType: 'image/jpeg', size: 512 };
+const photo: AttachmentDto = {
+  ...drawing,
+  id: 6,
+  originalName: 'pier.jpg',
+  mimeType: 'image/jpeg',
+  size: 512,
+};
 
 interface Controls {
   sent: FormData[];
@@ -25,7 +38,9 @@ function fakeXhr(reply: { status: number; body: unknown }, controls: Controls) {
     status = 0;
     responseText = '';
     withCredentials = false;
-    upload: { onprogress: ((e: { lengthComputable: boolean; loaded: number; total: number }) => void) | null } = { onprogress: null };
+    upload: {
+      onprogress: ((e: { lengthComputable: boolean; loaded: number; total: number }) => void) | null;
+    } = { onprogress: null };
     onload: (() => void) | null = null;
     onerror: (() => void) | null = null;
     open(method: string, url: string) {
@@ -34,7 +49,8 @@ function fakeXhr(reply: { status: number; body: unknown }, controls: Controls) {
     setRequestHeader() {}
     send(form: FormData) {
       controls.sent.push(form);
-      controls.progress = (loaded, total) => act(() => this.upload.onprogress?.({ lengthComputable: true, loaded, total }));
+      controls.progress = (loaded, total) =>
+        act(() => this.upload.onprogress?.({ lengthComputable: true, loaded, total }));
       controls.finish = () =>
         act(() => {
           this.status = reply.status;
@@ -46,9 +62,19 @@ function fakeXhr(reply: { status: number; body: unknown }, controls: Controls) {
 }
 
 function setup(me: UserDto, list: AttachmentDto[]) {
-  stubFetch(({ path }) => (path === '/api/auth/me' ? { body: me } : path === '/api/cantilevers/7/attachments' ? { body: list } : undefined));
+  stubFetch(({ path }) =>
+    path === '/api/auth/me'
+      ? { body: me }
+      : path === '/api/cantilevers/7/attachments'
+        ? { body: list }
+        : undefined,
+  );
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  render(<QueryClientProvider client={client}><AttachmentsPanel cantileverId={7} /></QueryClientProvider>);
+  render(
+    <QueryClientProvider client={client}>
+      <AttachmentsPanel cantileverId={7} />
+    </QueryClientProvider>,
+  );
 }
 
 describe('AttachmentsPanel', () => {
@@ -57,15 +83,35 @@ describe('AttachmentsPanel', () => {
     expect(await screen.findByText('plate-detail.pdf')).toBeInTheDocument();
     expect(screen.getByText(/PDF · 240\.0 KiB · Fern Fabricator/)).toBeInTheDocument();
     expect(screen.getAllByText('sha256 ab12cd34ef')).toHaveLength(2);
-    expect(screen.getByRole('link', { name: 'Open plate-detail.pdf in a new tab' })).toHaveAttribute('href', '/api/attachments/5?inline=1');
-    expect(screen.getByRole('link', { name: 'Download pier.jpg' })).toHaveAttribute('href', '/api/attachments/6');
-    expect(screen.getByRole('img', { name: 'Preview of pier.jpg' })).toHaveAttribute('src', '/api/attachments/6?inline=1');
+    expect(screen.getByRole('link', { name: 'Open plate-detail.pdf in a new tab' })).toHaveAttribute(
+      'href',
+      '/api/attachments/5?inline=1',
+    );
+    expect(screen.getByRole('link', { name: 'Download pier.jpg' })).toHaveAttribute(
+      'href',
+      '/api/attachments/6',
+    );
+    expect(screen.getByRole('img', { name: 'Preview of pier.jpg' })).toHaveAttribute(
+      'src',
+      '/api/attachments/6?inline=1',
+    );
   });
 
   it('uploads with a progress bar and says in words when the server refuses a file as too large', async () => {
     const user = userEvent.setup();
     const controls: Controls = { sent: [], progress: () => undefined, finish: () => undefined };
-    vi.stubGlobal('XMLHttpRequest', fakeXhr({ status: 413, body: { error: { code: 'too_large', message: 'The file is larger than the limit of 10 MiB.', issues: [] } } }, controls));
+    vi.stubGlobal(
+      'XMLHttpRequest',
+      fakeXhr(
+        {
+          status: 413,
+          body: {
+            error: { code: 'too_large', message: 'The file is larger than the limit of 10 MiB.', issues: [] },
+          },
+        },
+        controls,
+      ),
+    );
     setup(users.architect, []);
     const input = await screen.findByLabelText(/Add a file/);
     const file = new File(['x'.repeat(100)], 'big-drawing.pdf', { type: 'application/pdf' });
@@ -77,7 +123,9 @@ describe('AttachmentsPanel', () => {
     expect(bar).toHaveAttribute('value', '0.6');
     expect(screen.getByText('60 %')).toBeInTheDocument();
     controls.finish();
-    expect(await screen.findByText('The file is too large. The file is larger than the limit of 10 MiB.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('The file is too large. The file is larger than the limit of 10 MiB.'),
+    ).toBeInTheDocument();
     expect(screen.queryByRole('progressbar')).not.toBeInTheDocument();
     expect((controls.sent[0].get('file') as File).name).toBe('big-drawing.pdf');
   });
@@ -85,13 +133,35 @@ describe('AttachmentsPanel', () => {
   it('warns before uploading a file of a type the server refuses, and reports the 400 in words', async () => {
     const user = userEvent.setup({ applyAccept: false });
     const controls: Controls = { sent: [], progress: () => undefined, finish: () => undefined };
-    vi.stubGlobal('XMLHttpRequest', fakeXhr({ status: 400, body: { error: { code: 'bad_request', message: 'The file was refused: not an allowed type.', issues: [{ path: 'file', message: 'not an allowed type' }] } } }, controls));
+    vi.stubGlobal(
+      'XMLHttpRequest',
+      fakeXhr(
+        {
+          status: 400,
+          body: {
+            error: {
+              code: 'bad_request',
+              message: 'The file was refused: not an allowed type.',
+              issues: [{ path: 'file', message: 'not an allowed type' }],
+            },
+          },
+        },
+        controls,
+      ),
+    );
     setup(users.architect, []);
-    await user.upload(await screen.findByLabelText(/Add a file/), new File(['MZ'], 'tool.exe', { type: 'application/octet-stream' }));
-    expect(screen.getByText(/“tool\.exe” does not look like a PDF, PNG, JPEG, DXF or CSV file/)).toBeInTheDocument();
+    await user.upload(
+      await screen.findByLabelText(/Add a file/),
+      new File(['MZ'], 'tool.exe', { type: 'application/octet-stream' }),
+    );
+    expect(
+      screen.getByText(/“tool\.exe” does not look like a PDF, PNG, JPEG, DXF or CSV file/),
+    ).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Upload' }));
     controls.finish();
-    expect(await screen.findByText(/This file is not allowed\. The file was refused: not an allowed type\./)).toBeInTheDocument();
+    expect(
+      await screen.findByText(/This file is not allowed\. The file was refused: not an allowed type\./),
+    ).toBeInTheDocument();
   });
 
   it('uploads a file and shows it in the list once the server has stored it', async () => {
@@ -99,11 +169,24 @@ describe('AttachmentsPanel', () => {
     const controls: Controls = { sent: [], progress: () => undefined, finish: () => undefined };
     vi.stubGlobal('XMLHttpRequest', fakeXhr({ status: 201, body: drawing }, controls));
     const stored: AttachmentDto[] = [];
-    stubFetch(({ path }) => (path === '/api/auth/me' ? { body: users.architect } : path === '/api/cantilevers/7/attachments' ? { body: stored } : undefined));
+    stubFetch(({ path }) =>
+      path === '/api/auth/me'
+        ? { body: users.architect }
+        : path === '/api/cantilevers/7/attachments'
+          ? { body: stored }
+          : undefined,
+    );
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(<QueryClientProvider client={client}><AttachmentsPanel cantileverId={7} /></QueryClientProvider>);
+    render(
+      <QueryClientProvider client={client}>
+        <AttachmentsPanel cantileverId={7} />
+      </QueryClientProvider>,
+    );
     expect(await screen.findByText('No files yet.')).toBeInTheDocument();
-    await user.upload(screen.getByLabelText(/Add a file/), new File(['%PDF-1.7'], 'plate-detail.pdf', { type: 'application/pdf' }));
+    await user.upload(
+      screen.getByLabelText(/Add a file/),
+      new File(['%PDF-1.7'], 'plate-detail.pdf', { type: 'application/pdf' }),
+    );
     await user.click(screen.getByRole('button', { name: 'Upload' }));
     stored.push(drawing);
     controls.finish();
@@ -113,7 +196,9 @@ describe('AttachmentsPanel', () => {
 
   it('offers no upload to an admin', async () => {
     setup(users.admin, [drawing]);
-    expect(await screen.findByText('Your role (admin) may look at files but not add them.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Your role (admin) may look at files but not add them.'),
+    ).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Upload' })).not.toBeInTheDocument();
   });
 });

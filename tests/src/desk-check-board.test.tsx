@@ -30,7 +30,13 @@ describe('check words', () => {
   });
 
   it('sorts worst first: not computed, then failing, then passing by ratio', () => {
-    const sorted = sortWorstFirst([check('low', 0.2), check('over', 1.3), check('none', null), check('near', 0.93), check('worse', 2.1)]);
+    const sorted = sortWorstFirst([
+      check('low', 0.2),
+      check('over', 1.3),
+      check('none', null),
+      check('near', 0.93),
+      check('worse', 2.1),
+    ]);
     expect(sorted.map((c) => c.id)).toEqual(['none', 'worse', 'over', 'near', 'low']);
   });
 
@@ -44,7 +50,9 @@ describe('check words', () => {
 
 describe('CheckBoard', () => {
   it('renders rows worst first with ratio and word beside the bar', () => {
-    render(<CheckBoard checks={[check('flexure', 0.42), check('thickness', 1.15), check('breakout', null)]} />);
+    render(
+      <CheckBoard checks={[check('flexure', 0.42), check('thickness', 1.15), check('breakout', null)]} />,
+    );
     const rows = screen.getAllByRole('row').slice(1);
     expect(rows.map((r) => r.getAttribute('data-check'))).toEqual(['breakout', 'thickness', 'flexure']);
     expect(within(rows[0]).getByText(/not computed/)).toBeInTheDocument();

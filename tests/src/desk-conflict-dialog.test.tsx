@@ -17,7 +17,13 @@ const latest = {
   createdAt: '2026-12-01T10:00:00Z',
   ok: true,
   reviewState: 'draft',
-  input: { ...exampleDesign, connection: { ...exampleDesign.connection!, plate: { ...exampleDesign.connection!.plate, thickness: '1.5 in' } } },
+  input: {
+    ...exampleDesign,
+    connection: {
+      ...exampleDesign.connection!,
+      plate: { ...exampleDesign.connection!.plate, thickness: '1.5 in' },
+    },
+  },
   result: null as never,
   reviews: [],
 } satisfies RevisionDto;
@@ -26,10 +32,25 @@ const mine: DesignDocument = { ...exampleDesign, member: { ...exampleDesign.memb
 
 describe('ConflictDialog (stale save)', () => {
   it('lists the inputs that differ between the latest revision and mine', () => {
-    render(<ConflictDialog latest={latest} mine={mine} onKeepMine={() => {}} onLoadLatest={() => {}} onClose={() => {}} />);
+    render(
+      <ConflictDialog
+        latest={latest}
+        mine={mine}
+        onKeepMine={() => {}}
+        onLoadLatest={() => {}}
+        onClose={() => {}}
+      />,
+    );
     const dialog = screen.getByRole('dialog', { name: 'Revision 4 was saved while you worked' });
     const table = within(dialog).getByRole('table', { name: 'Inputs that differ' });
-    const rows = within(table).getAllByRole('row').slice(1).map((r) => within(r).getAllByRole('cell').map((c) => c.textContent));
+    const rows = within(table)
+      .getAllByRole('row')
+      .slice(1)
+      .map((r) =>
+        within(r)
+          .getAllByRole('cell')
+          .map((c) => c.textContent),
+      );
     expect(rows).toEqual([
       ['connection.plate.thickness', '1.5 in', '1.25 in'],
       ['member.length', '9 ft', '11 ft'],
@@ -40,7 +61,9 @@ describe('ConflictDialog (stale save)', () => {
   it('offers to keep my changes on top of the latest, or to load the latest', () => {
     const keep = vi.fn();
     const load = vi.fn();
-    render(<ConflictDialog latest={latest} mine={mine} onKeepMine={keep} onLoadLatest={load} onClose={() => {}} />);
+    render(
+      <ConflictDialog latest={latest} mine={mine} onKeepMine={keep} onLoadLatest={load} onClose={() => {}} />,
+    );
     fireEvent.click(screen.getByRole('button', { name: 'Keep my changes on top of revision 4' }));
     expect(keep).toHaveBeenCalledTimes(1);
     fireEvent.click(screen.getByRole('button', { name: 'Load revision 4' }));
@@ -49,7 +72,15 @@ describe('ConflictDialog (stale save)', () => {
 
   it('closes on Escape and keeps focus inside', () => {
     const close = vi.fn();
-    render(<ConflictDialog latest={latest} mine={mine} onKeepMine={() => {}} onLoadLatest={() => {}} onClose={close} />);
+    render(
+      <ConflictDialog
+        latest={latest}
+        mine={mine}
+        onKeepMine={() => {}}
+        onLoadLatest={() => {}}
+        onClose={close}
+      />,
+    );
     const dialog = screen.getByRole('dialog');
     expect(dialog.contains(document.activeElement)).toBe(true);
     fireEvent.keyDown(document, { key: 'Escape' });

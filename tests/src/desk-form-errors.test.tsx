@@ -10,8 +10,18 @@ import { QuantityField } from '../../src/features/desk/components/quantity-field
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
 
-function Harness({ children, issues = new Map<string, string>() }: { children: ReactNode; issues?: Map<string, string> }) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: exampleDesign });
+function Harness({
+  children,
+  issues = new Map<string, string>(),
+}: {
+  children: ReactNode;
+  issues?: Map<string, string>;
+}) {
+  const form = useForm<DesignDocument, unknown, DesignInput>({
+    resolver: zodResolver(designSchema),
+    mode: 'onChange',
+    defaultValues: exampleDesign,
+  });
   return (
     <FormProvider {...form}>
       <EngineIssuesContext.Provider value={issues}>{children}</EngineIssuesContext.Provider>
@@ -27,34 +37,65 @@ async function type(label: string, value: string) {
 
 describe('desk fields: errors in plain words next to the field', () => {
   it('says a length needs a unit, and that it must be positive', async () => {
-    render(<Harness><ReachGroup disabled={false} /></Harness>);
+    render(
+      <Harness>
+        <ReachGroup disabled={false} />
+      </Harness>,
+    );
     await type('Length (root to tip)', '9');
-    expect(await screen.findByText('Length (root to tip) needs a unit, got "9" (for example "10 ft")')).toBeInTheDocument();
-    expect(screen.getByRole('textbox', { name: 'Length (root to tip)' })).toHaveAttribute('aria-invalid', 'true');
+    expect(
+      await screen.findByText('Length (root to tip) needs a unit, got "9" (for example "10 ft")'),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Length (root to tip)' })).toHaveAttribute(
+      'aria-invalid',
+      'true',
+    );
     await type('Length (root to tip)', '-3 ft');
-    expect(await screen.findByText('Length (root to tip) must be a positive length, got "-3 ft"')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Length (root to tip) must be a positive length, got "-3 ft"'),
+    ).toBeInTheDocument();
     await type('Length (root to tip)', '10 kip');
-    expect(await screen.findByText('Length (root to tip) must be a length, got "10 kip"')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Length (root to tip) must be a length, got "10 kip"'),
+    ).toBeInTheDocument();
     expect(document.body.textContent).not.toContain('NaN');
   });
 
   it('says a ratio must be a number, never showing NaN', async () => {
-    render(<Harness><ReachGroup disabled={false} /></Harness>);
+    render(
+      <Harness>
+        <ReachGroup disabled={false} />
+      </Harness>,
+    );
     await act(async () => {
-      fireEvent.change(screen.getByRole('spinbutton', { name: 'Live deflection limit, span /' }), { target: { value: '' } });
+      fireEvent.change(screen.getByRole('spinbutton', { name: 'Live deflection limit, span /' }), {
+        target: { value: '' },
+      });
     });
     expect(await screen.findByText(/Live deflection limit, span \/ must be a number/)).toBeInTheDocument();
     expect(document.body.textContent).not.toContain('NaN');
   });
 
   it('shows an engine issue (written with array brackets) at its field', () => {
-    const issues = issuesByField([{ path: 'loads.point[0].at', message: 'is beyond the tip (the member is 9 ft long)' }]);
-    render(<Harness issues={issues}><QuantityField name="loads.point.0.at" label="At, from the root" /></Harness>);
-    expect(screen.getByRole('alert')).toHaveTextContent('At, from the root is beyond the tip (the member is 9 ft long)');
+    const issues = issuesByField([
+      { path: 'loads.point[0].at', message: 'is beyond the tip (the member is 9 ft long)' },
+    ]);
+    render(
+      <Harness issues={issues}>
+        <QuantityField name="loads.point.0.at" label="At, from the root" />
+      </Harness>,
+    );
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      'At, from the root is beyond the tip (the member is 9 ft long)',
+    );
   });
 
   it('rewrites the value in the unit chosen beside the field', async () => {
-    render(<Harness><QuantityField name="member.length" label="Length" /></Harness>);
+    render(
+      <Harness>
+        <QuantityField name="member.length" label="Length" />
+      </Harness>,
+    );
     await act(async () => {
       fireEvent.change(screen.getByRole('combobox', { name: 'Length: unit' }), { target: { value: 'm' } });
     });

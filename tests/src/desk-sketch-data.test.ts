@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import { designSchema } from '../../shared/schemas/design';
-import { chartRows, defaultSeriesKey, deflectionLimit, describeSeries, seriesChoices } from '../../src/features/desk/lib/chart-data';
+import {
+  chartRows,
+  defaultSeriesKey,
+  deflectionLimit,
+  describeSeries,
+  seriesChoices,
+} from '../../src/features/desk/lib/chart-data';
 import { platePlan } from '../../src/features/desk/lib/plate-plan';
 
 const result = evaluateDesign(designSchema.parse(exampleDesign), { stations: true });
@@ -10,7 +16,12 @@ const result = evaluateDesign(designSchema.parse(exampleDesign), { stations: tru
 describe('chart data from the stations', () => {
   it('offers every combination and every case, governing bending combination first', () => {
     const choices = seriesChoices(result);
-    expect(choices.filter((c) => c.kind === 'case').map((c) => c.series.name).sort()).toEqual(['D', 'L', 'S']);
+    expect(
+      choices
+        .filter((c) => c.kind === 'case')
+        .map((c) => c.series.name)
+        .sort(),
+    ).toEqual(['D', 'L', 'S']);
     const flexure = result.checks.find((c) => c.id === 'member.flexure');
     expect(defaultSeriesKey(result)).toBe(`combination:${flexure?.combination}`);
   });
@@ -48,7 +59,10 @@ describe('plate plan for the sketch', () => {
 
   it('draws nothing for a member without a connection or with a size that does not parse', () => {
     expect(platePlan(exampleMemberOnly, null)).toBeNull();
-    const broken = { ...exampleDesign, connection: { ...exampleDesign.connection!, plate: { ...exampleDesign.connection!.plate, N: 'wide' } } };
+    const broken = {
+      ...exampleDesign,
+      connection: { ...exampleDesign.connection!, plate: { ...exampleDesign.connection!.plate, N: 'wide' } },
+    };
     expect(platePlan(broken, null)).toBeNull();
   });
 });

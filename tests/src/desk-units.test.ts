@@ -10,7 +10,8 @@ import { switchUnits } from '../../src/features/desk/lib/switch-units';
 /** Every quantity field of a document as [name, physical value in the engine's internal unit]. */
 function physical(doc: unknown, prefix = '', out = new Map<string, number>()): Map<string, number> {
   if (Array.isArray(doc)) doc.forEach((d, i) => physical(d, `${prefix}.${i}`, out));
-  else if (doc && typeof doc === 'object') for (const [k, v] of Object.entries(doc)) physical(v, prefix ? `${prefix}.${k}` : k, out);
+  else if (doc && typeof doc === 'object')
+    for (const [k, v] of Object.entries(doc)) physical(v, prefix ? `${prefix}.${k}` : k, out);
   else if (typeof doc === 'string') {
     const unit = fieldUnit(prefix);
     if (unit) {
@@ -42,7 +43,9 @@ describe('switching the desk between US and SI', () => {
   it('uses the customary unit of each field in SI', () => {
     const { doc: si } = switchUnits(us, 'SI');
     for (const [name] of physical(si)) {
-      const text = name.split('.').reduce<unknown>((node, key) => (node as Record<string, unknown>)[key], si) as string;
+      const text = name
+        .split('.')
+        .reduce<unknown>((node, key) => (node as Record<string, unknown>)[key], si) as string;
       expect(unitOfText(text)).toBe(fieldUnit(name)!.SI);
     }
   });
@@ -54,7 +57,10 @@ describe('switching the desk between US and SI', () => {
   });
 
   it('converts a document from SI without a record to US customary units', () => {
-    const si: DesignDocument = { units: 'SI', member: { length: '3 m', spacing: '1200 mm', section: { shape: 'W8X18' } } };
+    const si: DesignDocument = {
+      units: 'SI',
+      member: { length: '3 m', spacing: '1200 mm', section: { shape: 'W8X18' } },
+    };
     const { doc } = switchUnits(si, 'US');
     expect(doc.member.length).toBe('9.8425 ft');
     expect(doc.member.spacing).toBe('3.937 ft');

@@ -11,7 +11,14 @@ import { makeRevision, renderAt, stubFetch } from './history-fixtures';
 const longer: DesignDocument = {
   ...exampleDesign,
   member: { ...exampleDesign.member, length: '10 ft' },
-  loads: { ...exampleDesign.loads, area: [{ case: 'D', value: '15 psf' }, { case: 'L', value: '75 psf' }, { case: 'S', value: '25 psf' }] },
+  loads: {
+    ...exampleDesign.loads,
+    area: [
+      { case: 'D', value: '15 psf' },
+      { case: 'L', value: '75 psf' },
+      { case: 'S', value: '25 psf' },
+    ],
+  },
 };
 
 function check(id: string, ratio: number | null, ok: boolean): Check {
@@ -54,14 +61,27 @@ describe('Compare screen', () => {
       if (method === 'GET' && path === '/api/revisions/12') return { body: b };
       return undefined;
     });
-    renderAt(<CompareRoute />, { route: '/cantilevers/7/compare?a=11&b=12', path: '/cantilevers/:cantileverId/compare' });
+    renderAt(<CompareRoute />, {
+      route: '/cantilevers/7/compare?a=11&b=12',
+      path: '/cantilevers/:cantileverId/compare',
+    });
 
-    expect(await screen.findByRole('heading', { name: 'Compare revision 1 with revision 2' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { name: 'Compare revision 1 with revision 2' }),
+    ).toBeInTheDocument();
     const inputs = screen.getByRole('table', { name: /Changed inputs/ });
     const lengthRow = within(inputs).getByRole('row', { name: /Reach: length/ });
-    expect(within(lengthRow).getAllByRole('cell').map((c) => c.textContent)).toEqual(['9 ft', '10 ft']);
+    expect(
+      within(lengthRow)
+        .getAllByRole('cell')
+        .map((c) => c.textContent),
+    ).toEqual(['9 ft', '10 ft']);
     const liveRow = within(inputs).getByRole('row', { name: /Loads: area load 2, value/ });
-    expect(within(liveRow).getAllByRole('cell').map((c) => c.textContent)).toEqual(['60 psf', '75 psf']);
+    expect(
+      within(liveRow)
+        .getAllByRole('cell')
+        .map((c) => c.textContent),
+    ).toEqual(['60 psf', '75 psf']);
     expect(within(inputs).getAllByRole('row')).toHaveLength(3);
 
     const ratios = screen.getByRole('table', { name: /Check ratios/ });
@@ -71,7 +91,9 @@ describe('Compare screen', () => {
     const flexB = b.result.checks.find((c) => c.id === 'member.flexure');
     expect(flexA?.ratio).not.toBeNull();
     const flexRow = ratios.querySelector('tr[data-check="member.flexure"]') as HTMLElement;
-    const cells = within(flexRow).getAllByRole('cell').map((c) => c.textContent);
+    const cells = within(flexRow)
+      .getAllByRole('cell')
+      .map((c) => c.textContent);
     expect(cells[0]).toContain((flexA?.ratio as number).toFixed(2));
     expect(cells[1]).toContain((flexB?.ratio as number).toFixed(2));
     // A longer reach with more live load bends the root harder.
@@ -91,21 +113,34 @@ describe('Compare screen', () => {
     // the service curve is built from the unfactored cases: its tip is the later check's own demand,
     // and for the earlier revision the sum of its case tip deflections under the same combination
     expect(service).toBe('D + L');
-    const tipA = (a.result.member.cases.D?.tipDeflection.value as number) + (a.result.member.cases.L?.tipDeflection.value as number);
+    const tipA =
+      (a.result.member.cases.D?.tipDeflection.value as number) +
+      (a.result.member.cases.L?.tipDeflection.value as number);
     const tipB = total?.demand?.value as number;
     expect(summary.textContent).toContain(`tip deflection ${tipA.toPrecision(3)} in. Revision 2`);
     expect(summary.textContent).toContain(`tip deflection ${tipB.toPrecision(3)} in.`);
-    expect(summary.textContent).toContain(`Revision 1: reach 9.00 ft, root moment ${rootA.toPrecision(3)} kip ft`);
-    expect(summary.textContent).toContain(`Revision 2: reach 10.0 ft, root moment ${rootB.toPrecision(3)} kip ft`);
+    expect(summary.textContent).toContain(
+      `Revision 1: reach 9.00 ft, root moment ${rootA.toPrecision(3)} kip ft`,
+    );
+    expect(summary.textContent).toContain(
+      `Revision 2: reach 10.0 ft, root moment ${rootB.toPrecision(3)} kip ft`,
+    );
   });
 
   it('shows a ratio that was not computed as a failure, never as a pass', async () => {
     const a = makeRevision(11, 1, exampleDesign);
     const b = makeRevision(12, 2, exampleDesign);
-    b.result.checks = b.result.checks.map((c) => (c.id === 'member.shear' ? { ...c, ratio: null, ok: true } : c));
+    b.result.checks = b.result.checks.map((c) =>
+      c.id === 'member.shear' ? { ...c, ratio: null, ok: true } : c,
+    );
     b.result.ok = true;
-    stubFetch(({ path }) => (path === '/api/revisions/11' ? { body: a } : path === '/api/revisions/12' ? { body: b } : undefined));
-    renderAt(<CompareRoute />, { route: '/cantilevers/7/compare?a=11&b=12', path: '/cantilevers/:cantileverId/compare' });
+    stubFetch(({ path }) =>
+      path === '/api/revisions/11' ? { body: a } : path === '/api/revisions/12' ? { body: b } : undefined,
+    );
+    renderAt(<CompareRoute />, {
+      route: '/cantilevers/7/compare?a=11&b=12',
+      path: '/cantilevers/:cantileverId/compare',
+    });
 
     const table = await screen.findByRole('table', { name: /Check ratios/ });
     const row = table.querySelector('tr[data-check="member.shear"]') as HTMLElement;

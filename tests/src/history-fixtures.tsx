@@ -13,10 +13,38 @@ import { designSchema, type DesignDocument } from '../../shared/schemas/design';
 import type { RevisionDto, UserDto } from '../../shared/schemas/api';
 
 export const users: Record<'admin' | 'architect' | 'engineer' | 'engineer2', UserDto> = {
-  admin: { id: 1, email: 'admin@reachline.test', displayName: 'Ada Admin', role: 'admin', units: 'US', active: true },
-  architect: { id: 2, email: 'architect@reachline.test', displayName: 'Arlo Architect', role: 'architect', units: 'US', active: true },
-  engineer: { id: 4, email: 'engineer@reachline.test', displayName: 'Enid Engineer', role: 'engineer', units: 'US', active: true },
-  engineer2: { id: 5, email: 'second@reachline.test', displayName: 'Eli Second', role: 'engineer', units: 'US', active: true },
+  admin: {
+    id: 1,
+    email: 'admin@reachline.test',
+    displayName: 'Ada Admin',
+    role: 'admin',
+    units: 'US',
+    active: true,
+  },
+  architect: {
+    id: 2,
+    email: 'architect@reachline.test',
+    displayName: 'Arlo Architect',
+    role: 'architect',
+    units: 'US',
+    active: true,
+  },
+  engineer: {
+    id: 4,
+    email: 'engineer@reachline.test',
+    displayName: 'Enid Engineer',
+    role: 'engineer',
+    units: 'US',
+    active: true,
+  },
+  engineer2: {
+    id: 5,
+    email: 'second@reachline.test',
+    displayName: 'Eli Second',
+    role: 'engineer',
+    units: 'US',
+    active: true,
+  },
 };
 
 /** A stored revision as the server would send it, with the engine's real result. */
@@ -83,7 +111,9 @@ export function stubFetch(handler: Handler): Call[] {
 }
 
 export function renderAt(ui: ReactElement, { route, path }: { route: string; path: string }) {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const queryClient = new QueryClient({
+    defaultOptions: { queries: { retry: false }, mutations: { retry: false } },
+  });
   return render(
     <QueryClientProvider client={queryClient}>
       <MemoryRouter initialEntries={[route]}>

@@ -6,14 +6,31 @@ import type { CantileverDto, CommentDto, RevisionSummaryDto, UserDto } from '../
 import { renderAt, stubFetch, users } from './history-fixtures';
 
 const cantilever: CantileverDto = {
-  id: 7, projectId: 3, name: 'North deck, typical beam', description: '', currentRevisionId: 33, currentRevisionNumber: 3,
-  reviewState: 'draft', ok: false, updatedAt: '2026-11-03T10:00:00.000Z',
+  id: 7,
+  projectId: 3,
+  name: 'North deck, typical beam',
+  description: '',
+  currentRevisionId: 33,
+  currentRevisionNumber: 3,
+  reviewState: 'draft',
+  ok: false,
+  updatedAt: '2026-11-03T10:00:00.000Z',
 };
 
 function summary(id: number, number: number, extra: Partial<RevisionSummaryDto>): RevisionSummaryDto {
   return {
-    id, cantileverId: 7, number, authorId: 2, authorName: 'Arlo Architect', message: `message ${number}`, engineVersion: '1.0.0',
-    baseRevisionNumber: number > 1 ? number - 1 : null, createdAt: `2026-11-0${number}T10:00:00.000Z`, ok: true, reviewState: 'draft', ...extra,
+    id,
+    cantileverId: 7,
+    number,
+    authorId: 2,
+    authorName: 'Arlo Architect',
+    message: `message ${number}`,
+    engineVersion: '1.0.0',
+    baseRevisionNumber: number > 1 ? number - 1 : null,
+    createdAt: `2026-11-0${number}T10:00:00.000Z`,
+    ok: true,
+    reviewState: 'draft',
+    ...extra,
   };
 }
 
@@ -37,7 +54,14 @@ function serve(me: UserDto) {
     }
     if (path === '/api/revisions/33/comments' && method === 'GET') return { body: comments };
     if (path === '/api/revisions/33/comments' && method === 'POST') {
-      const c: CommentDto = { id: comments.length + 1, revisionId: 33, authorId: me.id, authorName: me.displayName, body: (body as { body: string }).body, createdAt: '2026-11-04T10:00:00.000Z' };
+      const c: CommentDto = {
+        id: comments.length + 1,
+        revisionId: 33,
+        authorId: me.id,
+        authorName: me.displayName,
+        body: (body as { body: string }).body,
+        createdAt: '2026-11-04T10:00:00.000Z',
+      };
       comments.push(c);
       return { status: 201, body: c };
     }
@@ -45,7 +69,8 @@ function serve(me: UserDto) {
   });
 }
 
-const open = () => renderAt(<HistoryRoute />, { route: '/cantilevers/7/history', path: '/cantilevers/:cantileverId/history' });
+const open = () =>
+  renderAt(<HistoryRoute />, { route: '/cantilevers/7/history', path: '/cantilevers/:cantileverId/history' });
 
 describe('History', () => {
   it('lists revisions newest first with state and verdict in words, and submits the latest draft', async () => {
@@ -80,9 +105,15 @@ describe('History', () => {
     await user.click(await screen.findByRole('checkbox', { name: 'Pick revision 3 for compare' }));
     expect(screen.queryByRole('link', { name: /Compare revision/ })).not.toBeInTheDocument();
     await user.click(screen.getByRole('checkbox', { name: 'Pick revision 1 for compare' }));
-    expect(screen.getByRole('link', { name: 'Compare revision 1 with 3' })).toHaveAttribute('href', '/cantilevers/7/compare?a=31&b=33');
+    expect(screen.getByRole('link', { name: 'Compare revision 1 with 3' })).toHaveAttribute(
+      'href',
+      '/cantilevers/7/compare?a=31&b=33',
+    );
     // engineers get a way into the review of the submitted revision
-    expect(screen.getByRole('link', { name: 'Open review of revision 2' })).toHaveAttribute('href', '/revisions/32/review');
+    expect(screen.getByRole('link', { name: 'Open review of revision 2' })).toHaveAttribute(
+      'href',
+      '/revisions/32/review',
+    );
   });
 
   it('lets any member comment on a revision', async () => {
@@ -93,9 +124,14 @@ describe('History', () => {
     expect(await screen.findByText('No comments yet.')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Post comment' }));
     expect(await screen.findByText('Comment is required')).toBeInTheDocument();
-    await user.type(screen.getByRole('textbox', { name: 'Add a comment' }), 'Tip looks lively, check the frequency.');
+    await user.type(
+      screen.getByRole('textbox', { name: 'Add a comment' }),
+      'Tip looks lively, check the frequency.',
+    );
     await user.click(screen.getByRole('button', { name: 'Post comment' }));
     expect(await screen.findByText('Tip looks lively, check the frequency.')).toBeInTheDocument();
-    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ body: 'Tip looks lively, check the frequency.' });
+    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({
+      body: 'Tip looks lively, check the frequency.',
+    });
   });
 });

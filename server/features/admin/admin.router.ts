@@ -18,9 +18,13 @@ export function adminRouter(ctx: AppContext): Router {
   router.post('/admin/users', validate({ body: createUserSchema }), async (req, res) => {
     res.status(201).json(await createAccount(ctx, currentUser(req), req.body));
   });
-  router.patch('/admin/users/:userId', validate({ params: idParams('userId'), body: updateUserSchema }), async (req, res) => {
-    res.json(await updateAccount(ctx, currentUser(req), paramId(req, 'userId'), req.body));
-  });
+  router.patch(
+    '/admin/users/:userId',
+    validate({ params: idParams('userId'), body: updateUserSchema }),
+    async (req, res) => {
+      res.json(await updateAccount(ctx, currentUser(req), paramId(req, 'userId'), req.body));
+    },
+  );
   router.get('/admin/outbox', async (_req, res) => {
     res.json(await outbox(ctx));
   });

@@ -5,7 +5,14 @@ import { HttpError, badRequest, notFound } from '../../lib/http-error';
 import { hashPassword } from '../../lib/password';
 import { listOutbox, retryNow, toOutboxDto, type OutboxEntryDto } from '../../mail/outbox.repository';
 import { recordAudit } from '../audit/audit.repository';
-import { findUserByEmail, findUserById, insertUser, listUsers, toUserDto, updateUser } from '../users/users.repository';
+import {
+  findUserByEmail,
+  findUserById,
+  insertUser,
+  listUsers,
+  toUserDto,
+  updateUser,
+} from '../users/users.repository';
 
 export async function listAccounts(ctx: AppContext): Promise<UserDto[]> {
   return (await listUsers(ctx.db)).map(toUserDto);
@@ -27,7 +34,12 @@ export async function createAccount(
     role: body.role,
     passwordHash: await hashPassword(body.password, ctx.config.passwordCost),
   });
-  await recordAudit(ctx.db, { kind: 'account-created', userId: admin.id, subject: body.email, detail: `role ${body.role}` });
+  await recordAudit(ctx.db, {
+    kind: 'account-created',
+    userId: admin.id,
+    subject: body.email,
+    detail: `role ${body.role}`,
+  });
   const row = await findUserById(ctx.db, id);
   return toUserDto(row!);
 }
@@ -52,10 +64,19 @@ export async function updateAccount(
     ...(body.active !== undefined ? { active: body.active } : {}),
   });
   if (body.role !== undefined && body.role !== row.role) {
-    await recordAudit(ctx.db, { kind: 'role-change', userId: admin.id, subject: row.email, detail: `${row.role} -> ${body.role}` });
+    await recordAudit(ctx.db, {
+      kind: 'role-change',
+      userId: admin.id,
+      subject: row.email,
+      detail: `${row.role} -> ${body.role}`,
+    });
   }
   if (body.active !== undefined && body.active !== Boolean(row.active)) {
-    await recordAudit(ctx.db, { kind: body.active ? 'account-enabled' : 'account-disabled', userId: admin.id, subject: row.email });
+    await recordAudit(ctx.db, {
+      kind: body.active ? 'account-enabled' : 'account-disabled',
+      userId: admin.id,
+      subject: row.email,
+    });
   }
   return toUserDto((await findUserById(ctx.db, userId))!);
 }

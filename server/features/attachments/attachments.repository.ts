@@ -16,7 +16,9 @@ export interface AttachmentRow {
 }
 
 function select(db: Knex) {
-  return db('attachments as a').join('users as u', 'u.id', 'a.uploader_id').select('a.*', 'u.display_name as uploader_name');
+  return db('attachments as a')
+    .join('users as u', 'u.id', 'a.uploader_id')
+    .select('a.*', 'u.display_name as uploader_name');
 }
 
 function toDto(r: AttachmentRow & { uploader_name: string }): AttachmentDto {
@@ -34,12 +36,15 @@ function toDto(r: AttachmentRow & { uploader_name: string }): AttachmentDto {
 }
 
 export async function listAttachments(db: Knex, cantileverId: number): Promise<AttachmentDto[]> {
-  const rows = (await select(db).where('a.cantilever_id', cantileverId).orderBy('a.id', 'desc')) as (AttachmentRow & { uploader_name: string })[];
+  const rows = (await select(db)
+    .where('a.cantilever_id', cantileverId)
+    .orderBy('a.id', 'desc')) as (AttachmentRow & { uploader_name: string })[];
   return rows.map(toDto);
 }
 
 export async function getAttachmentDto(db: Knex, id: number): Promise<AttachmentDto | undefined> {
-  const row = (await select(db).where('a.id', id).first()) as (AttachmentRow & { uploader_name: string }) | undefined;
+  const row = (await select(db).where('a.id', id).first()) as
+    (AttachmentRow & { uploader_name: string }) | undefined;
   return row ? toDto(row) : undefined;
 }
 
@@ -47,7 +52,12 @@ export async function findAttachment(db: Knex, id: number): Promise<AttachmentRo
   return db<AttachmentRow>('attachments').where({ id }).first();
 }
 
-export async function insertAttachment(db: Knex, a: Omit<AttachmentRow, 'id' | 'created_at'>): Promise<number> {
-  const [row] = await db('attachments').insert({ ...a, created_at: nowIso() }).returning('id');
+export async function insertAttachment(
+  db: Knex,
+  a: Omit<AttachmentRow, 'id' | 'created_at'>,
+): Promise<number> {
+  const [row] = await db('attachments')
+    .insert({ ...a, created_at: nowIso() })
+    .returning('id');
   return typeof row === 'object' ? (row as { id: number }).id : (row as number);
 }

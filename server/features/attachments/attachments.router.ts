@@ -16,16 +16,27 @@ const INLINE_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
 
 /** multer with its errors turned into the API's error shape (413 for size, 400 naming `file`). */
 function singleUpload(maxBytes: number): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 10 } }).single('file');
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: maxBytes, files: 1, fields: 10 },
+  }).single('file');
   return (req, res, next) => {
     upload(req, res, (err: unknown) => {
       if (!err) return next();
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') {
           const mib = (maxBytes / 1024 / 1024).toFixed(maxBytes % (1024 * 1024) === 0 ? 0 : 2);
-          return next(new HttpError(413, 'too_large', `The file is larger than the limit of ${mib} MiB.`, [{ path: 'file', message: `must be at most ${maxBytes} bytes` }]));
+          return next(
+            new HttpError(413, 'too_large', `The file is larger than the limit of ${mib} MiB.`, [
+              { path: 'file', message: `must be at most ${maxBytes} bytes` },
+            ]),
+          );
         }
-        return next(badRequest(`The upload is not valid: ${err.message}.`, [{ path: err.field ?? 'file', message: err.message }]));
+        return next(
+          badRequest(`The upload is not valid: ${err.message}.`, [
+            { path: err.field ?? 'file', message: err.message },
+          ]),
+        );
       }
       next(err);
     });
@@ -49,18 +60,24 @@ export function attachmentsRouter(ctx: AppContext): Router {
     },
     singleUpload(ctx.config.attachmentMaxBytes),
     async (req, res) => {
-      res.status(201).json(await storeAttachment(ctx, currentUser(req), paramId(req, 'cantileverId'), req.file));
+      res
+        .status(201)
+        .json(await storeAttachment(ctx, currentUser(req), paramId(req, 'cantileverId'), req.file));
     },
   );
 
   router.get(
     '/attachments/:attachmentId',
-    validate({ params: idParams('attachmentId'), query: z.object({ inline: z.enum(['0', '1']).optional() }) }),
+    validate({
+      params: idParams('attachmentId'),
+      query: z.object({ inline: z.enum(['0', '1']).optional() }),
+    }),
     async (req, res) => {
       const { row, path } = await attachmentForMember(ctx, currentUser(req), paramId(req, 'attachmentId'));
       const info = await stat(path).catch(() => null);
       if (!info) throw notFound('attachment file');
-      const inline = (res.locals.query as { inline?: string }).inline === '1' && INLINE_TYPES.has(row.mime_type);
+      const inline =
+        (res.locals.query as { inline?: string }).inline === '1' && INLINE_TYPES.has(row.mime_type);
       res.attachment(row.original_name); // sets a type from the name: overwritten with the sniffed one below
       res.setHeader('Content-Type', row.mime_type);
       res.setHeader('Content-Length', String(info.size));
@@ -69,10 +86,16 @@ export function attachmentsRouter(ctx: AppContext): Router {
       // and a PDF viewer runs no page scripts of ours, so only the other types get `sandbox`.
       res.setHeader(
         'Content-Security-Policy',
-        row.mime_type === 'application/pdf' ? "default-src 'none'; img-src 'self'; object-src 'self'" : "default-src 'none'; img-src 'self'; sandbox",
+        row.mime_type === 'application/pdf'
+          ? "default-src 'none'; img-src 'self'; object-src 'self'"
+          : "default-src 'none'; img-src 'self'; sandbox",
       );
       res.setHeader('Cache-Control', 'private, no-store');
-      if (inline) res.setHeader('Content-Disposition', (res.getHeader('Content-Disposition') as string).replace(/^attachment/, 'inline'));
+      if (inline)
+        res.setHeader(
+          'Content-Disposition',
+          (res.getHeader('Content-Disposition') as string).replace(/^attachment/, 'inline'),
+        );
       await pipeline(createReadStream(path), res);
     },
   );

@@ -6,18 +6,33 @@ import { EDIT_RIGHTS, type AttachmentDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { badRequest, forbidden, notFound } from '../../lib/http-error';
 import { cantileverForMember } from '../projects/project-access';
-import { findAttachment, getAttachmentDto, insertAttachment, listAttachments, type AttachmentRow } from './attachments.repository';
+import {
+  findAttachment,
+  getAttachmentDto,
+  insertAttachment,
+  listAttachments,
+  type AttachmentRow,
+} from './attachments.repository';
 import { sniffAttachment } from './sniff';
 
-export async function attachmentsOf(ctx: AppContext, user: Express.User, cantileverId: number): Promise<AttachmentDto[]> {
+export async function attachmentsOf(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+): Promise<AttachmentDto[]> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
   return listAttachments(ctx.db, cantileverId);
 }
 
 /** Membership first (404), then the role (403): run before the upload body is read. */
-export async function assertMayUpload(ctx: AppContext, user: Express.User, cantileverId: number): Promise<void> {
+export async function assertMayUpload(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+): Promise<void> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
-  if (!EDIT_RIGHTS[user.role].attachments) throw forbidden(`Your role (${user.role}) may not upload attachments.`);
+  if (!EDIT_RIGHTS[user.role].attachments)
+    throw forbidden(`Your role (${user.role}) may not upload attachments.`);
 }
 
 export async function storeAttachment(
@@ -29,7 +44,8 @@ export async function storeAttachment(
   if (!file) throw badRequest('Choose a file to upload.', [{ path: 'file', message: 'is required' }]);
   const originalName = file.originalname.replace(/[\\/\0]/g, '_').slice(0, 255) || 'file';
   const sniff = await sniffAttachment(file.buffer, originalName);
-  if (!sniff.ok) throw badRequest(`The file was refused: ${sniff.reason}.`, [{ path: 'file', message: sniff.reason }]);
+  if (!sniff.ok)
+    throw badRequest(`The file was refused: ${sniff.reason}.`, [{ path: 'file', message: sniff.reason }]);
   await mkdir(ctx.config.uploadDir, { recursive: true });
   const storedName = randomUUID();
   const path = join(ctx.config.uploadDir, storedName);

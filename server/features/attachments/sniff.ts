@@ -24,7 +24,10 @@ function decodeUtf8(buffer: Buffer): string | null {
 
 /** DXF: group-code / value line pairs, starting with a SECTION and ending with EOF. */
 export function looksLikeDxf(text: string): boolean {
-  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/).map((l) => l.trim());
+  const lines = text
+    .replace(/^\uFEFF/, '')
+    .split(/\r?\n/)
+    .map((l) => l.trim());
   while (lines.length > 0 && lines[lines.length - 1] === '') lines.pop();
   if (lines.length < 4 || lines.length % 2 !== 0) return false;
   let i = 0;
@@ -51,7 +54,11 @@ function countOutsideQuotes(line: string, delimiter: string): number {
 
 /** CSV: text with one delimiter used the same number of times on every line, and no markup. */
 export function looksLikeCsv(text: string): boolean {
-  const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/).filter((l) => l.trim() !== '').slice(0, 200);
+  const lines = text
+    .replace(/^\uFEFF/, '')
+    .split(/\r?\n/)
+    .filter((l) => l.trim() !== '')
+    .slice(0, 200);
   if (lines.length === 0) return false;
   if (/^\s*</.test(lines[0]) || /<(script|html|body|svg|iframe)\b/i.test(text)) return false;
   return [',', ';', '\t'].some((d) => {
@@ -66,17 +73,27 @@ export async function sniffAttachment(buffer: Buffer, originalName: string): Pro
   const detected = await fileTypeFromBuffer(buffer);
   if (detected) {
     if (!BINARY_TYPES.has(detected.mime)) {
-      return { ok: false, reason: `its content is ${detected.mime}; allowed are PDF, PNG, JPEG, DXF and CSV` };
+      return {
+        ok: false,
+        reason: `its content is ${detected.mime}; allowed are PDF, PNG, JPEG, DXF and CSV`,
+      };
     }
     return { ok: true, mime: detected.mime };
   }
   const text = buffer.includes(0) ? null : decodeUtf8(buffer);
   if (text === null) return { ok: false, reason: 'its content is not a PDF, PNG, JPEG, DXF or CSV file' };
   if (ext === 'dxf') {
-    return looksLikeDxf(text) ? { ok: true, mime: 'image/vnd.dxf' } : { ok: false, reason: 'it is named .dxf but its content is not a DXF drawing' };
+    return looksLikeDxf(text)
+      ? { ok: true, mime: 'image/vnd.dxf' }
+      : { ok: false, reason: 'it is named .dxf but its content is not a DXF drawing' };
   }
   if (ext === 'csv') {
-    return looksLikeCsv(text) ? { ok: true, mime: 'text/csv' } : { ok: false, reason: 'it is named .csv but its content is not comma-separated values' };
+    return looksLikeCsv(text)
+      ? { ok: true, mime: 'text/csv' }
+      : { ok: false, reason: 'it is named .csv but its content is not comma-separated values' };
   }
-  return { ok: false, reason: `its content does not match its name (.${ext || 'no extension'}); allowed are PDF, PNG, JPEG, DXF and CSV` };
+  return {
+    ok: false,
+    reason: `its content does not match its name (.${ext || 'no extension'}); allowed are PDF, PNG, JPEG, DXF and CSV`,
+  };
 }

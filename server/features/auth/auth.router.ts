@@ -24,7 +24,9 @@ function loginLimiter(ctx: AppContext): RequestHandler {
       return `${ipKeyGenerator(req.ip ?? 'unknown')}|${email}`;
     },
     handler: (_req, _res, next) => {
-      next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts; wait 15 minutes and try again.'));
+      next(
+        new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts; wait 15 minutes and try again.'),
+      );
     },
   });
 }
@@ -34,22 +36,43 @@ export function authRouter(ctx: AppContext, passport: PassportInstance): Router 
 
   router.post('/auth/login', loginLimiter(ctx), validate({ body: loginSchema }), (req, res, next) => {
     const email = String(req.body.email).toLowerCase();
-    passport.authenticate('local', (err: unknown, user: Express.User | false, info?: { message?: string }) => {
-      if (err) return next(err);
-      if (!user) {
-        recordAudit(ctx.db, { kind: 'sign-in-failed', userId: null, subject: email, detail: `ip ${req.ip ?? ''}` })
-          .then(() => next(new HttpError(401, 'sign_in_failed', info?.message ?? 'The e-mail or the password is not right.')))
-          .catch(next);
-        return;
-      }
-      // passport regenerates the session id here, so a session fixed before sign-in is worthless.
-      req.logIn(user, (loginErr) => {
-        if (loginErr) return next(loginErr);
-        recordAudit(ctx.db, { kind: 'sign-in', userId: user.id, subject: user.email, detail: `ip ${req.ip ?? ''}` })
-          .then(() => res.json(user satisfies UserDto))
-          .catch(next);
-      });
-    })(req, res, next);
+    passport.authenticate(
+      'local',
+      (err: unknown, user: Express.User | false, info?: { message?: string }) => {
+        if (err) return next(err);
+        if (!user) {
+          recordAudit(ctx.db, {
+            kind: 'sign-in-failed',
+            userId: null,
+            subject: email,
+            detail: `ip ${req.ip ?? ''}`,
+          })
+            .then(() =>
+              next(
+                new HttpError(
+                  401,
+                  'sign_in_failed',
+                  info?.message ?? 'The e-mail or the password is not right.',
+                ),
+              ),
+            )
+            .catch(next);
+          return;
+        }
+        // passport regenerates the session id here, so a session fixed before sign-in is worthless.
+        req.logIn(user, (loginErr) => {
+          if (loginErr) return next(loginErr);
+          recordAudit(ctx.db, {
+            kind: 'sign-in',
+            userId: user.id,
+            subject: user.email,
+            detail: `ip ${req.ip ?? ''}`,
+          })
+            .then(() => res.json(user satisfies UserDto))
+            .catch(next);
+        });
+      },
+    )(req, res, next);
   });
 
   router.post('/auth/logout', (req, res, next) => {

@@ -9,7 +9,10 @@ type Db = Knex | Knex.Transaction;
 
 type ListedRow = CantileverRow & { current_number: number | null; current_ok: number | boolean | null };
 
-export async function listCantilevers(db: Db, where: { projectId?: number; id?: number }): Promise<CantileverDto[]> {
+export async function listCantilevers(
+  db: Db,
+  where: { projectId?: number; id?: number },
+): Promise<CantileverDto[]> {
   const q = db('cantilevers as c')
     .leftJoin('revisions as r', 'r.id', 'c.current_revision_id')
     .select('c.*', 'r.number as current_number', 'r.ok as current_ok')
@@ -34,10 +37,20 @@ export async function listCantilevers(db: Db, where: { projectId?: number; id?: 
   }));
 }
 
-export async function insertCantilever(db: Db, c: { projectId: number; name: string; description: string }): Promise<number> {
+export async function insertCantilever(
+  db: Db,
+  c: { projectId: number; name: string; description: string },
+): Promise<number> {
   const now = nowIso();
   const [row] = await db('cantilevers')
-    .insert({ project_id: c.projectId, name: c.name, description: c.description, current_revision_id: null, created_at: now, updated_at: now })
+    .insert({
+      project_id: c.projectId,
+      name: c.name,
+      description: c.description,
+      current_revision_id: null,
+      created_at: now,
+      updated_at: now,
+    })
     .returning('id');
   return typeof row === 'object' ? (row as { id: number }).id : (row as number);
 }

@@ -28,7 +28,10 @@ export async function listComments(db: Knex, revisionId: number): Promise<Commen
   }));
 }
 
-export async function insertComment(db: Knex, c: { revisionId: number; authorId: number; body: string }): Promise<number> {
+export async function insertComment(
+  db: Knex,
+  c: { revisionId: number; authorId: number; body: string },
+): Promise<number> {
   const [row] = await db('comments')
     .insert({ revision_id: c.revisionId, author_id: c.authorId, body: c.body, created_at: nowIso() })
     .returning('id');

@@ -18,12 +18,16 @@ export function commentsRouter(ctx: AppContext): Router {
     res.json(await listComments(ctx.db, revisionId));
   });
 
-  router.post('/revisions/:revisionId/comments', validate({ params, body: commentSchema }), async (req, res) => {
-    const user = currentUser(req);
-    const revisionId = paramId(req, 'revisionId');
-    await revisionForMember(ctx.db, revisionId, user.id);
-    const id = await insertComment(ctx.db, { revisionId, authorId: user.id, body: req.body.body });
-    res.status(201).json((await listComments(ctx.db, revisionId)).find((c) => c.id === id));
-  });
+  router.post(
+    '/revisions/:revisionId/comments',
+    validate({ params, body: commentSchema }),
+    async (req, res) => {
+      const user = currentUser(req);
+      const revisionId = paramId(req, 'revisionId');
+      await revisionForMember(ctx.db, revisionId, user.id);
+      const id = await insertComment(ctx.db, { revisionId, authorId: user.id, body: req.body.body });
+      res.status(201).json((await listComments(ctx.db, revisionId)).find((c) => c.id === id));
+    },
+  );
   return router;
 }

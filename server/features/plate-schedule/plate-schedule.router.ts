@@ -13,11 +13,19 @@ function sendCsv(res: Response, file: CsvFile): void {
 
 export function plateScheduleRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/revisions/:revisionId/plate-schedule.csv', validate({ params: idParams('revisionId') }), async (req, res) => {
-    sendCsv(res, await revisionSchedule(ctx, currentUser(req), paramId(req, 'revisionId')));
-  });
-  router.get('/projects/:projectId/plate-schedule.csv', validate({ params: idParams('projectId') }), async (req, res) => {
-    sendCsv(res, await projectSchedule(ctx, currentUser(req), paramId(req, 'projectId')));
-  });
+  router.get(
+    '/revisions/:revisionId/plate-schedule.csv',
+    validate({ params: idParams('revisionId') }),
+    async (req, res) => {
+      sendCsv(res, await revisionSchedule(ctx, currentUser(req), paramId(req, 'revisionId')));
+    },
+  );
+  router.get(
+    '/projects/:projectId/plate-schedule.csv',
+    validate({ params: idParams('projectId') }),
+    async (req, res) => {
+      sendCsv(res, await projectSchedule(ctx, currentUser(req), paramId(req, 'projectId')));
+    },
+  );
   return router;
 }

@@ -38,7 +38,11 @@ export async function projectForMember(db: Db, projectId: number, userId: number
   return project;
 }
 
-export async function cantileverForMember(db: Db, cantileverId: number, userId: number): Promise<CantileverRow> {
+export async function cantileverForMember(
+  db: Db,
+  cantileverId: number,
+  userId: number,
+): Promise<CantileverRow> {
   const row = await db<CantileverRow>('cantilevers').where({ id: cantileverId }).first();
   if (!row || !(await isMember(db, row.project_id, userId))) throw notFound('cantilever');
   return row;

@@ -47,7 +47,9 @@ export async function listProjectsForUser(db: Db, userId: number): Promise<Proje
 }
 
 export async function countCantilevers(db: Db, projectId: number): Promise<number> {
-  const [row] = (await db('cantilevers').where({ project_id: projectId }).count({ n: '*' })) as { n: number | string }[];
+  const [row] = (await db('cantilevers').where({ project_id: projectId }).count({ n: '*' })) as {
+    n: number | string;
+  }[];
   return Number(row.n);
 }
 
@@ -56,13 +58,23 @@ export async function insertProject(
   p: { name: string; site: string; codeBasis: string; units: 'US' | 'SI'; createdBy: number },
 ): Promise<number> {
   const [row] = await db('projects')
-    .insert({ name: p.name, site: p.site, code_basis: p.codeBasis, units: p.units, created_by: p.createdBy, created_at: nowIso() })
+    .insert({
+      name: p.name,
+      site: p.site,
+      code_basis: p.codeBasis,
+      units: p.units,
+      created_by: p.createdBy,
+      created_at: nowIso(),
+    })
     .returning('id');
   return typeof row === 'object' ? (row as { id: number }).id : (row as number);
 }
 
 export async function addMember(db: Db, projectId: number, userId: number): Promise<void> {
-  await db('project_members').insert({ project_id: projectId, user_id: userId, created_at: nowIso() }).onConflict(['project_id', 'user_id']).ignore();
+  await db('project_members')
+    .insert({ project_id: projectId, user_id: userId, created_at: nowIso() })
+    .onConflict(['project_id', 'user_id'])
+    .ignore();
 }
 
 export async function removeMember(db: Db, projectId: number, userId: number): Promise<number> {
@@ -79,7 +91,11 @@ export async function listMembers(db: Db, projectId: number): Promise<MemberDto[
 }
 
 /** E-mail addresses of the project's active members with a role (for notifications). */
-export async function memberEmailsWithRole(db: Db, projectId: number, role: Role): Promise<{ id: number; email: string }[]> {
+export async function memberEmailsWithRole(
+  db: Db,
+  projectId: number,
+  role: Role,
+): Promise<{ id: number; email: string }[]> {
   return db('project_members as m')
     .join('users as u', 'u.id', 'm.user_id')
     .where({ 'm.project_id': projectId, 'u.role': role, 'u.active': true })

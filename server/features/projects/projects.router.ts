@@ -36,7 +36,9 @@ export function projectsRouter(ctx: AppContext): Router {
     '/projects/:projectId/cantilevers',
     validate({ params: projectId, body: createCantileverSchema }),
     async (req, res) => {
-      res.status(201).json(await createCantilever(ctx, currentUser(req), paramId(req, 'projectId'), req.body));
+      res
+        .status(201)
+        .json(await createCantilever(ctx, currentUser(req), paramId(req, 'projectId'), req.body));
     },
   );
   router.post(
@@ -44,7 +46,9 @@ export function projectsRouter(ctx: AppContext): Router {
     requireRole(['admin'], 'manage project membership'),
     validate({ params: projectId, body: addMemberSchema }),
     async (req, res) => {
-      res.status(201).json(await addProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), req.body.userId));
+      res
+        .status(201)
+        .json(await addProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), req.body.userId));
     },
   );
   router.delete(
@@ -52,11 +56,17 @@ export function projectsRouter(ctx: AppContext): Router {
     requireRole(['admin'], 'manage project membership'),
     validate({ params: idParams('projectId', 'userId') }),
     async (req, res) => {
-      res.json(await removeProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), paramId(req, 'userId')));
+      res.json(
+        await removeProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), paramId(req, 'userId')),
+      );
     },
   );
-  router.get('/cantilevers/:cantileverId', validate({ params: idParams('cantileverId') }), async (req, res) => {
-    res.json(await getCantilever(ctx, currentUser(req), paramId(req, 'cantileverId')));
-  });
+  router.get(
+    '/cantilevers/:cantileverId',
+    validate({ params: idParams('cantileverId') }),
+    async (req, res) => {
+      res.json(await getCantilever(ctx, currentUser(req), paramId(req, 'cantileverId')));
+    },
+  );
   return router;
 }

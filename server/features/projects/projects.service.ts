@@ -41,7 +41,11 @@ export async function createProject(
   return projectDetail(ctx, user, id);
 }
 
-export async function projectDetail(ctx: AppContext, user: Express.User, projectId: number): Promise<ProjectDetailDto> {
+export async function projectDetail(
+  ctx: AppContext,
+  user: Express.User,
+  projectId: number,
+): Promise<ProjectDetailDto> {
   const project = await projectForMember(ctx.db, projectId, user.id);
   const cantilevers = await listCantilevers(ctx.db, { projectId });
   return {
@@ -51,7 +55,11 @@ export async function projectDetail(ctx: AppContext, user: Express.User, project
   };
 }
 
-export async function projectCantilevers(ctx: AppContext, user: Express.User, projectId: number): Promise<CantileverDto[]> {
+export async function projectCantilevers(
+  ctx: AppContext,
+  user: Express.User,
+  projectId: number,
+): Promise<CantileverDto[]> {
   await projectForMember(ctx.db, projectId, user.id);
   return listCantilevers(ctx.db, { projectId });
 }
@@ -65,37 +73,69 @@ export async function createCantilever(
   await projectForMember(ctx.db, projectId, user.id);
   if (!DESIGN_ROLES.has(user.role)) throw forbidden(`Your role (${user.role}) may not add cantilevers.`);
   const id = await ctx.db.transaction(async (trx) => {
-    const cantileverId = await insertCantilever(trx, { projectId, name: body.name, description: body.description });
+    const cantileverId = await insertCantilever(trx, {
+      projectId,
+      name: body.name,
+      description: body.description,
+    });
     if (body.input) {
       const cantilever = await cantileverForMember(trx, cantileverId, user.id);
-      await saveRevision(trx as Knex, user, cantilever, { baseRevision: null, message: 'First design', input: body.input });
+      await saveRevision(trx as Knex, user, cantilever, {
+        baseRevision: null,
+        message: 'First design',
+        input: body.input,
+      });
     }
     return cantileverId;
   });
   return (await listCantilevers(ctx.db, { id }))[0];
 }
 
-export async function getCantilever(ctx: AppContext, user: Express.User, cantileverId: number): Promise<CantileverDto> {
+export async function getCantilever(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+): Promise<CantileverDto> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
   return (await listCantilevers(ctx.db, { id: cantileverId }))[0];
 }
 
 /** Admin only (checked by the router): adds an active account to a project's team. */
-export async function addProjectMember(ctx: AppContext, admin: Express.User, projectId: number, userId: number): Promise<ProjectDetailDto> {
+export async function addProjectMember(
+  ctx: AppContext,
+  admin: Express.User,
+  projectId: number,
+  userId: number,
+): Promise<ProjectDetailDto> {
   const project = await findProject(ctx.db, projectId);
   if (!project) throw notFound('project');
   const account = await findUserById(ctx.db, userId);
   if (!account) throw badRequest('No such account.', [{ path: 'userId', message: 'no account has this id' }]);
   await addMember(ctx.db, projectId, userId);
-  await recordAudit(ctx.db, { kind: 'member-added', userId: admin.id, subject: account.email, detail: `project ${projectId}` });
+  await recordAudit(ctx.db, {
+    kind: 'member-added',
+    userId: admin.id,
+    subject: account.email,
+    detail: `project ${projectId}`,
+  });
   return detailForAdmin(ctx, projectId);
 }
 
-export async function removeProjectMember(ctx: AppContext, admin: Express.User, projectId: number, userId: number): Promise<ProjectDetailDto> {
+export async function removeProjectMember(
+  ctx: AppContext,
+  admin: Express.User,
+  projectId: number,
+  userId: number,
+): Promise<ProjectDetailDto> {
   const project = await findProject(ctx.db, projectId);
   if (!project) throw notFound('project');
   if ((await removeMember(ctx.db, projectId, userId)) === 0) throw notFound('member');
-  await recordAudit(ctx.db, { kind: 'member-removed', userId: admin.id, subject: `user ${userId}`, detail: `project ${projectId}` });
+  await recordAudit(ctx.db, {
+    kind: 'member-removed',
+    userId: admin.id,
+    subject: `user ${userId}`,
+    detail: `project ${projectId}`,
+  });
   return detailForAdmin(ctx, projectId);
 }
 

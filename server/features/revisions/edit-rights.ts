@@ -24,12 +24,21 @@ export function assertMayChange(role: Role, before: unknown, after: unknown): vo
     if (!allowed) {
       issues.push({
         path: `input.${change.path}`,
-        message: part === 'connection' ? `a ${role} may not change the connection` : `a ${role} may change only the connection`,
+        message:
+          part === 'connection'
+            ? `a ${role} may not change the connection`
+            : `a ${role} may change only the connection`,
       });
     }
   }
   if (issues.length > 0) {
-    const fields = issues.slice(0, 5).map((i) => i.path).join(', ');
-    throw forbidden(`Your role (${role}) may not change ${fields}${issues.length > 5 ? ` and ${issues.length - 5} more` : ''}.`, issues);
+    const fields = issues
+      .slice(0, 5)
+      .map((i) => i.path)
+      .join(', ');
+    throw forbidden(
+      `Your role (${role}) may not change ${fields}${issues.length > 5 ? ` and ${issues.length - 5} more` : ''}.`,
+      issues,
+    );
   }
 }

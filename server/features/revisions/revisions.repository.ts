@@ -31,7 +31,10 @@ function summarySelect(db: Db) {
 export async function reviewStates(db: Db, revisionIds: number[]): Promise<Map<number, ReviewState>> {
   const states = new Map<number, ReviewState>();
   if (revisionIds.length === 0) return states;
-  const rows = (await db('reviews').whereIn('revision_id', revisionIds).orderBy('id').select('revision_id', 'state')) as {
+  const rows = (await db('reviews')
+    .whereIn('revision_id', revisionIds)
+    .orderBy('id')
+    .select('revision_id', 'state')) as {
     revision_id: number;
     state: ReviewState;
   }[];
@@ -56,8 +59,13 @@ function toSummary(row: SummaryRow, state: ReviewState): RevisionSummaryDto {
 }
 
 export async function listRevisionSummaries(db: Db, cantileverId: number): Promise<RevisionSummaryDto[]> {
-  const rows = (await summarySelect(db).where('r.cantilever_id', cantileverId).orderBy('r.number', 'desc')) as SummaryRow[];
-  const states = await reviewStates(db, rows.map((r) => r.id));
+  const rows = (await summarySelect(db)
+    .where('r.cantilever_id', cantileverId)
+    .orderBy('r.number', 'desc')) as SummaryRow[];
+  const states = await reviewStates(
+    db,
+    rows.map((r) => r.id),
+  );
   return rows.map((r) => toSummary(r, states.get(r.id) ?? 'draft'));
 }
 
@@ -92,7 +100,10 @@ export async function getRevisionDto(db: Db, revisionId: number): Promise<Revisi
 }
 
 export async function latestRevision(db: Db, cantileverId: number): Promise<RevisionRow | undefined> {
-  return db<RevisionRow>('revisions').where({ cantilever_id: cantileverId }).orderBy('number', 'desc').first();
+  return db<RevisionRow>('revisions')
+    .where({ cantilever_id: cantileverId })
+    .orderBy('number', 'desc')
+    .first();
 }
 
 export async function insertRevision(
@@ -122,7 +133,9 @@ export async function insertRevision(
     })
     .returning('id');
   const id = typeof row === 'object' ? (row as { id: number }).id : (row as number);
-  await db('cantilevers').where({ id: r.cantileverId }).update({ current_revision_id: id, updated_at: nowIso() });
+  await db('cantilevers')
+    .where({ id: r.cantileverId })
+    .update({ current_revision_id: id, updated_at: nowIso() });
   return id;
 }
 

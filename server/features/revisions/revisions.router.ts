@@ -6,20 +6,32 @@ import { HttpError } from '../../lib/http-error';
 import { idParams, paramId } from '../../lib/params';
 import { currentUser } from '../../middleware/require-auth';
 import { validate } from '../../middleware/validate';
-import { getRevision, listRevisions, reviewRevision, saveRevisionForMember, submitRevision } from './revisions.service';
+import {
+  getRevision,
+  listRevisions,
+  reviewRevision,
+  saveRevisionForMember,
+  submitRevision,
+} from './revisions.service';
 
 export function revisionsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get('/cantilevers/:cantileverId/revisions', validate({ params: idParams('cantileverId') }), async (req, res) => {
-    res.json(await listRevisions(ctx, currentUser(req), paramId(req, 'cantileverId')));
-  });
+  router.get(
+    '/cantilevers/:cantileverId/revisions',
+    validate({ params: idParams('cantileverId') }),
+    async (req, res) => {
+      res.json(await listRevisions(ctx, currentUser(req), paramId(req, 'cantileverId')));
+    },
+  );
 
   router.post(
     '/cantilevers/:cantileverId/revisions',
     validate({ params: idParams('cantileverId'), body: createRevisionSchema }),
     async (req, res) => {
-      res.status(201).json(await saveRevisionForMember(ctx, currentUser(req), paramId(req, 'cantileverId'), req.body));
+      res
+        .status(201)
+        .json(await saveRevisionForMember(ctx, currentUser(req), paramId(req, 'cantileverId'), req.body));
     },
   );
 
@@ -29,12 +41,20 @@ export function revisionsRouter(ctx: AppContext): Router {
 
   // A saved revision is a record: changing or deleting one is refused for everybody.
   router.all('/revisions/:revisionId', () => {
-    throw new HttpError(405, 'immutable', 'A saved revision cannot be changed or deleted; save a new revision instead.');
+    throw new HttpError(
+      405,
+      'immutable',
+      'A saved revision cannot be changed or deleted; save a new revision instead.',
+    );
   });
 
-  router.post('/revisions/:revisionId/submit', validate({ params: idParams('revisionId') }), async (req, res) => {
-    res.json(await submitRevision(ctx, currentUser(req), paramId(req, 'revisionId')));
-  });
+  router.post(
+    '/revisions/:revisionId/submit',
+    validate({ params: idParams('revisionId') }),
+    async (req, res) => {
+      res.json(await submitRevision(ctx, currentUser(req), paramId(req, 'revisionId')));
+    },
+  );
 
   router.post(
     '/revisions/:revisionId/reviews',

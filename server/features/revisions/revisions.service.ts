@@ -11,7 +11,14 @@ import { findProject, memberEmailsWithRole } from '../projects/projects.reposito
 import { findUserById } from '../users/users.repository';
 import { assertMayChange } from './edit-rights';
 import { evaluateOnServer } from './evaluate';
-import { getRevisionDto, insertReview, insertRevision, latestRevision, listRevisionSummaries, reviewStates } from './revisions.repository';
+import {
+  getRevisionDto,
+  insertReview,
+  insertRevision,
+  latestRevision,
+  listRevisionSummaries,
+  reviewStates,
+} from './revisions.repository';
 
 export interface SaveRequest {
   baseRevision: number | null;
@@ -57,17 +64,30 @@ export async function saveRevision(
   return db.transaction(run);
 }
 
-export async function saveRevisionForMember(ctx: AppContext, user: Express.User, cantileverId: number, body: SaveRequest): Promise<RevisionDto> {
+export async function saveRevisionForMember(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+  body: SaveRequest,
+): Promise<RevisionDto> {
   const cantilever = await cantileverForMember(ctx.db, cantileverId, user.id);
   return saveRevision(ctx.db, user, cantilever, body);
 }
 
-export async function listRevisions(ctx: AppContext, user: Express.User, cantileverId: number): Promise<RevisionSummaryDto[]> {
+export async function listRevisions(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+): Promise<RevisionSummaryDto[]> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
   return listRevisionSummaries(ctx.db, cantileverId);
 }
 
-export async function getRevision(ctx: AppContext, user: Express.User, revisionId: number): Promise<RevisionDto> {
+export async function getRevision(
+  ctx: AppContext,
+  user: Express.User,
+  revisionId: number,
+): Promise<RevisionDto> {
   await revisionForMember(ctx.db, revisionId, user.id);
   const dto = await getRevisionDto(ctx.db, revisionId);
   if (!dto) throw notFound('revision');
@@ -77,18 +97,31 @@ export async function getRevision(ctx: AppContext, user: Express.User, revisionI
 const DESIGN_ROLES = new Set(['architect', 'fabricator', 'engineer']);
 
 /** Submits a revision for review and e-mails the project's engineers (queued in the same transaction). */
-export async function submitRevision(ctx: AppContext, user: Express.User, revisionId: number): Promise<RevisionDto> {
+export async function submitRevision(
+  ctx: AppContext,
+  user: Express.User,
+  revisionId: number,
+): Promise<RevisionDto> {
   const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
   if (revision.author_id !== user.id && !DESIGN_ROLES.has(user.role)) {
     throw forbidden(`Your role (${user.role}) may not submit a revision for review.`);
   }
   await ctx.db.transaction(async (trx) => {
     const state = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
-    if (state === 'submitted') throw conflict('already_submitted', `Revision ${revision.number} is already waiting for review.`);
-    if (state === 'approved') throw conflict('already_approved', `Revision ${revision.number} is already approved.`);
-    await insertReview(trx, { revisionId: revision.id, state: 'submitted', reviewerId: user.id, comment: '' });
+    if (state === 'submitted')
+      throw conflict('already_submitted', `Revision ${revision.number} is already waiting for review.`);
+    if (state === 'approved')
+      throw conflict('already_approved', `Revision ${revision.number} is already approved.`);
+    await insertReview(trx, {
+      revisionId: revision.id,
+      state: 'submitted',
+      reviewerId: user.id,
+      comment: '',
+    });
     const project = await findProject(trx, cantilever.project_id);
-    const engineers = (await memberEmailsWithRole(trx, cantilever.project_id, 'engineer')).filter((e) => e.id !== user.id);
+    const engineers = (await memberEmailsWithRole(trx, cantilever.project_id, 'engineer')).filter(
+      (e) => e.id !== user.id,
+    );
     await queueMail(trx, {
       to: engineers.map((e) => e.email),
       subject: `Review requested: ${cantilever.name}, revision ${revision.number}`,
@@ -112,12 +145,16 @@ export async function reviewRevision(
 ): Promise<RevisionDto> {
   const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
   if (user.role !== 'engineer') throw forbidden('Only an engineer may review a revision.');
-  if (revision.author_id === user.id) throw forbidden('You may not review your own revision; ask another engineer.');
+  if (revision.author_id === user.id)
+    throw forbidden('You may not review your own revision; ask another engineer.');
   const state = body.decision === 'approve' ? 'approved' : 'changes-requested';
   await ctx.db.transaction(async (trx) => {
     const current = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
     if (current !== 'submitted') {
-      throw conflict('not_submitted', `Revision ${revision.number} is ${current === 'draft' ? 'not submitted for review' : current}; only a submitted revision can be reviewed.`);
+      throw conflict(
+        'not_submitted',
+        `Revision ${revision.number} is ${current === 'draft' ? 'not submitted for review' : current}; only a submitted revision can be reviewed.`,
+      );
     }
     await insertReview(trx, { revisionId: revision.id, state, reviewerId: user.id, comment: body.comment });
     await recordAudit(trx, {
@@ -132,7 +169,10 @@ export async function reviewRevision(
       await queueMail(trx, {
         to: [author.email],
         subject: `Revision ${revision.number} of ${cantilever.name} was ${verdict}`,
-        text: [`${user.displayName} ${verdict} revision ${revision.number} of "${cantilever.name}".`, body.comment ? `Comment: ${body.comment}` : '']
+        text: [
+          `${user.displayName} ${verdict} revision ${revision.number} of "${cantilever.name}".`,
+          body.comment ? `Comment: ${body.comment}` : '',
+        ]
           .filter(Boolean)
           .join('\n'),
       });

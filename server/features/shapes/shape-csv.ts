@@ -13,7 +13,33 @@ export interface ParsedShapes {
   rejected: { row: number; label: string | null; reason: string }[];
 }
 
-const NUMERIC = ['W', 'A', 'd', 'bf', 'tf', 'tw', 'kdes', 'Ht', 'B', 'tdes', 'OD', 'Ix', 'Zx', 'Sx', 'rx', 'Iy', 'Zy', 'Sy', 'ry', 'J', 'Cw', 'rts', 'ho', 'x', 'eo'] as const;
+const NUMERIC = [
+  'W',
+  'A',
+  'd',
+  'bf',
+  'tf',
+  'tw',
+  'kdes',
+  'Ht',
+  'B',
+  'tdes',
+  'OD',
+  'Ix',
+  'Zx',
+  'Sx',
+  'rx',
+  'Iy',
+  'Zy',
+  'Sy',
+  'ry',
+  'J',
+  'Cw',
+  'rts',
+  'ho',
+  'x',
+  'eo',
+] as const;
 const DIMENSIONS: Record<ShapeFamily, readonly (typeof NUMERIC)[number][]> = {
   W: ['d', 'bf', 'tf', 'tw'],
   C: ['d', 'bf', 'tf', 'tw'],
@@ -24,7 +50,10 @@ const DEPTH: Record<ShapeFamily, 'd' | 'Ht' | 'OD'> = { W: 'd', C: 'd', HSS: 'Ht
 /** Sx and Ix/(depth/2) agree to within this fraction (published values are rounded to 3 figures). */
 export const SECTION_MODULUS_TOLERANCE = 0.05;
 
-const positive = z.number({ error: 'must be a number' }).finite('must be finite').positive('must be positive');
+const positive = z
+  .number({ error: 'must be a number' })
+  .finite('must be finite')
+  .positive('must be positive');
 const rowSchema = z.object({
   label: z
     .string()
@@ -42,7 +71,10 @@ const rowSchema = z.object({
   ry: positive,
   J: positive,
   ...Object.fromEntries(
-    NUMERIC.filter((k) => !['W', 'A', 'Ix', 'Zx', 'Sx', 'Iy', 'ry', 'J'].includes(k)).map((k) => [k, positive.optional()]),
+    NUMERIC.filter((k) => !['W', 'A', 'Ix', 'Zx', 'Sx', 'Iy', 'ry', 'J'].includes(k)).map((k) => [
+      k,
+      positive.optional(),
+    ]),
   ),
 });
 
@@ -97,10 +129,13 @@ export function readShapesCsv(text: string): ParsedShapes {
   const labelCol = published ? col('AISC_Manual_Label') : col('label');
   const familyCol = published ? col('Type') : col('family');
   if (labelCol < 0 || familyCol < 0) {
-    throw new ShapeCsvError('the header needs AISC_Manual_Label and Type (published layout) or label and family (custom layout)');
+    throw new ShapeCsvError(
+      'the header needs AISC_Manual_Label and Type (published layout) or label and family (custom layout)',
+    );
   }
   const missing = ['W', 'A', 'Ix', 'Zx', 'Sx', 'Iy', 'ry', 'J'].filter((k) => col(k) < 0);
-  if (missing.length > 0) throw new ShapeCsvError(`the header is missing the column(s) ${missing.join(', ')}`);
+  if (missing.length > 0)
+    throw new ShapeCsvError(`the header is missing the column(s) ${missing.join(', ')}`);
 
   const result: ParsedShapes = { shapes: [], rejected: [] };
   const seen = new Set<string>();
@@ -115,7 +150,8 @@ export function readShapesCsv(text: string): ParsedShapes {
       const c = col(key);
       if (c >= 0) raw[key] = cellNumber(cells[c]);
     }
-    if (family === 'HSS' && raw.OD !== undefined) return reject('round HSS is not a family Reachline designs with (use PIPE)');
+    if (family === 'HSS' && raw.OD !== undefined)
+      return reject('round HSS is not a family Reachline designs with (use PIPE)');
     const parsed = rowSchema.safeParse(raw);
     if (!parsed.success) {
       const issue = parsed.error.issues[0];
@@ -127,11 +163,15 @@ export function readShapesCsv(text: string): ParsedShapes {
     const depth = shape[DEPTH[shape.family]] as number;
     const expected = shape.Ix / (depth / 2);
     if (Math.abs(shape.Sx - expected) / expected > SECTION_MODULUS_TOLERANCE) {
-      return reject(`Sx = ${shape.Sx} does not agree with Ix/(${DEPTH[shape.family]}/2) = ${expected.toFixed(3)} (more than ${SECTION_MODULUS_TOLERANCE * 100}% apart)`);
+      return reject(
+        `Sx = ${shape.Sx} does not agree with Ix/(${DEPTH[shape.family]}/2) = ${expected.toFixed(3)} (more than ${SECTION_MODULUS_TOLERANCE * 100}% apart)`,
+      );
     }
-    if (shape.Zx < shape.Sx * 0.99) return reject(`Zx = ${shape.Zx} is smaller than Sx = ${shape.Sx}, which no real section has`);
+    if (shape.Zx < shape.Sx * 0.99)
+      return reject(`Zx = ${shape.Zx} is smaller than Sx = ${shape.Sx}, which no real section has`);
     const key = normalizeLabel(shape.label);
-    if (findShape(shape.label)) return reject('this label is in the built-in shapes table already; built-in shapes cannot be replaced');
+    if (findShape(shape.label))
+      return reject('this label is in the built-in shapes table already; built-in shapes cannot be replaced');
     if (seen.has(key)) return reject('this label appears twice in the file');
     seen.add(key);
     result.shapes.push({ ...shape, label: shape.label.toUpperCase().replace(/\s+/g, ''), custom: true });

@@ -16,7 +16,12 @@ interface ShapeRow {
 
 export async function listCustomShapes(db: Db): Promise<ShapeRecord[]> {
   const rows = await db<ShapeRow>('shapes').orderBy('label');
-  return rows.map((r) => ({ ...(JSON.parse(r.props_json) as ShapeRecord), label: r.label, family: r.family, custom: true }));
+  return rows.map((r) => ({
+    ...(JSON.parse(r.props_json) as ShapeRecord),
+    label: r.label,
+    family: r.family,
+    custom: true,
+  }));
 }
 
 /** Inserts or replaces custom shapes by label; returns how many were written. */
@@ -26,7 +31,13 @@ export async function upsertCustomShapes(db: Knex, shapes: ShapeRecord[], userId
     for (const s of shapes) {
       const { label, family, ...props } = s;
       await trx('shapes')
-        .insert({ label, family, props_json: JSON.stringify({ ...props, custom: true }), imported_by: userId, created_at: nowIso() })
+        .insert({
+          label,
+          family,
+          props_json: JSON.stringify({ ...props, custom: true }),
+          imported_by: userId,
+          created_at: nowIso(),
+        })
         .onConflict('label')
         .merge(['family', 'props_json', 'imported_by', 'created_at']);
     }

@@ -11,11 +11,22 @@ import { importShapes, searchShapes, type ShapesQuery } from './shapes.service';
 const IMPORT_MAX_BYTES = 5 * 1024 * 1024;
 
 const csvUpload: RequestHandler = (req, res, next) => {
-  multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_MAX_BYTES, files: 1 } }).single('file')(req, res, (err: unknown) => {
+  multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_MAX_BYTES, files: 1 } }).single(
+    'file',
+  )(req, res, (err: unknown) => {
     if (!err) return next();
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'too_large', 'The shapes file is larger than 5 MiB.', [{ path: 'file', message: 'is too large' }]));
-      return next(badRequest(`The upload is not valid: ${err.message}.`, [{ path: err.field ?? 'file', message: err.message }]));
+      if (err.code === 'LIMIT_FILE_SIZE')
+        return next(
+          new HttpError(413, 'too_large', 'The shapes file is larger than 5 MiB.', [
+            { path: 'file', message: 'is too large' },
+          ]),
+        );
+      return next(
+        badRequest(`The upload is not valid: ${err.message}.`, [
+          { path: err.field ?? 'file', message: err.message },
+        ]),
+      );
     }
     next(err);
   });

@@ -29,13 +29,23 @@ export async function searchShapes(ctx: AppContext, query: ShapesQuery): Promise
     if (query.maxDepth !== undefined && (depth === undefined || depth > query.maxDepth)) return false;
     return true;
   });
-  const source = custom.length > 0 ? `${SHAPES_SOURCE}; plus ${custom.length} imported shape(s) marked custom` : SHAPES_SOURCE;
+  const source =
+    custom.length > 0
+      ? `${SHAPES_SOURCE}; plus ${custom.length} imported shape(s) marked custom`
+      : SHAPES_SOURCE;
   return { source, shapes };
 }
 
-export async function importShapes(ctx: AppContext, user: Express.User, file: { buffer: Buffer } | undefined): Promise<ShapeImportDto> {
+export async function importShapes(
+  ctx: AppContext,
+  user: Express.User,
+  file: { buffer: Buffer } | undefined,
+): Promise<ShapeImportDto> {
   if (!file) throw badRequest('Choose a CSV file to import.', [{ path: 'file', message: 'is required' }]);
-  if (file.buffer.includes(0)) throw badRequest('The file is not a text CSV file.', [{ path: 'file', message: 'is not a text CSV file' }]);
+  if (file.buffer.includes(0))
+    throw badRequest('The file is not a text CSV file.', [
+      { path: 'file', message: 'is not a text CSV file' },
+    ]);
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(file.buffer);
@@ -47,7 +57,10 @@ export async function importShapes(ctx: AppContext, user: Express.User, file: { 
     const imported = await upsertCustomShapes(ctx.db, parsed.shapes, user.id);
     return { imported, rejected: parsed.rejected };
   } catch (err) {
-    if (err instanceof ShapeCsvError) throw badRequest(`The shapes file cannot be read: ${err.message}.`, [{ path: 'file', message: err.message }]);
+    if (err instanceof ShapeCsvError)
+      throw badRequest(`The shapes file cannot be read: ${err.message}.`, [
+        { path: 'file', message: err.message },
+      ]);
     throw err;
   }
 }

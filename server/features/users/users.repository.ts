@@ -30,7 +30,9 @@ export function normalizeEmail(email: string): string {
 }
 
 export async function findUserByEmail(db: Knex, email: string): Promise<UserRow | undefined> {
-  return db<UserRow>('users').where({ email: normalizeEmail(email) }).first();
+  return db<UserRow>('users')
+    .where({ email: normalizeEmail(email) })
+    .first();
 }
 
 export async function findUserById(db: Knex, id: number): Promise<UserRow | undefined> {

@@ -60,7 +60,13 @@ export function deflectionChecks(d: DeflectionInputs): Check[] {
     const yl = tip(c.variable);
     if (clearlyGreater(yl, live.y) || live.name === null) live = { y: yl, name: c.variableName };
   }
-  const row = (id: string, title: string, ratio: number, y: { y: number; name: string | null }, what: string): Check => {
+  const row = (
+    id: string,
+    title: string,
+    ratio: number,
+    y: { y: number; name: string | null },
+    what: string,
+  ): Check => {
     const limit = span / ratio;
     const r = y.y / limit;
     return {
@@ -76,7 +82,13 @@ export function deflectionChecks(d: DeflectionInputs): Check[] {
     };
   };
   return [
-    row('member.deflection.live', 'Tip deflection under live load', d.limits.live, live, 'live, roof live or snow'),
+    row(
+      'member.deflection.live',
+      'Tip deflection under live load',
+      d.limits.live,
+      live,
+      'live, roof live or snow',
+    ),
     row('member.deflection.total', 'Tip deflection under total load', d.limits.total, total, 'service'),
   ];
 }

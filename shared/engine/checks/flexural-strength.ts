@@ -23,7 +23,10 @@ export interface SteelAndBracing {
  * Returns the strength function for the member's family with its options fixed once, so a tapered
  * member's every station is evaluated without rebuilding them.
  */
-export function flexuralStrengthOf(section: MemberSection, o: SteelAndBracing): (p: SectionProps) => Strength {
+export function flexuralStrengthOf(
+  section: MemberSection,
+  o: SteelAndBracing,
+): (p: SectionProps) => Strength {
   const { Fy, E, Lb } = o;
   const Cb = CANTILEVER_CB;
   switch (section.family) {
@@ -38,7 +41,8 @@ export function flexuralStrengthOf(section: MemberSection, o: SteelAndBracing): 
     case 'C':
       // A channel bends about its major axis under F2 with c of Eq. F2-8b; its flanges are compact
       // for the usual grades (F2 user note), and F3's formula is applied by analogy if they are not.
-      return (p) => iFlexure(p, { Fy, E, Lb, Cb, rolled: true, c: p.Cw > 0 ? (p.ho / 2) * Math.sqrt(p.Iy / p.Cw) : 1 });
+      return (p) =>
+        iFlexure(p, { Fy, E, Lb, Cb, rolled: true, c: p.Cw > 0 ? (p.ho / 2) * Math.sqrt(p.Iy / p.Cw) : 1 });
     default: {
       const opts = { Fy, E, Lb, Cb, rolled: section.rolled };
       return (p) => iFlexure(p, opts);

@@ -36,11 +36,14 @@ export function flexureCheck(ctx: CheckContext): Check {
   // when another station has the worst ratio.
   const outside = s.outOfScope ? w.node : strengths.findIndex((st) => st.outOfScope !== undefined);
   if (outside >= 0) {
-    const where = section.prismatic ? '' : ` (at ${formatQuantity(quantity(model.grid.x[outside], 'length', units))} from the root)`;
+    const where = section.prismatic
+      ? ''
+      : ` (at ${formatQuantity(quantity(model.grid.x[outside], 'length', units))} from the root)`;
     notes.push(`${strengths[outside].outOfScope}${where}`);
   }
   const ok = w.ratio <= 1 && outside < 0;
-  if (w.ratio > 1) notes.push('over capacity: a deeper or heavier section, or a brace on the bottom flange, would help');
+  if (w.ratio > 1)
+    notes.push('over capacity: a deeper or heavier section, or a brace on the bottom flange, would help');
   const check: Check = {
     id: 'member.flexure',
     title: section.prismatic ? 'Bending at the root' : 'Bending along the tapered member',

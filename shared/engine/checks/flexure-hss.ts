@@ -20,7 +20,11 @@ export function hssFlexure(p: SectionProps, o: { Fy: number; E: number; Lb: numb
       list.push({ nominal: Math.min(Mn, Mp), clause: 'F7.2(b)', limitState: 'flange local buckling' });
     } else {
       const be = Math.min(b, 1.92 * t * rootEF * (1 - (0.38 / bt) * rootEF));
-      list.push({ nominal: Fy * effectiveModulus(p, (b - be) * t), clause: 'F7.2(c)', limitState: 'flange local buckling' });
+      list.push({
+        nominal: Fy * effectiveModulus(p, (b - be) * t),
+        clause: 'F7.2(c)',
+        limitState: 'flange local buckling',
+      });
     }
   }
   const ht = p.h / t;

@@ -49,7 +49,8 @@ function compactWeb(p: SectionProps, o: IFlexureOptions): Strength {
   const list: Strength[] = [{ nominal: Mp, clause: 'F2.1', limitState: 'yielding' }];
   const Lp = 1.76 * p.ry * Math.sqrt(E / Fy);
   const jc = (p.J * c) / (p.Sx * p.ho);
-  const Lr = 1.95 * p.rts * (E / (0.7 * Fy)) * Math.sqrt(jc + Math.sqrt(jc * jc + 6.76 * ((0.7 * Fy) / E) ** 2));
+  const Lr =
+    1.95 * p.rts * (E / (0.7 * Fy)) * Math.sqrt(jc + Math.sqrt(jc * jc + 6.76 * ((0.7 * Fy) / E) ** 2));
   if (Lb > Lp) {
     let Mn: number;
     if (Lb <= Lr) {
@@ -114,7 +115,9 @@ function slenderWeb(p: SectionProps, o: IFlexureOptions, lambdaW: number): Stren
   const rootEF = Math.sqrt(E / Fy);
   const aw = Math.min(10, (p.h * p.tw) / (p.bf * p.tf));
   const Rpg = Math.max(0, Math.min(1, 1 - (aw / (1200 + 300 * aw)) * (lambdaW - 5.7 * rootEF)));
-  const list: Strength[] = [{ nominal: Rpg * Fy * p.Sx, clause: 'F5.1', limitState: 'compression flange yielding' }];
+  const list: Strength[] = [
+    { nominal: Rpg * Fy * p.Sx, clause: 'F5.1', limitState: 'compression flange yielding' },
+  ];
   const rt = rtOf(p);
   const Lp = 1.1 * rt * rootEF;
   const Lr = Math.PI * rt * Math.sqrt(E / (0.7 * Fy));
@@ -136,7 +139,10 @@ function slenderWeb(p: SectionProps, o: IFlexureOptions, lambdaW: number): Stren
   const g = governing(list);
   const limit = Math.min(260, (0.4 * E) / Fy);
   if (lambdaW > limit) {
-    return { ...g, outOfScope: `web slenderness h/tw = ${lambdaW.toFixed(0)} exceeds ${limit.toFixed(0)} for a web without stiffeners (F13.2); use a thicker web` };
+    return {
+      ...g,
+      outOfScope: `web slenderness h/tw = ${lambdaW.toFixed(0)} exceeds ${limit.toFixed(0)} for a web without stiffeners (F13.2); use a thicker web`,
+    };
   }
   return g;
 }

@@ -18,7 +18,12 @@ export interface ShearStrength {
  * @param Lv for pipe: distance from maximum to zero shear (the whole length of a cantilever), in.
  */
 export function shearStrength(
-  p: SectionProps, family: SectionFamily, rolled: boolean, Fy: number, E: number, Lv: number,
+  p: SectionProps,
+  family: SectionFamily,
+  rolled: boolean,
+  Fy: number,
+  E: number,
+  Lv: number,
 ): ShearStrength {
   if (family === 'HSS') {
     const t = p.tw;

@@ -68,8 +68,23 @@ export function solveBearing({ N, B, f, P, M, fpMax }: BearingInput): BearingSol
   const e = P > 0 && Number.isFinite(ratio) ? ratio : null;
   const eCrit = P > 0 ? N / 2 - P / (2 * qMax) : null;
   // One object shape for every case keeps this hot path monomorphic.
-  const out = (c: BearingCase, Y: number | null, fp: number | null, T: number | null, Tother: number): BearingSolution => ({
-    case: c, Y, fp, T, Tother, e, eCrit, qMax, demandMoment: Mr, capacityMoment: cap,
+  const out = (
+    c: BearingCase,
+    Y: number | null,
+    fp: number | null,
+    T: number | null,
+    Tother: number,
+  ): BearingSolution => ({
+    case: c,
+    Y,
+    fp,
+    T,
+    Tother,
+    e,
+    eCrit,
+    qMax,
+    demandMoment: Mr,
+    capacityMoment: cap,
   });
   if (P > 0 && P >= qMax * N) return out('overload', N, P / (B * N), 0, 0);
   if (e !== null && eCrit !== null && e <= eCrit) {

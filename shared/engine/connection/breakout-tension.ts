@@ -50,7 +50,11 @@ export function basicBreakout(hef: number, c: AnchorConcrete): number {
  * Effective embedment of 17.6.2.1.2: anchors within 1.5 hef of three or more edges use
  * hef' = max(ca,max/1.5, s/3) <= hef, ca,max the largest of the edge distances within 1.5 hef.
  */
-export function effectiveEmbedment(hef: number, edges: readonly number[], spacing: number): { hef: number; narrow: boolean } {
+export function effectiveEmbedment(
+  hef: number,
+  edges: readonly number[],
+  spacing: number,
+): { hef: number; narrow: boolean } {
   const near = edges.filter((c) => c < 1.5 * hef);
   if (near.length < 3) return { hef, narrow: false };
   const reduced = Math.max(Math.max(...near) / 1.5, spacing / 3);
@@ -70,5 +74,16 @@ export function breakoutTension(group: TensionGroup, c: AnchorConcrete): Breakou
   const psiC = c.cracked ? 1 : 1.25;
   const Nb = basicBreakout(h, c);
   const nearEdges = group.edges.filter((e) => e < 1.5 * group.hef).length;
-  return { hefUsed: h, narrow, nearEdges, ANc, ANco, caMin, psiEd, psiC, Nb, Ncbg: (ANc / ANco) * psiEd * psiC * Nb };
+  return {
+    hefUsed: h,
+    narrow,
+    nearEdges,
+    ANc,
+    ANco,
+    caMin,
+    psiEd,
+    psiC,
+    Nb,
+    Ncbg: (ANc / ANco) * psiEd * psiC * Nb,
+  };
 }

@@ -8,8 +8,7 @@ import { notComputed, safeRatio, type Evaluation } from './check-row';
 import type { ResultKind } from '../units';
 
 export type Capacity =
-  | { ok: true; value: number; reference?: string; note?: string }
-  | { ok: false; reason: string };
+  { ok: true; value: number; reference?: string; note?: string } | { ok: false; reason: string };
 
 /** The ACI concrete inputs of a connection. */
 export function anchorConcrete(geo: ConnectionGeometry): AnchorConcrete {
@@ -35,7 +34,12 @@ export function concreteProblem(geo: ConnectionGeometry): string | null {
 }
 
 /** demand against a capacity, or a not-computed evaluation carrying the capacity's reason. */
-export function against(demand: number | null, cap: Capacity, kind: ResultKind, whyNoDemand: string): Evaluation {
+export function against(
+  demand: number | null,
+  cap: Capacity,
+  kind: ResultKind,
+  whyNoDemand: string,
+): Evaluation {
   if (!cap.ok) return notComputed(kind, cap.reason);
   if (demand === null) return { demand: null, capacity: cap.value, kind, ratio: null, note: whyNoDemand };
   const ev: Evaluation = { demand, capacity: cap.value, kind, ratio: safeRatio(demand, cap.value) };

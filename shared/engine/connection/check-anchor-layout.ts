@@ -40,21 +40,67 @@ export function evaluateAnchorLayout(geo: ConnectionGeometry, units: UnitSystem)
   const spacing = Math.max(geo.torqued ? 6 * da : 4 * da, rod.washerSize);
   const pierEdge = geo.torqued ? 6 * da : 2 + da / 2;
   const c: Condition[] = [
-    { what: 'Rod centre to plate edge along N', need: eMin, have: geo.N / 2 - geo.f, fix: 'use a longer plate or bring the rods in (smaller offset)' },
-    { what: 'Rod centre to plate edge along B', need: eMin, have: geo.B / 2 - geo.rowSpan / 2, fix: 'use a wider plate or a smaller gauge' },
-    { what: 'Distance between the two rows', need: spacing, have: 2 * geo.f, fix: 'move the rows apart (larger offset)' },
-    { what: 'Rod centre to pier edge along N', need: pierEdge, have: geo.edgeBeyondRow, fix: 'use a longer pier or bring the rods in' },
-    { what: 'Rod centre to pier edge along B', need: pierEdge, have: geo.edgeSide, fix: 'use a wider pier or a smaller gauge' },
-    { what: 'Embedment within the modelled range', need: geo.hef, have: MAX_EMBEDMENT, fix: 'use a shorter embedment (25 in at most)' },
+    {
+      what: 'Rod centre to plate edge along N',
+      need: eMin,
+      have: geo.N / 2 - geo.f,
+      fix: 'use a longer plate or bring the rods in (smaller offset)',
+    },
+    {
+      what: 'Rod centre to plate edge along B',
+      need: eMin,
+      have: geo.B / 2 - geo.rowSpan / 2,
+      fix: 'use a wider plate or a smaller gauge',
+    },
+    {
+      what: 'Distance between the two rows',
+      need: spacing,
+      have: 2 * geo.f,
+      fix: 'move the rows apart (larger offset)',
+    },
+    {
+      what: 'Rod centre to pier edge along N',
+      need: pierEdge,
+      have: geo.edgeBeyondRow,
+      fix: 'use a longer pier or bring the rods in',
+    },
+    {
+      what: 'Rod centre to pier edge along B',
+      need: pierEdge,
+      have: geo.edgeSide,
+      fix: 'use a wider pier or a smaller gauge',
+    },
+    {
+      what: 'Embedment within the modelled range',
+      need: geo.hef,
+      have: MAX_EMBEDMENT,
+      fix: 'use a shorter embedment (25 in at most)',
+    },
   ];
-  if (geo.perSide > 1) c.push({ what: 'Rod spacing in a row', need: spacing, have: geo.g, fix: 'use a larger gauge or fewer, larger rods' });
+  if (geo.perSide > 1)
+    c.push({
+      what: 'Rod spacing in a row',
+      need: spacing,
+      have: geo.g,
+      fix: 'use a larger gauge or fewer, larger rods',
+    });
   if (geo.pierDepth !== undefined) {
-    c.push({ what: 'Pier depth for the embedment and 2 in cover', need: geo.hef + 2, have: geo.pierDepth, fix: 'use shorter rods or a deeper pier' });
+    c.push({
+      what: 'Pier depth for the embedment and 2 in cover',
+      need: geo.hef + 2,
+      have: geo.pierDepth,
+      fix: 'use shorter rods or a deeper pier',
+    });
   }
   if (geo.footprint.ok) {
     const fp = geo.footprint.footprint;
     const clear = Math.min(...rodPositions(geo).map((r) => clearanceToFootprint(r.x, r.y, fp)));
-    c.push({ what: `Rod clear of the ${fp.label}`, need: rod.washerSize / 2 + 0.25, have: clear, fix: 'move the rods out (larger offset or gauge) or use a longer plate' });
+    c.push({
+      what: `Rod clear of the ${fp.label}`,
+      need: rod.washerSize / 2 + 0.25,
+      have: clear,
+      fix: 'move the rods out (larger offset or gauge) or use a longer plate',
+    });
   }
   return evaluateConditions(c, units);
 }

@@ -38,7 +38,16 @@ export function rodShearCapacity(geo: ConnectionGeometry, method: Method): Capac
   const grout = geo.arrangement === 'post-base' ? 0.8 : 1;
   const steel = availableAci(rods * grout * 0.6 * geo.Ase * geo.futa, PHI_ACI.steelShear, method);
   const front = breakoutShear(
-    { n: geo.perSide, ca1: geo.edgeBeyondRow, ca2: [geo.edgeSide, geo.edgeSide], span: geo.rowSpan, spacing: geo.g, ha: geo.pierDepth, da: geo.da, hef: geo.hef },
+    {
+      n: geo.perSide,
+      ca1: geo.edgeBeyondRow,
+      ca2: [geo.edgeSide, geo.edgeSide],
+      span: geo.rowSpan,
+      spacing: geo.g,
+      ha: geo.pierDepth,
+      da: geo.da,
+      hef: geo.hef,
+    },
     conc,
   );
   const breakout = availableAci(front.Vcbg, phiConcrete(geo.conditionA), method);
@@ -69,19 +78,37 @@ export interface ShearOutcome {
   rodRatio: number | null;
 }
 
-export function evaluateAnchorShear(s: ComboState, rods: Capacity, geo: ConnectionGeometry, method: Method): ShearOutcome {
+export function evaluateAnchorShear(
+  s: ComboState,
+  rods: Capacity,
+  geo: ConnectionGeometry,
+  method: Method,
+): ShearOutcome {
   if (geo.arrangement === 'post-base' && s.P > 0) {
     const friction = frictionCapacity(s.P, method);
     if (s.shear <= friction) {
       const ratio = safeRatio(s.shear, friction);
-      const ev: Evaluation = { demand: s.shear, capacity: friction, kind: 'force', ratio, reference: 'AISC Design Guide 1 (2nd ed.) 4.1 (friction on grout)' };
+      const ev: Evaluation = {
+        demand: s.shear,
+        capacity: friction,
+        kind: 'force',
+        ratio,
+        reference: 'AISC Design Guide 1 (2nd ed.) 4.1 (friction on grout)',
+      };
       return { ev, rodRatio: 0 };
     }
   }
   if (!rods.ok) return { ev: notComputed('force', rods.reason), rodRatio: null };
   const ratio = safeRatio(s.shear, rods.value);
-  const ev: Evaluation = { demand: s.shear, capacity: rods.value, kind: 'force', ratio, reference: rods.reference };
+  const ev: Evaluation = {
+    demand: s.shear,
+    capacity: rods.value,
+    kind: 'force',
+    ratio,
+    reference: rods.reference,
+  };
   ev.note = 'Shear shared by all rods: weld the plate washers to the plate after erection (oversized holes).';
-  if (ratio !== null && ratio > 1) ev.note += ' Suggestion: more or larger rods, rods farther from the edge, or a shear lug.';
+  if (ratio !== null && ratio > 1)
+    ev.note += ' Suggestion: more or larger rods, rods farther from the edge, or a shear lug.';
   return { ev, rodRatio: ratio };
 }

@@ -50,7 +50,9 @@ export function evaluateConcreteBreakout(s: ComboState, cap: Capacity): Evaluati
   if (ev.ratio !== null && ev.ratio > 1) {
     // Under the narrow-member rule a deeper rod gains nothing, so do not suggest it.
     const narrow = cap.ok && cap.note !== undefined;
-    const fix = narrow ? 'Suggestion: a larger pier, or more rods spread wider.' : 'Suggestion: deeper embedment, more rods spread wider, or a larger pier.';
+    const fix = narrow
+      ? 'Suggestion: a larger pier, or more rods spread wider.'
+      : 'Suggestion: deeper embedment, more rods spread wider, or a larger pier.';
     ev.note = [ev.note, fix].filter(Boolean).join(' ');
   }
   return ev;

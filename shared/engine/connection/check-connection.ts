@@ -84,7 +84,11 @@ export function checkConnection(
   // One evaluation per check (in PER_COMBINATION order) per combination; blowout may be absent.
   const table = states.map((s) => {
     const shear = evaluateAnchorShear(s, rodShear, geo, method);
-    const tension = [evaluateSteelTension(s, steel), evaluateConcreteBreakout(s, breakout), evaluatePullout(s, pullout)];
+    const tension = [
+      evaluateSteelTension(s, steel),
+      evaluateConcreteBreakout(s, breakout),
+      evaluatePullout(s, pullout),
+    ];
     const blow = evaluateSideFaceBlowout(s, blowout, units);
     const tensionRatios = tension.map((e) => e.ratio);
     if (blow) tensionRatios.push(blow.ratio);

@@ -15,7 +15,10 @@ export const INTERACTION: CheckSpec = {
 /** Combines the worst tension ratio and the rods' shear ratio of one combination. */
 export function evaluateInteraction(tensionRatios: (number | null)[], shearRatio: number | null): Evaluation {
   if (shearRatio === null || tensionRatios.some((r) => r === null)) {
-    return notComputed('force', 'A tension or shear check of the rods could not be computed, so neither can their interaction.');
+    return notComputed(
+      'force',
+      'A tension or shear check of the rods could not be computed, so neither can their interaction.',
+    );
   }
   const n = Math.max(0, ...(tensionRatios as number[]));
   const v = shearRatio;

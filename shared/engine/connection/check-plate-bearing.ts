@@ -29,9 +29,20 @@ export function evaluatePlateBearing(s: ComboState, fpMax: number): Evaluation {
         note: `The compression alone needs more than the whole plate can bear. ${BIGGER}`,
       };
     case 'no-bearing':
-      return { demand: 0, capacity: fpMax, kind: 'stress', ratio: 0, note: 'The plate is pulled off the concrete: no bearing, the rods carry everything.' };
+      return {
+        demand: 0,
+        capacity: fpMax,
+        kind: 'stress',
+        ratio: 0,
+        note: 'The plate is pulled off the concrete: no bearing, the rods carry everything.',
+      };
     case 'large-moment':
-      return { demand: b.demandMoment, capacity: b.capacityMoment, kind: 'moment', ratio: b.demandMoment / b.capacityMoment };
+      return {
+        demand: b.demandMoment,
+        capacity: b.capacityMoment,
+        kind: 'moment',
+        ratio: b.demandMoment / b.capacityMoment,
+      };
     case 'no-solution':
       return {
         demand: b.demandMoment,

@@ -16,10 +16,22 @@ export const PLATE_THICKNESS: CheckSpec = {
 };
 
 /** Evaluates the thickness for one combination; t = the plate provided, in. */
-export function evaluatePlateThickness(s: ComboState, t: number, footprintKnown: boolean, units: UnitSystem): Evaluation {
-  if (!footprintKnown) return notComputed('smallLength', 'The section on the plate is unknown, so the plate cantilevers cannot be found.');
+export function evaluatePlateThickness(
+  s: ComboState,
+  t: number,
+  footprintKnown: boolean,
+  units: UnitSystem,
+): Evaluation {
+  if (!footprintKnown)
+    return notComputed(
+      'smallLength',
+      'The section on the plate is unknown, so the plate cantilevers cannot be found.',
+    );
   if (!s.thickness) {
-    return notComputed('smallLength', 'No real bearing length, so the plate thickness could not be found. Enlarge the plate first.');
+    return notComputed(
+      'smallLength',
+      'No real bearing length, so the plate thickness could not be found. Enlarge the plate first.',
+    );
   }
   if (!s.thickness.tensionModelled) {
     return notComputed(

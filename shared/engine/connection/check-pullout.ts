@@ -20,11 +20,15 @@ export const PULLOUT: CheckSpec = {
 export function pulloutCapacity(geo: ConnectionGeometry, method: Method): Capacity {
   const problem = rodProblem(geo);
   if (problem || geo.Abrg === null) return { ok: false, reason: problem ?? 'unknown rod size' };
-  return { ok: true, value: availableAci(pulloutStrength(geo.Abrg, anchorConcrete(geo)), PHI_ACI.pulloutPryout, method) };
+  return {
+    ok: true,
+    value: availableAci(pulloutStrength(geo.Abrg, anchorConcrete(geo)), PHI_ACI.pulloutPryout, method),
+  };
 }
 
 export function evaluatePullout(s: ComboState, cap: Capacity): Evaluation {
   const ev = against(s.rodTension, cap, 'force', NO_TENSION);
-  if (ev.ratio !== null && ev.ratio > 1) ev.note = 'Suggestion: a larger rod (bigger nut), a plate washer at the embedded nut, or more rods.';
+  if (ev.ratio !== null && ev.ratio > 1)
+    ev.note = 'Suggestion: a larger rod (bigger nut), a plate washer at the embedded nut, or more rods.';
   return ev;
 }

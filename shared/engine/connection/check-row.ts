@@ -51,12 +51,19 @@ function finiteOrNull(v: number | null): number | null {
 }
 
 /** Turns an evaluation into a result Check; a non-finite number turns into a failed check. */
-export function toCheck(spec: CheckSpec, combination: string | null, ev: Evaluation, units: UnitSystem): Check {
+export function toCheck(
+  spec: CheckSpec,
+  combination: string | null,
+  ev: Evaluation,
+  units: UnitSystem,
+): Check {
   const demand = finiteOrNull(ev.demand);
   const capacity = finiteOrNull(ev.capacity);
   const ratio = finiteOrNull(ev.ratio);
   const lost = ev.ratio !== null && ratio === null;
-  const note = lost ? [ev.note, 'A value could not be computed; the check is not passed.'].filter(Boolean).join(' ') : ev.note;
+  const note = lost
+    ? [ev.note, 'A value could not be computed; the check is not passed.'].filter(Boolean).join(' ')
+    : ev.note;
   const check: Check = {
     id: spec.id,
     title: spec.title,

@@ -28,7 +28,8 @@ export interface BlowoutCase {
   value: number;
 }
 
-export type BlowoutCapacity = { applies: false } | { applies: true; cases: BlowoutCase[] } | { applies: true; reason: string };
+export type BlowoutCapacity =
+  { applies: false } | { applies: true; cases: BlowoutCase[] } | { applies: true; reason: string };
 
 /** The blowout cases that apply to the tension row, each with its available strength. */
 export function blowoutCapacity(geo: ConnectionGeometry, method: Method): BlowoutCapacity {
@@ -53,11 +54,18 @@ export function blowoutCapacity(geo: ConnectionGeometry, method: Method): Blowou
 }
 
 /** The worst applicable case for one combination. */
-export function evaluateSideFaceBlowout(s: ComboState, cap: BlowoutCapacity, units: UnitSystem): Evaluation | null {
+export function evaluateSideFaceBlowout(
+  s: ComboState,
+  cap: BlowoutCapacity,
+  units: UnitSystem,
+): Evaluation | null {
   if (!cap.applies) return null;
   if ('reason' in cap) return notComputed('force', cap.reason);
   if (s.groupTension === null || s.rodTension === null) {
-    return notComputed('force', 'No real bearing length, so the rod tension could not be found. Enlarge the plate.');
+    return notComputed(
+      'force',
+      'No real bearing length, so the rod tension could not be found. Enlarge the plate.',
+    );
   }
   let worst: Evaluation | null = null;
   for (const c of cap.cases) {

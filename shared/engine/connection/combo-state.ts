@@ -41,7 +41,9 @@ export function analyseCombination(
   const M = Math.abs(d.M);
   const shear = Math.abs(postBase ? d.H : d.V);
   const bearing = solveBearing({ N: geo.N, B: geo.B, f: geo.f, P, M, fpMax });
-  const thickness = footprint ? requiredThickness(bearing, { N: geo.N, B: geo.B, f: geo.f, Fy: geo.Fy }, footprint, method) : null;
+  const thickness = footprint
+    ? requiredThickness(bearing, { N: geo.N, B: geo.B, f: geo.f, Fy: geo.Fy }, footprint, method)
+    : null;
   const solved = bearing.T !== null;
   const T = bearing.T ?? 0;
   return {

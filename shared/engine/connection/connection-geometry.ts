@@ -47,7 +47,11 @@ export interface ConnectionGeometry {
 }
 
 /** Parses the connection input (quantities are cached by units.ts, so this is cheap per call). */
-export function readGeometry(input: ConnectionInput, root: RootFootprint, shapes: ShapeLookup): ConnectionGeometry {
+export function readGeometry(
+  input: ConnectionInput,
+  root: RootFootprint,
+  shapes: ShapeLookup,
+): ConnectionGeometry {
   const a = input.anchors;
   const da = toInternal(a.diameter, 'length');
   const rod = rodSize(da);

@@ -32,7 +32,8 @@ function plateGoverning(states: readonly ComboState[], t: number, fpMax: number)
 /** Removes any extra quantity that is not a finite number (a guard: the contract keys are checked by tests). */
 function dropNonFinite(result: ConnectionResult): void {
   for (const [key, v] of Object.entries(result)) {
-    if (v && typeof v === 'object' && 'value' in v && !Number.isFinite((v as { value: unknown }).value)) delete result[key];
+    if (v && typeof v === 'object' && 'value' in v && !Number.isFinite((v as { value: unknown }).value))
+      delete result[key];
   }
 }
 
@@ -44,7 +45,8 @@ export function buildConnectionResult(
   units: UnitSystem,
 ): ConnectionResult | null {
   const s = plateGoverning(states, geo.t, fpMax);
-  if (!s || !s.thickness || s.bearing.Y === null || s.bearing.fp === null || s.rodTension === null) return null;
+  if (!s || !s.thickness || s.bearing.Y === null || s.bearing.fp === null || s.rodTension === null)
+    return null;
   const len = (v: number) => quantity(v, 'smallLength', units);
   const b = s.bearing;
   const result: ConnectionResult = {

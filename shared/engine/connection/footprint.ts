@@ -40,7 +40,14 @@ function fromRoot(root: RootFootprint): Footprint {
   const kind: FootprintKind =
     root.family === 'HSS' ? 'box' : root.family === 'PIPE' ? 'round' : root.family === 'C' ? 'C' : 'I';
   // The root footprint carries no web thickness; it is used for drawing only, so a rough value will do.
-  return { label: root.label, kind, d: root.d, bf: root.bf, tf: root.tf, tw: kind === 'I' || kind === 'C' ? 0.6 * root.tf : root.tf };
+  return {
+    label: root.label,
+    kind,
+    d: root.d,
+    bf: root.bf,
+    tf: root.tf,
+    tw: kind === 'I' || kind === 'C' ? 0.6 * root.tf : root.tf,
+  };
 }
 
 /** Resolves the footprint; an unknown shape name is reported, never guessed. */
@@ -52,13 +59,21 @@ export function resolveFootprint(
   if (!footprintShape) {
     const fp = fromRoot(root);
     if (!(fp.d > 0 && fp.bf > 0 && fp.tf > 0)) {
-      return { ok: false, message: `the member's root section "${root.label}" has no usable depth and width` };
+      return {
+        ok: false,
+        message: `the member's root section "${root.label}" has no usable depth and width`,
+      };
     }
     return { ok: true, footprint: fp };
   }
   const shape = shapes(footprintShape);
-  if (!shape) return { ok: false, message: `the footprint shape "${footprintShape}" is not in the shapes table` };
+  if (!shape)
+    return { ok: false, message: `the footprint shape "${footprintShape}" is not in the shapes table` };
   const fp = fromShape(shape);
-  if (!fp) return { ok: false, message: `the footprint shape "${footprintShape}" lacks the dimensions a plate needs` };
+  if (!fp)
+    return {
+      ok: false,
+      message: `the footprint shape "${footprintShape}" lacks the dimensions a plate needs`,
+    };
   return { ok: true, footprint: fp };
 }

@@ -25,7 +25,10 @@ export function evaluateConditions(conditions: readonly Condition[], units: Unit
   for (const c of conditions) {
     const ratio = c.have > 0 ? c.need / c.have : Infinity;
     if (!(c.have > 0)) impossible = true;
-    if (ratio > 1) problems.push(`${c.what}: needs ${formatLength(c.need, units)}, has ${formatLength(c.have, units)}; ${c.fix}.`);
+    if (ratio > 1)
+      problems.push(
+        `${c.what}: needs ${formatLength(c.need, units)}, has ${formatLength(c.have, units)}; ${c.fix}.`,
+      );
     if (ratio > worstRatio) {
       worstRatio = ratio;
       worst = c;

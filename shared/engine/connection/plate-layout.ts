@@ -53,15 +53,26 @@ function centred(a: number, b: number): Rect {
 /** Section outline in plate coordinates (flanges and web, tube walls, or a pipe's circles). */
 export function footprintOutline(fp: Footprint): FootprintOutline {
   const { d, bf, tf, tw, label } = fp;
-  if (fp.kind === 'round') return { kind: 'round', label, outerRadius: d / 2, innerRadius: Math.max(0, d / 2 - tf) };
-  if (fp.kind === 'box') return { kind: 'box', label, outer: centred(d, bf), inner: centred(Math.max(0, d - 2 * tf), Math.max(0, bf - 2 * tf)) };
+  if (fp.kind === 'round')
+    return { kind: 'round', label, outerRadius: d / 2, innerRadius: Math.max(0, d / 2 - tf) };
+  if (fp.kind === 'box')
+    return {
+      kind: 'box',
+      label,
+      outer: centred(d, bf),
+      inner: centred(Math.max(0, d - 2 * tf), Math.max(0, bf - 2 * tf)),
+    };
   const flanges: Rect[] = [
     { x0: d / 2 - tf, y0: -bf / 2, x1: d / 2, y1: bf / 2 },
     { x0: -d / 2, y0: -bf / 2, x1: -d / 2 + tf, y1: bf / 2 },
   ];
   // A channel's web is at the back of its flanges; an I-shape's at the middle.
   const webY0 = fp.kind === 'C' ? -bf / 2 : -tw / 2;
-  return { kind: fp.kind, label, rects: [...flanges, { x0: -d / 2 + tf, y0: webY0, x1: d / 2 - tf, y1: webY0 + tw }] };
+  return {
+    kind: fp.kind,
+    label,
+    rects: [...flanges, { x0: -d / 2 + tf, y0: webY0, x1: d / 2 - tf, y1: webY0 + tw }],
+  };
 }
 
 /** The plan layout of a connection, in inches. */
@@ -71,7 +82,9 @@ export function plateLayout(input: ConnectionInput, root: RootFootprint, shapes:
     arrangement: geo.arrangement,
     plate: { ...centred(geo.N, geo.B), N: geo.N, B: geo.B, thickness: geo.t },
     pier: { ...centred(geo.pierLength, geo.pierWidth), length: geo.pierLength, width: geo.pierWidth },
-    footprint: geo.footprint.ok ? footprintOutline(geo.footprint.footprint) : { kind: 'unknown', label: input.footprint?.shape ?? root.label },
+    footprint: geo.footprint.ok
+      ? footprintOutline(geo.footprint.footprint)
+      : { kind: 'unknown', label: input.footprint?.shape ?? root.label },
     rods: rodPositions(geo),
     rodDiameter: geo.da,
     holeDiameter: geo.rod?.hole ?? null,
@@ -90,7 +103,12 @@ export function plateLayout(input: ConnectionInput, root: RootFootprint, shapes:
 /** The bearing zone for a bearing length Y (in) measured from the compression edge, clipped to the plate. */
 export function bearingZone(layout: PlateLayout, Y: number): Rect {
   const len = Math.min(layout.plate.N, Math.max(0, Number.isFinite(Y) ? Y : 0));
-  return { x0: layout.compressionEdge, y0: layout.plate.y0, x1: layout.compressionEdge + len, y1: layout.plate.y1 };
+  return {
+    x0: layout.compressionEdge,
+    y0: layout.plate.y0,
+    x1: layout.compressionEdge + len,
+    y1: layout.plate.y1,
+  };
 }
 
 /** The bearing zone of a result (its bearing length in any length unit), or null without a result. */

@@ -51,7 +51,11 @@ const inches = (text: string) => toInternal(text, 'length');
 const toIn = (q: Quantity) => convert(q.value, q.unit, 'in');
 
 /** One schedule row from a connection input and its result (result null: the requirement columns stay blank). */
-export function plateScheduleRow(name: string, input: ConnectionInput, result: ConnectionResult | null): PlateScheduleRow {
+export function plateScheduleRow(
+  name: string,
+  input: ConnectionInput,
+  result: ConnectionResult | null,
+): PlateScheduleRow {
   const a = input.anchors;
   const da = inches(a.diameter);
   const rod = rodSize(da);
@@ -67,7 +71,9 @@ export function plateScheduleRow(name: string, input: ConnectionInput, result: C
     gauge: a.perSide > 1 ? inchFraction(inches(a.gauge)) : '',
     embedment: inchFraction(inches(a.embedment)),
     holeDiameter: rod ? inchFraction(rod.hole) : 'not tabulated',
-    washer: rod ? `${inchFraction(rod.washerSize)} x ${inchFraction(rod.washerSize)} x ${inchFraction(rod.washerThickness)}` : 'not tabulated',
+    washer: rod
+      ? `${inchFraction(rod.washerSize)} x ${inchFraction(rod.washerSize)} x ${inchFraction(rod.washerThickness)}`
+      : 'not tabulated',
     minEdgeDistance: rod ? inchFraction(rodEdgeMinimum(rod)) : '',
     requiredThickness: required === null ? '' : required.toFixed(3),
     nextStandardThickness: required === null ? '' : inchFraction(nextStandardThickness(required)),

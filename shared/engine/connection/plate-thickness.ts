@@ -30,7 +30,13 @@ export function tensionLever(f: number, fp: Footprint): number {
  * One cantilever l (m or n) on the bearing side: Y >= l: uniform 1.5 l sqrt(fp/Fy); Y < l: the load of
  * the bearing zone only, 2.11 sqrt(fp Y (l - Y/2)/Fy) (ASD 1.83 / 2.58).
  */
-function bearingCantilever(l: number, Y: number, fp: number, Fy: number, c: { uniform: number; partial: number }): number {
+function bearingCantilever(
+  l: number,
+  Y: number,
+  fp: number,
+  Fy: number,
+  c: { uniform: number; partial: number },
+): number {
   if (l <= 0) return 0;
   return Y >= l ? c.uniform * l * Math.sqrt(fp / Fy) : c.partial * Math.sqrt((fp * Y * (l - Y / 2)) / Fy);
 }
@@ -69,7 +75,8 @@ export function requiredThickness(
   const x = Math.max(0, lever);
   const { Y, fp: p } = s;
   let bearingSide = 0;
-  if (p > 0 && Y > 0) bearingSide = Math.max(bearingCantilever(m, Y, p, plate.Fy, c), bearingCantilever(n, Y, p, plate.Fy, c));
+  if (p > 0 && Y > 0)
+    bearingSide = Math.max(bearingCantilever(m, Y, p, plate.Fy, c), bearingCantilever(n, Y, p, plate.Fy, c));
   const tension = Math.max(s.T, s.Tother);
   const tensionSide = tension > 0 ? c.partial * Math.sqrt((tension * x) / (plate.B * plate.Fy)) : 0;
   const tensionModelled = !(tension > 0 && lever <= 0);

@@ -12,7 +12,10 @@ export interface RodPosition {
 /** Both rows, perSide rods each, centred on the plate. */
 export function rodPositions(geo: Pick<ConnectionGeometry, 'f' | 'g' | 'perSide'>): RodPosition[] {
   const out: RodPosition[] = [];
-  for (const [x, row] of [[geo.f, 'tension'], [-geo.f, 'compression']] as const) {
+  for (const [x, row] of [
+    [geo.f, 'tension'],
+    [-geo.f, 'compression'],
+  ] as const) {
     for (let i = 0; i < geo.perSide; i++) out.push({ x, y: (i - (geo.perSide - 1) / 2) * geo.g, row });
   }
   return out;

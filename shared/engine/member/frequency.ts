@@ -55,13 +55,28 @@ interface Shape {
 }
 
 /** int(w b b) / int(w a b): with a the last shape and b the shape it produces, omega^2 = g / this. */
-function quotient(x: readonly number[], wN: Float64Array, wM: Float64Array, pN: Float64Array, a: Shape, b: Shape): number {
+function quotient(
+  x: readonly number[],
+  wN: Float64Array,
+  wM: Float64Array,
+  pN: Float64Array,
+  a: Shape,
+  b: Shape,
+): number {
   let ab = 0;
   let bb = 0;
   for (let i = 0; i < x.length - 1; i++) {
     const h = x[i + 1] - x[i];
-    ab += (h / 6) * (wN[i] * a.node[i] * b.node[i] + 4 * wM[i] * a.mid[i] * b.mid[i] + wN[i + 1] * a.node[i + 1] * b.node[i + 1]);
-    bb += (h / 6) * (wN[i] * b.node[i] * b.node[i] + 4 * wM[i] * b.mid[i] * b.mid[i] + wN[i + 1] * b.node[i + 1] * b.node[i + 1]);
+    ab +=
+      (h / 6) *
+      (wN[i] * a.node[i] * b.node[i] +
+        4 * wM[i] * a.mid[i] * b.mid[i] +
+        wN[i + 1] * a.node[i + 1] * b.node[i + 1]);
+    bb +=
+      (h / 6) *
+      (wN[i] * b.node[i] * b.node[i] +
+        4 * wM[i] * b.mid[i] * b.mid[i] +
+        wN[i + 1] * b.node[i + 1] * b.node[i + 1]);
   }
   for (let i = 0; i < x.length; i++) {
     ab += pN[i] * a.node[i] * b.node[i];
@@ -87,7 +102,12 @@ function deflectedShape(x: readonly number[], kN: Float64Array, kM: Float64Array
 
 /** Shape under a distributed load given at nodes and midpoints plus point loads at nodes. */
 function shapeUnderLoad(
-  x: readonly number[], qN: Float64Array, qM: Float64Array, pN: Float64Array, EIn: Float64Array, EIm: Float64Array,
+  x: readonly number[],
+  qN: Float64Array,
+  qM: Float64Array,
+  pN: Float64Array,
+  EIn: Float64Array,
+  EIm: Float64Array,
 ): Shape {
   const n = x.length;
   const kN = new Float64Array(n);

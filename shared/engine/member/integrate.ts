@@ -13,7 +13,11 @@ export interface Deflected {
   y: Float64Array;
 }
 
-export function integrateCurvature(x: readonly number[], kNode: ArrayLike<number>, kMid: ArrayLike<number>): Deflected {
+export function integrateCurvature(
+  x: readonly number[],
+  kNode: ArrayLike<number>,
+  kMid: ArrayLike<number>,
+): Deflected {
   const n = x.length;
   const theta = new Float64Array(n);
   const y = new Float64Array(n);

@@ -28,7 +28,8 @@ export function catalogProps(s: ShapeRecord): SectionProps {
   // AISC's h for rolled shapes is the clear distance less the fillets: d - 2 kdes.
   const h = d - 2 * (s.kdes ?? tf);
   // A user's imported shape may lack the torsional columns: take them from the plate model.
-  const plates = s.Cw === undefined || s.rts === undefined || s.ho === undefined ? iSectionProps(d, bf, tf, tw) : null;
+  const plates =
+    s.Cw === undefined || s.rts === undefined || s.ho === undefined ? iSectionProps(d, bf, tf, tw) : null;
   return {
     ...base,
     d,

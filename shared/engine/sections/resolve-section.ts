@@ -27,7 +27,12 @@ export function resolveSection(section: SectionInput, shapes: ShapeLookup): Memb
   }
   const missing = missingDimensions(shape);
   if (missing.length) {
-    return [{ path: 'member.section.shape', message: `${shape.label} lacks ${missing.join(', ')} in the shapes table, needed for the checks` }];
+    return [
+      {
+        path: 'member.section.shape',
+        message: `${shape.label} lacks ${missing.join(', ')} in the shapes table, needed for the checks`,
+      },
+    ];
   }
   if (!section.tipDepth) return catalogSection(shape);
   const path = 'member.section.tipDepth';
@@ -37,7 +42,9 @@ export function resolveSection(section: SectionInput, shapes: ShapeLookup): Memb
   const tip = toInternal(section.tipDepth, 'length');
   const d = shape.d ?? 0;
   if (tip >= d) {
-    return [{ path, message: `must be less than the depth of ${shape.label} (${d} in), got "${section.tipDepth}"` }];
+    return [
+      { path, message: `must be less than the depth of ${shape.label} (${d} in), got "${section.tipDepth}"` },
+    ];
   }
   const minTip = 2 * (shape.kdes ?? shape.tf ?? 0) + 0.25;
   if (tip < minTip) {
@@ -71,13 +78,19 @@ function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSecti
   ];
   for (const [key, min, max] of ranges) {
     if (p[key] < min || p[key] > max) {
-      problems.push({ path: `${base}.${key}`, message: `must be between ${min} and ${max} in, got "${plates[key]}"` });
+      problems.push({
+        path: `${base}.${key}`,
+        message: `must be between ${min} and ${max} in, got "${plates[key]}"`,
+      });
     }
   }
   if (problems.length) return problems;
   const minDepth = 2 * p.flangeThickness + 0.25;
   if (p.tipDepth > p.rootDepth) {
-    problems.push({ path: `${base}.tipDepth`, message: `must not exceed the root depth (${plates.rootDepth}), got "${plates.tipDepth}"` });
+    problems.push({
+      path: `${base}.tipDepth`,
+      message: `must not exceed the root depth (${plates.rootDepth}), got "${plates.tipDepth}"`,
+    });
   }
   if (p.tipDepth < minDepth) {
     problems.push({
@@ -86,10 +99,16 @@ function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSecti
     });
   }
   if (p.rootDepth < minDepth) {
-    problems.push({ path: `${base}.rootDepth`, message: `is too shallow to leave a web between the flanges, got "${plates.rootDepth}"` });
+    problems.push({
+      path: `${base}.rootDepth`,
+      message: `is too shallow to leave a web between the flanges, got "${plates.rootDepth}"`,
+    });
   }
   if (p.webThickness >= p.flangeWidth) {
-    problems.push({ path: `${base}.webThickness`, message: `must be thinner than the flange width (${plates.flangeWidth}), got "${plates.webThickness}"` });
+    problems.push({
+      path: `${base}.webThickness`,
+      message: `must be thinner than the flange width (${plates.flangeWidth}), got "${plates.webThickness}"`,
+    });
   }
   return problems.length ? problems : builtUpSection(p);
 }

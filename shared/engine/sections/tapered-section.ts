@@ -55,8 +55,18 @@ export function taperedRolledSection(s: ShapeRecord, tipDepth: number): MemberSe
   const d = s.d ?? 0;
   const tf = s.tf ?? 0;
   const fillet = Math.max(0, (s.kdes ?? tf) - tf);
-  const plates = { rootDepth: d, tipDepth, flangeWidth: s.bf ?? 0, flangeThickness: tf, webThickness: s.tw ?? 0, filletAllowance: fillet };
-  const label: [string, string] = [`${s.label} tapered to ${fmt(tipDepth)} in`, `${s.label} tapered to ${mm(tipDepth)} mm`];
+  const plates = {
+    rootDepth: d,
+    tipDepth,
+    flangeWidth: s.bf ?? 0,
+    flangeThickness: tf,
+    webThickness: s.tw ?? 0,
+    filletAllowance: fillet,
+  };
+  const label: [string, string] = [
+    `${s.label} tapered to ${fmt(tipDepth)} in`,
+    `${s.label} tapered to ${mm(tipDepth)} mm`,
+  ];
   return taperedSection(plates, label, 'tapered-rolled', 'W');
 }
 

@@ -15,7 +15,8 @@ export default function CompareRoute() {
   const a = useRevision(valid ? idA : null);
   const b = useRevision(valid ? idB : null);
   const error = a.error ?? b.error;
-  const wrongCantilever = (a.data && a.data.cantileverId !== cantileverId) || (b.data && b.data.cantileverId !== cantileverId);
+  const wrongCantilever =
+    (a.data && a.data.cantileverId !== cantileverId) || (b.data && b.data.cantileverId !== cantileverId);
 
   return (
     <div className="mx-auto max-w-6xl space-y-4 p-6">
@@ -25,7 +26,8 @@ export default function CompareRoute() {
         </Link>
       </nav>
       <h1 className="text-xl font-semibold text-concrete-900">
-        Compare {a.data && b.data ? `revision ${a.data.number} with revision ${b.data.number}` : 'two revisions'}
+        Compare{' '}
+        {a.data && b.data ? `revision ${a.data.number} with revision ${b.data.number}` : 'two revisions'}
       </h1>
       {!valid && (
         <>
@@ -33,9 +35,21 @@ export default function CompareRoute() {
           <CautionNote />
         </>
       )}
-      {valid && error && <p role="alert" className="text-util-over">A revision could not be loaded: {errorText(error)}</p>}
-      {valid && !error && (a.isPending || b.isPending) && <p role="status" className="text-concrete-600">Loading the two revisions…</p>}
-      {wrongCantilever && <p role="alert" className="text-util-over">These revisions belong to another cantilever.</p>}
+      {valid && error && (
+        <p role="alert" className="text-util-over">
+          A revision could not be loaded: {errorText(error)}
+        </p>
+      )}
+      {valid && !error && (a.isPending || b.isPending) && (
+        <p role="status" className="text-concrete-600">
+          Loading the two revisions…
+        </p>
+      )}
+      {wrongCantilever && (
+        <p role="alert" className="text-util-over">
+          These revisions belong to another cantilever.
+        </p>
+      )}
       {a.data && b.data && !wrongCantilever && <CompareView a={a.data} b={b.data} />}
     </div>
   );

@@ -20,10 +20,30 @@ export default function DesignDeskRoute() {
   const system = me.data?.units === 'SI' ? 'SI' : 'US';
   const toUserUnits = useCallback((doc: DesignDocument) => prepareDocument(doc, system), [system]);
 
-  if (cantilever.isError) return <div className="p-6"><ErrorNote error={cantilever.error}>This cantilever could not be loaded.</ErrorNote></div>;
-  if (revision.isError) return <div className="p-6"><ErrorNote error={revision.error}>Its current revision could not be loaded.</ErrorNote></div>;
-  if (!me.data || !cantilever.data || openedOn === undefined || (openedOn !== null && !revision.data)) return <Loading label="Opening the design desk…" />;
+  if (cantilever.isError)
+    return (
+      <div className="p-6">
+        <ErrorNote error={cantilever.error}>This cantilever could not be loaded.</ErrorNote>
+      </div>
+    );
+  if (revision.isError)
+    return (
+      <div className="p-6">
+        <ErrorNote error={revision.error}>Its current revision could not be loaded.</ErrorNote>
+      </div>
+    );
+  if (!me.data || !cantilever.data || openedOn === undefined || (openedOn !== null && !revision.data))
+    return <Loading label="Opening the design desk…" />;
   const start = revision.data ?? null;
   const initialDoc = toUserUnits(start?.input ?? exampleDesign);
-  return <DeskEditor key={cantileverId} cantilever={cantilever.data} revision={start} initialDoc={initialDoc} user={me.data} toUserUnits={toUserUnits} />;
+  return (
+    <DeskEditor
+      key={cantileverId}
+      cantilever={cantilever.data}
+      revision={start}
+      initialDoc={initialDoc}
+      user={me.data}
+      toUserUnits={toUserUnits}
+    />
+  );
 }

@@ -29,7 +29,9 @@ export default function HistoryRoute() {
           </>
         )}
       </nav>
-      <h1 className="text-xl font-semibold text-concrete-900">History{cantilever.data ? ` of ${cantilever.data.name}` : ''}</h1>
+      <h1 className="text-xl font-semibold text-concrete-900">
+        History{cantilever.data ? ` of ${cantilever.data.name}` : ''}
+      </h1>
       {revisions.isPending && <p className="text-concrete-600">Loading revisions…</p>}
       {revisions.isError && (
         <p role="alert" className="text-util-over">
@@ -38,11 +40,19 @@ export default function HistoryRoute() {
       )}
       {revisions.data && revisions.data.length === 0 && (
         <p className="text-concrete-700">
-          No revisions yet. Save one from the <Link to={paths.desk(cantileverId)} className="underline">design desk</Link>.
+          No revisions yet. Save one from the{' '}
+          <Link to={paths.desk(cantileverId)} className="underline">
+            design desk
+          </Link>
+          .
         </p>
       )}
       {revisions.data && revisions.data.length > 0 && (
-        <RevisionTimeline cantileverId={cantileverId} revisions={revisions.data} user={user.data ?? undefined} />
+        <RevisionTimeline
+          cantileverId={cantileverId}
+          revisions={revisions.data}
+          user={user.data ?? undefined}
+        />
       )}
     </div>
   );

@@ -20,20 +20,36 @@ export default function ProjectRoute() {
   const navigate = useNavigate();
   const [creating, setCreating] = useState(false);
   if (project.isPending) return <Loading />;
-  if (project.isError) return <div className="p-6"><ErrorNote error={project.error}>This project could not be loaded.</ErrorNote></div>;
+  if (project.isError)
+    return (
+      <div className="p-6">
+        <ErrorNote error={project.error}>This project could not be loaded.</ErrorNote>
+      </div>
+    );
   const p = project.data;
   const role = me.data?.role;
   const mayCreate = role ? EDIT_RIGHTS[role].member : false;
   return (
     <section className="mx-auto max-w-5xl p-6">
-      <p className="text-xs text-concrete-500"><Link to={paths.projects} className="underline">Projects</Link> /</p>
+      <p className="text-xs text-concrete-500">
+        <Link to={paths.projects} className="underline">
+          Projects
+        </Link>{' '}
+        /
+      </p>
       <h1 className="text-xl font-semibold">{p.name}</h1>
-      <p className="text-sm text-concrete-600">{p.site || 'no site given'} · {p.codeBasis} · {p.units}</p>
+      <p className="text-sm text-concrete-600">
+        {p.site || 'no site given'} · {p.codeBasis} · {p.units}
+      </p>
       <div className="mt-6 mb-2 flex items-center justify-between">
         <h2 className="font-semibold">Cantilevers</h2>
         <div className="flex items-center gap-4">
           {p.cantilevers.length > 0 ? <ProjectScheduleLink projectId={p.id} /> : null}
-          {mayCreate ? <Button variant="primary" onClick={() => setCreating(true)}><Plus size={16} aria-hidden="true" /> New cantilever</Button> : null}
+          {mayCreate ? (
+            <Button variant="primary" onClick={() => setCreating(true)}>
+              <Plus size={16} aria-hidden="true" /> New cantilever
+            </Button>
+          ) : null}
         </div>
       </div>
       <CantileverTable cantilevers={p.cantilevers} />
@@ -45,9 +61,19 @@ export default function ProjectRoute() {
           </li>
         ))}
       </ul>
-      {role === 'admin' ? <div className="mt-4"><ProjectMembersPanel projectId={p.id} /></div> : null}
+      {role === 'admin' ? (
+        <div className="mt-4">
+          <ProjectMembersPanel projectId={p.id} />
+        </div>
+      ) : null}
       <Dialog open={creating} title="New cantilever" onClose={() => setCreating(false)}>
-        <CreateCantileverForm projectId={p.id} onDone={(id) => { setCreating(false); navigate(paths.desk(id)); }} />
+        <CreateCantileverForm
+          projectId={p.id}
+          onDone={(id) => {
+            setCreating(false);
+            navigate(paths.desk(id));
+          }}
+        />
       </Dialog>
     </section>
   );

@@ -10,14 +10,30 @@ export default function ReviewRoute() {
   const revisionId = Number(useParams().revisionId);
   const valid = Number.isInteger(revisionId) && revisionId > 0;
   // The input and result never change, but the review state does: fetch it fresh on every visit.
-  const revision = useQuery({ ...revisionQueryOptions(valid ? revisionId : 0), enabled: valid, staleTime: 0 });
+  const revision = useQuery({
+    ...revisionQueryOptions(valid ? revisionId : 0),
+    enabled: valid,
+    staleTime: 0,
+  });
   const me = useMe();
 
   return (
     <div className="mx-auto max-w-5xl space-y-4 p-6">
-      {!valid && <p role="alert" className="text-util-over">This address does not name a revision.</p>}
-      {valid && revision.isPending && <p role="status" className="text-concrete-600">Loading the revision…</p>}
-      {revision.isError && <p role="alert" className="text-util-over">The revision could not be loaded: {errorText(revision.error)}</p>}
+      {!valid && (
+        <p role="alert" className="text-util-over">
+          This address does not name a revision.
+        </p>
+      )}
+      {valid && revision.isPending && (
+        <p role="status" className="text-concrete-600">
+          Loading the revision…
+        </p>
+      )}
+      {revision.isError && (
+        <p role="alert" className="text-util-over">
+          The revision could not be loaded: {errorText(revision.error)}
+        </p>
+      )}
       {revision.data && <ReviewView revision={revision.data} user={me.data} />}
     </div>
   );

@@ -9,10 +9,16 @@ export default function ShapesRoute() {
     <section className="mx-auto flex max-w-7xl flex-col gap-4 p-6">
       <div>
         <h1 className="text-xl font-semibold">Shapes</h1>
-        <p className="text-sm text-concrete-600">The open shapes table and the shapes your team imported. Values are in US customary units.</p>
+        <p className="text-sm text-concrete-600">
+          The open shapes table and the shapes your team imported. Values are in US customary units.
+        </p>
       </div>
       <ShapesBrowser />
-      {mayImport ? <ShapeImport /> : <p className="text-sm text-concrete-600">Architects, fabricators and engineers can import shapes.</p>}
+      {mayImport ? (
+        <ShapeImport />
+      ) : (
+        <p className="text-sm text-concrete-600">Architects, fabricators and engineers can import shapes.</p>
+      )}
     </section>
   );
 }

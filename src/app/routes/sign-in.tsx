@@ -21,9 +21,13 @@ export default function SignInRoute() {
       <div className="w-full max-w-sm rounded-md border border-concrete-300 bg-concrete-50 p-6 shadow-sm">
         <Brand />
         <h1 className="mt-4 mb-1 text-lg font-semibold">Sign in</h1>
-        <p className="mb-4 text-sm text-concrete-600">Reach, plate and pier in one place for the whole team.</p>
+        <p className="mb-4 text-sm text-concrete-600">
+          Reach, plate and pier in one place for the whole team.
+        </p>
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
-        <p className="mt-6 border-t border-concrete-200 pt-3 text-[11px] text-concrete-500">{CAUTION_SHORT}</p>
+        <p className="mt-6 border-t border-concrete-200 pt-3 text-[11px] text-concrete-500">
+          {CAUTION_SHORT}
+        </p>
       </div>
     </main>
   );

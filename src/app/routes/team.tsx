@@ -11,13 +11,25 @@ function TeamScreen() {
   return (
     <>
       <section aria-labelledby="team-accounts" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="team-accounts" className="mb-2 text-lg font-semibold text-concrete-900">Accounts</h2>
-        {users.isPending && <p role="status" className="text-sm text-concrete-600">Loading accounts…</p>}
-        {users.isError && <p role="alert" className="text-sm text-util-over">Accounts could not be loaded: {errorText(users.error)}</p>}
+        <h2 id="team-accounts" className="mb-2 text-lg font-semibold text-concrete-900">
+          Accounts
+        </h2>
+        {users.isPending && (
+          <p role="status" className="text-sm text-concrete-600">
+            Loading accounts…
+          </p>
+        )}
+        {users.isError && (
+          <p role="alert" className="text-sm text-util-over">
+            Accounts could not be loaded: {errorText(users.error)}
+          </p>
+        )}
         {users.data && <AccountsTable users={users.data} meId={me.data?.id} />}
       </section>
       <section aria-labelledby="team-invite" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="team-invite" className="mb-2 text-lg font-semibold text-concrete-900">Create an account</h2>
+        <h2 id="team-invite" className="mb-2 text-lg font-semibold text-concrete-900">
+          Create an account
+        </h2>
         <InviteForm />
       </section>
     </>

@@ -19,27 +19,47 @@ export function AppLayout() {
   const isAdmin = user?.role === 'admin';
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2"
+      >
         Skip to content
       </a>
       <header className="flex items-center gap-4 bg-concrete-800 px-4 py-2 text-concrete-50">
         <Brand compact />
         <nav aria-label="Main" className="flex gap-1">
-          <NavLink to={paths.projects} className={navClass}>Projects</NavLink>
-          <NavLink to={paths.shapes} className={navClass}>Shapes</NavLink>
-          {isAdmin ? <NavLink to={paths.team} className={navClass}>Team</NavLink> : null}
-          {isAdmin ? <NavLink to={paths.outbox} className={navClass}>Outbox</NavLink> : null}
+          <NavLink to={paths.projects} className={navClass}>
+            Projects
+          </NavLink>
+          <NavLink to={paths.shapes} className={navClass}>
+            Shapes
+          </NavLink>
+          {isAdmin ? (
+            <NavLink to={paths.team} className={navClass}>
+              Team
+            </NavLink>
+          ) : null}
+          {isAdmin ? (
+            <NavLink to={paths.outbox} className={navClass}>
+              Outbox
+            </NavLink>
+          ) : null}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           {user ? (
             <span data-testid="who">
-              {user.displayName} <span className="rounded bg-concrete-700 px-1.5 py-0.5 text-xs text-concrete-200">{user.role}</span>
+              {user.displayName}{' '}
+              <span className="rounded bg-concrete-700 px-1.5 py-0.5 text-xs text-concrete-200">
+                {user.role}
+              </span>
             </span>
           ) : null}
           <button
             type="button"
             className="inline-flex items-center gap-1 rounded px-2 py-1 text-concrete-200 hover:bg-concrete-700 hover:text-white"
-            onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn, { replace: true }) })}
+            onClick={() =>
+              logout.mutate(undefined, { onSettled: () => navigate(paths.signIn, { replace: true }) })
+            }
           >
             <LogOut size={14} aria-hidden="true" /> Sign out
           </button>
@@ -49,7 +69,10 @@ export function AppLayout() {
         <Outlet />
       </main>
       {/* Every signed-in screen shows results or leads to them, so every one carries the caution. */}
-      <footer className="border-t border-concrete-200 px-4 py-3 text-xs text-concrete-600" data-testid="caution-footer">
+      <footer
+        className="border-t border-concrete-200 px-4 py-3 text-xs text-concrete-600"
+        data-testid="caution-footer"
+      >
         {CAUTION}
       </footer>
     </div>

@@ -9,7 +9,8 @@ export interface DialogProps {
   wide?: boolean;
 }
 
-const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
+const FOCUSABLE =
+  'a[href], button:not([disabled]), input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
 
 /** A modal dialog: focus moves in, Tab stays inside, Escape closes, focus returns where it was. */
 export function Dialog({ open, title, onClose, children, wide = false }: DialogProps) {
@@ -24,7 +25,8 @@ export function Dialog({ open, title, onClose, children, wide = false }: DialogP
     if (!open) return;
     const previous = document.activeElement as HTMLElement | null;
     const box = ref.current;
-    const first = box?.querySelector<HTMLElement>('[data-autofocus]') ?? box?.querySelector<HTMLElement>(FOCUSABLE);
+    const first =
+      box?.querySelector<HTMLElement>('[data-autofocus]') ?? box?.querySelector<HTMLElement>(FOCUSABLE);
     (first ?? box)?.focus();
     function onKey(event: KeyboardEvent) {
       if (event.key === 'Escape') {
@@ -66,7 +68,12 @@ export function Dialog({ open, title, onClose, children, wide = false }: DialogP
           <h2 id={titleId} className="text-base font-semibold">
             {title}
           </h2>
-          <button type="button" onClick={onClose} className="rounded px-2 text-concrete-600 hover:bg-concrete-200" aria-label="Close">
+          <button
+            type="button"
+            onClick={onClose}
+            className="rounded px-2 text-concrete-600 hover:bg-concrete-200"
+            aria-label="Close"
+          >
             ×
           </button>
         </div>

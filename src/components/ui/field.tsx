@@ -18,7 +18,11 @@ export function Field({ id, label, error, hint, children, className = '' }: Fiel
         {label}
       </label>
       {children}
-      {hint && !error ? <p id={`${id}-hint`} className="text-[11px] text-concrete-500">{hint}</p> : null}
+      {hint && !error ? (
+        <p id={`${id}-hint`} className="text-[11px] text-concrete-500">
+          {hint}
+        </p>
+      ) : null}
       {error ? (
         <p id={`${id}-error`} role="alert" className="text-xs text-util-over">
           {label} {error}
@@ -36,7 +40,11 @@ export function inputClass(invalid: boolean, extra = ''): string {
 }
 
 /** aria props for an input inside a Field. */
-export function describedBy(id: string, error?: string, hint?: boolean): { 'aria-invalid': boolean; 'aria-describedby'?: string } {
+export function describedBy(
+  id: string,
+  error?: string,
+  hint?: boolean,
+): { 'aria-invalid': boolean; 'aria-describedby'?: string } {
   const ids = [error ? `${id}-error` : null, hint && !error ? `${id}-hint` : null].filter(Boolean);
   return { 'aria-invalid': Boolean(error), ...(ids.length ? { 'aria-describedby': ids.join(' ') } : {}) };
 }

@@ -20,7 +20,10 @@ describe('plate.thickness: rods beside the section, not beyond the tension flang
   // (bf/2 = 3.245 in), inside the section depth (d/2 = 6.1 in). Before the fix the DG1 lever
   // x = f - d/2 + tf/2 = 4 - 6.1 + 0.19 = -1.91 in was clamped to 0, so the 48 kip of row tension
   // needed no plate at all and a 1.75 in plate passed on the bearing side alone.
-  const input = connection({ plate: { N: '16 in', B: '24 in', thickness: '1.75 in' }, anchors: { offset: '4 in', gauge: '16 in', perSide: 2 } });
+  const input = connection({
+    plate: { N: '16 in', B: '24 in', thickness: '1.75 in' },
+    anchors: { offset: '4 in', gauge: '16 in', perSide: 2 },
+  });
   const out = checkConnection(input, [{ combination: 'test', M: 600, V: 5, H: 0 }], W12X26_ROOT, LRFD_US);
   const find = (id: string) => out.checks.find((c) => c.id === id)!;
 
@@ -49,14 +52,19 @@ describe('plate.thickness: rods beside the section, not beyond the tension flang
   });
 
   it('leaves a row beyond the flange alone: f = 8 in gives x = 8 - 6.1 + 0.19 = 2.09 in (DG1 3.4 [mem])', () => {
-    const beyond = checkConnection(connection(), [{ combination: 'test', M: 600, V: 5, H: 0 }], W12X26_ROOT, LRFD_US);
+    const beyond = checkConnection(
+      connection(),
+      [{ combination: 'test', M: 600, V: 5, H: 0 }],
+      W12X26_ROOT,
+      LRFD_US,
+    );
     const t = beyond.checks.find((c) => c.id === 'plate.thickness')!;
     expect(t.ratio).not.toBeNull();
     expectWithin((beyond.result!.tensionLever as { value: number }).value, 8 - 12.2 / 2 + 0.38 / 2, 1e-9);
   });
 });
 
-describe('pullout: f\'c is capped at 10,000 psi like every ch. 17 calculation (ACI 318-19 17.3.1, from memory)', () => {
+describe("pullout: f'c is capped at 10,000 psi like every ch. 17 calculation (ACI 318-19 17.3.1, from memory)", () => {
   it('12,000 psi concrete gives Np = 8 x 0.911 in^2 x 10,000 psi = 72,880 lb, not 87,456 lb', () => {
     // Abrg 0.911 in^2: heavy hex nut of a 3/4 in rod (REFERENCES.md [calc]); ACI 318-19 17.6.3.2.2 [mem].
     const np = pulloutStrength(0.911, { fc: 12, lambdaA: 1, cracked: true });
@@ -69,7 +77,13 @@ describe('pullout: f\'c is capped at 10,000 psi like every ch. 17 calculation (A
  * (AISC 360-16 F13.2 [mem], Fy 50): root 60 in, tw 0.24 in, flanges 6 x 3/8: h/tw = (60 - 0.75)/0.24 = 247.
  */
 function taperContext(M: (x: number) => number): CheckContext {
-  const section = builtUpSection({ rootDepth: 60, tipDepth: 8, flangeWidth: 6, flangeThickness: 0.375, webThickness: 0.24 });
+  const section = builtUpSection({
+    rootDepth: 60,
+    tipDepth: 8,
+    flangeWidth: 6,
+    flangeThickness: 0.375,
+    webThickness: 0.24,
+  });
   const L = 240;
   const model = analyseMember(section, L, 29000, [{ case: 'L', q0: 0.001, q1: 0, points: [] }], 40);
   const x = model.grid.x;
@@ -81,7 +95,16 @@ function taperContext(M: (x: number) => number): CheckContext {
     y: new Float64Array(0),
     tip: 0,
   };
-  return { model, section, method: 'LRFD', units: 'US', Fy: 50, E: 29000, Lb: 12, combos: [{ name: '1.6L', response }] };
+  return {
+    model,
+    section,
+    method: 'LRFD',
+    units: 'US',
+    Fy: 50,
+    E: 29000,
+    Lb: 12,
+    combos: [{ name: '1.6L', response }],
+  };
 }
 
 describe('member.flexure: a station outside the clauses fails the check wherever the worst ratio is', () => {
@@ -99,7 +122,13 @@ describe('member.flexure: a station outside the clauses fails the check wherever
 
   it('a web within F13.2 everywhere still passes (tw 0.30 in: h/tw = 59.25/0.30 = 198 < 232)', () => {
     const ctx = taperContext((x) => (x === 0 ? 0 : 50));
-    const section = builtUpSection({ rootDepth: 60, tipDepth: 8, flangeWidth: 6, flangeThickness: 0.375, webThickness: 0.3 });
+    const section = builtUpSection({
+      rootDepth: 60,
+      tipDepth: 8,
+      flangeWidth: 6,
+      flangeThickness: 0.375,
+      webThickness: 0.3,
+    });
     const props = ctx.model.grid.x.map((xi) => section.at(xi / ctx.model.L));
     expect(flexureCheck({ ...ctx, section, model: { ...ctx.model, props } }).ok).toBe(true);
   });

@@ -25,12 +25,27 @@ function doc(method: 'LRFD' | 'ASD', pierWidth = '48 in', embedment = '12 in'): 
   return {
     ...memberDoc({
       method,
-      loads: { selfWeight: false, area: [], line: [{ case: 'D', value: '0.3 kip/ft' }, { case: 'L', value: '0.4 kip/ft' }], point: [] },
+      loads: {
+        selfWeight: false,
+        area: [],
+        line: [
+          { case: 'D', value: '0.3 kip/ft' },
+          { case: 'L', value: '0.4 kip/ft' },
+        ],
+        point: [],
+      },
     }),
     connection: {
       arrangement: 'face-plate',
       plate: { N: '18 in', B: '12 in', thickness: '1 in', Fy: '36 ksi' },
-      anchors: { perSide: 2, diameter: '1 in', grade: 'F1554-36', offset: '7.5 in', gauge: '9 in', embedment },
+      anchors: {
+        perSide: 2,
+        diameter: '1 in',
+        grade: 'F1554-36',
+        offset: '7.5 in',
+        gauge: '9 in',
+        embedment,
+      },
       concrete: { fc: '4000 psi', cracked: true },
       pier: { length: '36 in', width: pierWidth },
     },
@@ -127,7 +142,11 @@ describe('face plate, LRFD, a wide wall face: top row breakout with one near edg
   });
 
   it('interaction 17.8 [mem]: (N + V)/1.2 with N the worst tension ratio', () => {
-    const n = Math.max(...['anchors.steelTension', 'anchors.concreteBreakout', 'anchors.pullout'].map((id) => check(r, id).ratio!));
+    const n = Math.max(
+      ...['anchors.steelTension', 'anchors.concreteBreakout', 'anchors.pullout'].map(
+        (id) => check(r, id).ratio!,
+      ),
+    );
     const v = check(r, 'anchors.shear').ratio!;
     expect(n).toBeGreaterThan(0.2);
     expect(v).toBeGreaterThan(0.2);
@@ -223,11 +242,31 @@ describe('the same design written in SI gives the same physical answers', () => 
     units: 'SI',
     method: 'LRFD',
     member: { length: '2.4384 m', spacing: '1.2192 m', section: { shape: 'W12X26' } },
-    loads: { selfWeight: false, area: [], line: [{ case: 'D', value: kipPerFt(0.3) }, { case: 'L', value: kipPerFt(0.4) }], point: [] },
+    loads: {
+      selfWeight: false,
+      area: [],
+      line: [
+        { case: 'D', value: kipPerFt(0.3) },
+        { case: 'L', value: kipPerFt(0.4) },
+      ],
+      point: [],
+    },
     connection: {
       arrangement: 'face-plate',
-      plate: { N: '457.2 mm', B: '304.8 mm', thickness: '25.4 mm', Fy: `${(36 * 6.894757293168).toPrecision(15)} MPa` },
-      anchors: { perSide: 2, diameter: '25.4 mm', grade: 'F1554-36', offset: '190.5 mm', gauge: '228.6 mm', embedment: '304.8 mm' },
+      plate: {
+        N: '457.2 mm',
+        B: '304.8 mm',
+        thickness: '25.4 mm',
+        Fy: `${(36 * 6.894757293168).toPrecision(15)} MPa`,
+      },
+      anchors: {
+        perSide: 2,
+        diameter: '25.4 mm',
+        grade: 'F1554-36',
+        offset: '190.5 mm',
+        gauge: '228.6 mm',
+        embedment: '304.8 mm',
+      },
       concrete: { fc: `${(4 * 6.894757293168).toPrecision(15)} MPa`, cracked: true },
       pier: { length: '914.4 mm', width: '1219.2 mm' },
     },
@@ -249,18 +288,39 @@ describe('the same design written in SI gives the same physical answers', () => 
     const mSI = met.member.combinations[1].rootMoment;
     expect(mSI.unit).toBe('kN m');
     expect(rel(mSI.value, convert(mUS.value, 'kip ft', 'kN m'))).toBeLessThan(1e-8);
-    expect(rel(met.member.cases.L!.tipDeflection.value, us.member.cases.L!.tipDeflection.value * 25.4)).toBeLessThan(1e-8);
-    expect(rel(check(met, 'plate.thickness').demand!.value, check(us, 'plate.thickness').demand!.value * 25.4)).toBeLessThan(1e-8);
+    expect(
+      rel(met.member.cases.L!.tipDeflection.value, us.member.cases.L!.tipDeflection.value * 25.4),
+    ).toBeLessThan(1e-8);
+    expect(
+      rel(check(met, 'plate.thickness').demand!.value, check(us, 'plate.thickness').demand!.value * 25.4),
+    ).toBeLessThan(1e-8);
   });
 });
 
 describe('post-base plate, LRFD, end to end: DG1 large moment with compression, narrow-member breakout', () => {
   const r = run({
-    ...memberDoc({ loads: { selfWeight: false, area: [], line: [{ case: 'D', value: '0.3 kip/ft' }, { case: 'L', value: '0.4 kip/ft' }], point: [] } }),
+    ...memberDoc({
+      loads: {
+        selfWeight: false,
+        area: [],
+        line: [
+          { case: 'D', value: '0.3 kip/ft' },
+          { case: 'L', value: '0.4 kip/ft' },
+        ],
+        point: [],
+      },
+    }),
     connection: {
       arrangement: 'post-base',
       plate: { N: '20 in', B: '14 in', thickness: '1.25 in', Fy: '36 ksi' },
-      anchors: { perSide: 2, diameter: '1 in', grade: 'F1554-36', offset: '8.5 in', gauge: '10 in', embedment: '12 in' },
+      anchors: {
+        perSide: 2,
+        diameter: '1 in',
+        grade: 'F1554-36',
+        offset: '8.5 in',
+        gauge: '10 in',
+        embedment: '12 in',
+      },
       concrete: { fc: '4000 psi', cracked: true },
       pier: { length: '36 in', width: '36 in' },
     },
@@ -313,7 +373,11 @@ describe('post-base plate, LRFD, end to end: DG1 large moment with compression, 
     const v = check(r, 'anchors.shear');
     expect(v.ratio).toBe(0);
     expect(v.reference).toMatch(/friction/);
-    const n = Math.max(...['anchors.steelTension', 'anchors.concreteBreakout', 'anchors.pullout'].map((id) => check(r, id).ratio!));
+    const n = Math.max(
+      ...['anchors.steelTension', 'anchors.concreteBreakout', 'anchors.pullout'].map(
+        (id) => check(r, id).ratio!,
+      ),
+    );
     expect(check(r, 'anchors.interaction').ratio).toBe(n);
   });
 });

@@ -40,7 +40,8 @@ function f2(p: ReturnType<typeof byHand>, Lb: number): number {
   const Mp = Fy * p.Zx; // F2-1
   const Lp = 1.76 * p.ry * Math.sqrt(E / Fy); // F2-5
   const jc = p.J / (p.Sx * p.ho);
-  const Lr = 1.95 * p.rts * (E / (0.7 * Fy)) * Math.sqrt(jc + Math.sqrt(jc ** 2 + 6.76 * ((0.7 * Fy) / E) ** 2)); // F2-6
+  const Lr =
+    1.95 * p.rts * (E / (0.7 * Fy)) * Math.sqrt(jc + Math.sqrt(jc ** 2 + 6.76 * ((0.7 * Fy) / E) ** 2)); // F2-6
   if (Lb <= Lp) return Mp;
   if (Lb <= Lr) return Math.min(Mp, Mp - (Mp - 0.7 * Fy * p.Sx) * ((Lb - Lp) / (Lr - Lp))); // F2-2
   const Fcr = ((Math.PI ** 2 * E) / (Lb / p.rts) ** 2) * Math.sqrt(1 + 0.078 * jc * (Lb / p.rts) ** 2); // F2-4
@@ -65,7 +66,8 @@ describe('W12X26 cut to a 6 in tip: stations recomputed from AISC 360-16 F2 and 
     it(`station x/L = ${u} (d = ${d.toFixed(3)} in): properties, Mn at Lb = 8 ft and 20 ft, and phi Vn`, () => {
       const hand = byHand(d);
       const p = section.at(u);
-      for (const k of ['A', 'Ix', 'Sx', 'Zx', 'Iy', 'J', 'rts', 'h'] as const) expect(rel(p[k], hand[k])).toBeLessThan(1e-9);
+      for (const k of ['A', 'Ix', 'Sx', 'Zx', 'Iy', 'J', 'rts', 'h'] as const)
+        expect(rel(p[k], hand[k])).toBeLessThan(1e-9);
       for (const Lb of [96, 240]) {
         expect(rel(flexuralStrength(section, p, { Fy, E, Lb }).nominal, f2(hand, Lb))).toBeLessThan(1e-9);
       }
@@ -79,7 +81,12 @@ describe('W12X26 cut to a 6 in tip: stations recomputed from AISC 360-16 F2 and 
 
   it('in a design, the flexure check reports phi Mn of the root section under a uniform load', () => {
     // 0.4 kip/ft live, 8 ft: 1.6L gives Mu = 1.6 x 0.4 x 8^2/2 = 20.48 kip-ft at the root (Table 3-23 [mem]).
-    const r = run(memberDoc({ section: { shape: 'W12X26', tipDepth: '6 in' }, loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '0.4 kip/ft' }], point: [] } }));
+    const r = run(
+      memberDoc({
+        section: { shape: 'W12X26', tipDepth: '6 in' },
+        loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '0.4 kip/ft' }], point: [] },
+      }),
+    );
     const f = check(r, 'member.flexure');
     expect(f.at!.value).toBe(0);
     expect(rel(f.demand!.value, 20.48)).toBeLessThan(1e-9);

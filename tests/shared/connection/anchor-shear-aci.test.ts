@@ -10,7 +10,10 @@ describe('shear breakout toward an edge, ACI 318-19 17.7.2 [mem], by hand', () =
   it('single 3/4 in rod, hef 6 in, ca1 4 in, no side edges, deep member', () => {
     // le = min(hef, 8 da) = 6 in. 7 (6/0.75)^0.2 sqrt(0.75) x 63.246 x 4^1.5 = 4,649 lb;
     // 9 x 63.246 x 4^1.5 = 4,554 lb -> Vb = 4,554 lb. AVc = AVco = 4.5 ca1^2 = 72 in^2.
-    const r = breakoutShear({ n: 1, ca1: 4, ca2: [100, 100], span: 0, spacing: 0, ha: undefined, da: 0.75, hef: 6 }, cracked);
+    const r = breakoutShear(
+      { n: 1, ca1: 4, ca2: [100, 100], span: 0, spacing: 0, ha: undefined, da: 0.75, hef: 6 },
+      cracked,
+    );
     expectWithin(r.Vb * 1000, 4554, 0.001);
     expectWithin(r.AVc, 72, 1e-12);
     expectWithin(r.Vcbg * 1000, 4554, 0.001);
@@ -20,7 +23,10 @@ describe('shear breakout toward an edge, ACI 318-19 17.7.2 [mem], by hand', () =
     // 1.5 ca1 = 7.5: width = 4 + 6 + 7.5 = 17.5; height = min(7.5, 6) = 6 -> AVc 105; AVco = 112.5.
     // psi_ed = 0.7 + 0.3 x 4/7.5 = 0.86; psi_h = sqrt(7.5/6) = 1.1180.
     // Vb = min(7 (8)^0.2 sqrt(0.75) r 5^1.5, 9 r 5^1.5) with r = 63.246: 9 x 63.246 x 11.180 = 6,364 lb.
-    const r = breakoutShear({ n: 2, ca1: 5, ca2: [4, 100], span: 6, spacing: 6, ha: 6, da: 0.75, hef: 6 }, cracked);
+    const r = breakoutShear(
+      { n: 2, ca1: 5, ca2: [4, 100], span: 6, spacing: 6, ha: 6, da: 0.75, hef: 6 },
+      cracked,
+    );
     expectWithin(r.AVc, 105, 1e-12);
     expectWithin(r.psiEd, 0.86, 1e-12);
     expectWithin(r.psiH, Math.sqrt(7.5 / 6), 1e-12);
@@ -29,8 +35,21 @@ describe('shear breakout toward an edge, ACI 318-19 17.7.2 [mem], by hand', () =
   });
 
   it('uncracked concrete: psi_c,V = 1.4', () => {
-    const g = { n: 1, ca1: 4, ca2: [100, 100] as [number, number], span: 0, spacing: 0, ha: undefined, da: 0.75, hef: 6 };
-    expectWithin(breakoutShear(g, { ...cracked, cracked: false }).Vcbg, 1.4 * breakoutShear(g, cracked).Vcbg, 1e-12);
+    const g = {
+      n: 1,
+      ca1: 4,
+      ca2: [100, 100] as [number, number],
+      span: 0,
+      spacing: 0,
+      ha: undefined,
+      da: 0.75,
+      hef: 6,
+    };
+    expectWithin(
+      breakoutShear(g, { ...cracked, cracked: false }).Vcbg,
+      1.4 * breakoutShear(g, cracked).Vcbg,
+      1e-12,
+    );
   });
 
   it('pryout: kcp 2 for hef >= 2.5 in, 1 below (17.7.3.1)', () => {

@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { availableBearingStress, confinementFactor, solveBearing } from '../../../shared/engine/connection/bearing';
-import { nextStandardThickness, plateCantilevers, requiredThickness } from '../../../shared/engine/connection/plate-thickness';
+import {
+  availableBearingStress,
+  confinementFactor,
+  solveBearing,
+} from '../../../shared/engine/connection/bearing';
+import {
+  nextStandardThickness,
+  plateCantilevers,
+  requiredThickness,
+} from '../../../shared/engine/connection/plate-thickness';
 import { resolveFootprint } from '../../../shared/engine/connection/footprint';
 import { findShape } from '../../../shared/engine/shapes/table';
 import { W12X26_ROOT, expectWithin } from './connection-fixtures';

@@ -1,8 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { checkConnection } from '../../../shared/engine/connection/check-connection';
-import { availableBearingStress, confinementFactor, solveBearing } from '../../../shared/engine/connection/bearing';
+import {
+  availableBearingStress,
+  confinementFactor,
+  solveBearing,
+} from '../../../shared/engine/connection/bearing';
 import type { Check } from '../../../shared/engine/types';
-import { ASD_US, DEMANDS, LRFD_US, W12X26_ROOT, connection, expectWithin, numbersIn } from './connection-fixtures';
+import {
+  ASD_US,
+  DEMANDS,
+  LRFD_US,
+  W12X26_ROOT,
+  connection,
+  expectWithin,
+  numbersIn,
+} from './connection-fixtures';
 
 function byId(checks: Check[], id: string): Check {
   const c = checks.find((x) => x.id === id);
@@ -84,13 +96,27 @@ describe('checkConnection, face plate on a pier face', () => {
 
 describe('checkConnection fails loudly on impossible geometry', () => {
   it('a plate too small for the moment: no real bearing length, nothing downstream passes', () => {
-    const input = connection({ plate: { N: '14 in', B: '8 in' }, anchors: { offset: '5 in', gauge: '5 in' } });
-    const { result, checks } = checkConnection(input, [{ combination: 'big', M: 4000, V: 1, H: 0 }], W12X26_ROOT, LRFD_US);
+    const input = connection({
+      plate: { N: '14 in', B: '8 in' },
+      anchors: { offset: '5 in', gauge: '5 in' },
+    });
+    const { result, checks } = checkConnection(
+      input,
+      [{ combination: 'big', M: 4000, V: 1, H: 0 }],
+      W12X26_ROOT,
+      LRFD_US,
+    );
     const bearing = byId(checks, 'plate.bearing');
     expect(bearing.ok).toBe(false);
     expect(bearing.ratio).toBeGreaterThan(1);
     expect(bearing.note).toMatch(/No real bearing length.*longer plate/);
-    for (const id of ['plate.thickness', 'anchors.steelTension', 'anchors.concreteBreakout', 'anchors.pullout', 'anchors.interaction']) {
+    for (const id of [
+      'plate.thickness',
+      'anchors.steelTension',
+      'anchors.concreteBreakout',
+      'anchors.pullout',
+      'anchors.interaction',
+    ]) {
       const c = byId(checks, id);
       expect(c.ok, id).toBe(false);
       expect(c.ratio, id).toBeNull();
@@ -100,22 +126,35 @@ describe('checkConnection fails loudly on impossible geometry', () => {
   });
 
   it('rods beyond the plate edge fail the layout with the reason and a fix', () => {
-    const { checks } = checkConnection(connection({ anchors: { offset: '11 in' } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection({ anchors: { offset: '11 in' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     const layout = byId(checks, 'anchors.layout');
     expect(layout.ok).toBe(false);
     expect(layout.ratio).toBeNull();
     expect(layout.note).toMatch(/Rod centre to plate edge along N.*longer plate/);
   });
 
-  it('writes the layout note in the person\'s units', () => {
-    const { checks } = checkConnection(connection({ anchors: { offset: '9.5 in' } }), DEMANDS, W12X26_ROOT, { ...LRFD_US, units: 'SI' });
+  it("writes the layout note in the person's units", () => {
+    const { checks } = checkConnection(connection({ anchors: { offset: '9.5 in' } }), DEMANDS, W12X26_ROOT, {
+      ...LRFD_US,
+      units: 'SI',
+    });
     // Rod centre to plate edge: has 0.5 in = 12.7 mm (mathjs conversion); needs 1.5 in = 38.1 mm (1 in rod).
     expect(byId(checks, 'anchors.layout').note).toMatch(/needs 38\.1 mm, has 12\.7 mm/);
   });
 
   it('rods outside the pier: the concrete checks are not computed and fail', () => {
     // A face plate, so that the shear goes to the rods (a post-base plate would use friction).
-    const input = connection({ arrangement: 'face-plate', plate: { N: '30 in' }, anchors: { offset: '13 in' }, pier: { length: '24 in' } });
+    const input = connection({
+      arrangement: 'face-plate',
+      plate: { N: '30 in' },
+      anchors: { offset: '13 in' },
+      pier: { length: '24 in' },
+    });
     const { checks } = checkConnection(input, DEMANDS, W12X26_ROOT, LRFD_US);
     expect(byId(checks, 'plate.geometry').ok).toBe(false);
     for (const id of ['anchors.concreteBreakout', 'anchors.shear']) {
@@ -125,27 +164,52 @@ describe('checkConnection fails loudly on impossible geometry', () => {
   });
 
   it('a rod size outside DG1 Table 2.3 is refused, not guessed', () => {
-    const { checks } = checkConnection(connection({ anchors: { diameter: '1-1/8 in' } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection({ anchors: { diameter: '1-1/8 in' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     expect(byId(checks, 'anchors.layout').note).toMatch(/Table 2\.3/);
     expect(byId(checks, 'anchors.steelTension').ok).toBe(false);
   });
 
   it('an unknown footprint shape fails the plate geometry and the thickness', () => {
-    const { checks } = checkConnection(connection({ footprint: { shape: 'W99X1' } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection({ footprint: { shape: 'W99X1' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     expect(byId(checks, 'plate.geometry').note).toMatch(/W99X1/);
     expect(byId(checks, 'plate.thickness').ok).toBe(false);
   });
 
   it('rods too close together when torqued (6 da, ACI 318-19 17.9.2 from memory) but fine untorqued (4 da)', () => {
-    const loose = checkConnection(connection({ anchors: { gauge: '5.5 in' } }), DEMANDS, W12X26_ROOT, LRFD_US);
-    const tight = checkConnection(connection({ anchors: { gauge: '5.5 in', torqued: true } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const loose = checkConnection(
+      connection({ anchors: { gauge: '5.5 in' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
+    const tight = checkConnection(
+      connection({ anchors: { gauge: '5.5 in', torqued: true } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     expect(byId(loose.checks, 'anchors.layout').ok).toBe(true);
     expect(byId(tight.checks, 'anchors.layout').ok).toBe(false);
     expect(byId(tight.checks, 'anchors.layout').note).toMatch(/Rod spacing in a row/);
   });
 
   it('an embedment deeper than the pier is a failed layout', () => {
-    const { checks } = checkConnection(connection({ pier: { depth: '12 in' } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection({ pier: { depth: '12 in' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     expect(byId(checks, 'anchors.layout').note).toMatch(/Pier depth/);
   });
 
@@ -159,29 +223,57 @@ describe('checkConnection fails loudly on impossible geometry', () => {
 describe('checkConnection options', () => {
   it('emits side-face blowout when the rods are deep and near an edge (hef > 2.5 ca1)', () => {
     // Pier 24 in long: 4 in from the tension row to the edge; hef 12 > 2.5 x 4.
-    const { checks } = checkConnection(connection({ pier: { length: '24 in' } }), DEMANDS, W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection({ pier: { length: '24 in' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    );
     const b = byId(checks, 'anchors.sideFaceBlowout');
     expect(b.ratio).not.toBeNull();
     expect(b.note).toMatch(/hef > 2\.5 ca1/);
   });
 
   it('supplementary reinforcement raises breakout by 0.75/0.70 (ACI 318-19 Table 17.5.3, condition A)', () => {
-    const b = byId(checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks, 'anchors.concreteBreakout');
-    const a = byId(checkConnection(connection({ anchors: { supplementaryReinforcement: true } }), DEMANDS, W12X26_ROOT, LRFD_US).checks, 'anchors.concreteBreakout');
+    const b = byId(
+      checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks,
+      'anchors.concreteBreakout',
+    );
+    const a = byId(
+      checkConnection(
+        connection({ anchors: { supplementaryReinforcement: true } }),
+        DEMANDS,
+        W12X26_ROOT,
+        LRFD_US,
+      ).checks,
+      'anchors.concreteBreakout',
+    );
     expectWithin(a.capacity?.value, ((b.capacity?.value as number) * 0.75) / 0.7, 1e-12);
   });
 
   it('lightweight concrete scales breakout by lambda (ACI 318-19 17.2.4)', () => {
-    const nw = byId(checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks, 'anchors.concreteBreakout');
-    const lw = byId(checkConnection(connection({ concrete: { lambda: 0.75 } }), DEMANDS, W12X26_ROOT, LRFD_US).checks, 'anchors.concreteBreakout');
+    const nw = byId(
+      checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks,
+      'anchors.concreteBreakout',
+    );
+    const lw = byId(
+      checkConnection(connection({ concrete: { lambda: 0.75 } }), DEMANDS, W12X26_ROOT, LRFD_US).checks,
+      'anchors.concreteBreakout',
+    );
     expectWithin(lw.capacity?.value, 0.75 * (nw.capacity?.value as number), 1e-12);
   });
 
   it('ASD: AISC rod tension Rn/2.00 against ACI phi Nsa/1.6, and the governing clause is named', () => {
     // 1 in Gr 36: AISC phi Rn = 0.5625 x 58 x 0.7854 = 25.62 kip < ACI 0.75 x 0.606 x 58 = 26.36 kip (LRFD);
     // ASD: AISC 17.08 kip > ACI 26.36/1.6 = 16.48 kip, so ACI governs [calc].
-    const lrfd = byId(checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks, 'anchors.steelTension');
-    const asd = byId(checkConnection(connection(), DEMANDS, W12X26_ROOT, ASD_US).checks, 'anchors.steelTension');
+    const lrfd = byId(
+      checkConnection(connection(), DEMANDS, W12X26_ROOT, LRFD_US).checks,
+      'anchors.steelTension',
+    );
+    const asd = byId(
+      checkConnection(connection(), DEMANDS, W12X26_ROOT, ASD_US).checks,
+      'anchors.steelTension',
+    );
     expectWithin(lrfd.capacity?.value, 25.62, 0.001);
     expect(lrfd.reference).toMatch(/^AISC 360-16 J3\.6 \(governs\)/);
     expectWithin(asd.capacity?.value, 16.48, 0.002);
@@ -206,15 +298,30 @@ describe('checkConnection options', () => {
   });
 
   it('an HSS footprint uses 0.95 of its width for n, a pipe 0.8 of its diameter both ways (DG1 3.1 [mem])', () => {
-    const hss = checkConnection(connection({ footprint: { shape: 'HSS8X8X1/2' } }), DEMANDS, W12X26_ROOT, LRFD_US).result;
+    const hss = checkConnection(
+      connection({ footprint: { shape: 'HSS8X8X1/2' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    ).result;
     expectWithin((hss?.n as { value: number }).value, (16 - 0.95 * 8) / 2, 1e-12);
-    const pipe = checkConnection(connection({ footprint: { shape: 'Pipe6STD' } }), DEMANDS, W12X26_ROOT, LRFD_US).result;
+    const pipe = checkConnection(
+      connection({ footprint: { shape: 'Pipe6STD' } }),
+      DEMANDS,
+      W12X26_ROOT,
+      LRFD_US,
+    ).result;
     expectWithin((pipe?.m as { value: number }).value, (20 - 0.8 * 6.625) / 2, 1e-12);
     expectWithin((pipe?.n as { value: number }).value, (16 - 0.8 * 6.625) / 2, 1e-12);
   });
 
   it('a horizontal force beyond friction goes to the rods in shear', () => {
-    const { checks } = checkConnection(connection(), [{ combination: 'push', M: 200, V: 2, H: 5 }], W12X26_ROOT, LRFD_US);
+    const { checks } = checkConnection(
+      connection(),
+      [{ combination: 'push', M: 200, V: 2, H: 5 }],
+      W12X26_ROOT,
+      LRFD_US,
+    );
     const shear = byId(checks, 'anchors.shear');
     expect(shear.reference).toMatch(/ACI 318-19 17\.7/);
     expectWithin(shear.demand?.value, 5, 1e-12);

@@ -21,7 +21,14 @@ export function connection(over: DeepPartial<ConnectionInput> = {}): ConnectionI
   const base = {
     arrangement: 'post-base',
     plate: { N: '20 in', B: '16 in', thickness: '1.5 in', Fy: '36 ksi' },
-    anchors: { perSide: 2, diameter: '1 in', grade: 'F1554-36', offset: '8 in', gauge: '10 in', embedment: '12 in' },
+    anchors: {
+      perSide: 2,
+      diameter: '1 in',
+      grade: 'F1554-36',
+      offset: '8 in',
+      gauge: '10 in',
+      embedment: '12 in',
+    },
     concrete: { fc: '4000 psi', cracked: true },
     pier: { length: '36 in', width: '36 in' },
   };

@@ -49,7 +49,11 @@ function toInput(a: Arb, t = a.t): ConnectionInput {
       supplementaryReinforcement: a.supp,
     },
     concrete: { fc: `${a.fc} psi`, cracked: a.cracked, lambda: a.lambda },
-    pier: { length: `${a.pierL} in`, width: `${a.pierW} in`, depth: a.pierD === undefined ? undefined : `${a.pierD} in` },
+    pier: {
+      length: `${a.pierL} in`,
+      width: `${a.pierW} in`,
+      depth: a.pierD === undefined ? undefined : `${a.pierD} in`,
+    },
   };
 }
 
@@ -63,10 +67,12 @@ const demandArb = fc.array(
   { minLength: 1, maxLength: 3 },
 ) as fc.Arbitrary<RootDemand[]>;
 
-const ctxArb = fc.record({
-  units: fc.constantFrom('US', 'SI'),
-  method: fc.constantFrom('LRFD', 'ASD'),
-}).map((c) => ({ ...c, shapes: findShape }) as ConnectionContext);
+const ctxArb = fc
+  .record({
+    units: fc.constantFrom('US', 'SI'),
+    method: fc.constantFrom('LRFD', 'ASD'),
+  })
+  .map((c) => ({ ...c, shapes: findShape }) as ConnectionContext);
 
 describe('connection properties (fast-check)', () => {
   it('never returns NaN or Infinity, never passes an uncomputed check, never a negative rod tension', () => {
@@ -87,8 +93,11 @@ describe('connection properties (fast-check)', () => {
   it('the DG1 bearing block never gives a negative tension, for pushes and pulls', () => {
     fc.assert(
       fc.property(
-        len(6, 40), len(6, 30), len(0.5, 20),
-        fc.double({ min: -100, max: 800, noNaN: true }), fc.double({ min: 0, max: 8000, noNaN: true }),
+        len(6, 40),
+        len(6, 30),
+        len(0.5, 20),
+        fc.double({ min: -100, max: 800, noNaN: true }),
+        fc.double({ min: 0, max: 8000, noNaN: true }),
         (N, B, f, P, M) => {
           const s = solveBearing({ N, B, f, P, M, fpMax: 2.21 });
           if (s.T !== null) expect(s.T).toBeGreaterThanOrEqual(0);
@@ -103,8 +112,16 @@ describe('connection properties (fast-check)', () => {
   it('a thicker plate never needs more: the requirement does not depend on t, and the ratio falls', () => {
     fc.assert(
       fc.property(inputArb, demandArb, len(0.25, 2), (a, demands, extra) => {
-        const thin = checkConnection(toInput(a), demands, W12X26_ROOT, { units: 'US', method: 'LRFD', shapes: findShape });
-        const thick = checkConnection(toInput(a, a.t + extra), demands, W12X26_ROOT, { units: 'US', method: 'LRFD', shapes: findShape });
+        const thin = checkConnection(toInput(a), demands, W12X26_ROOT, {
+          units: 'US',
+          method: 'LRFD',
+          shapes: findShape,
+        });
+        const thick = checkConnection(toInput(a, a.t + extra), demands, W12X26_ROOT, {
+          units: 'US',
+          method: 'LRFD',
+          shapes: findShape,
+        });
         const t1 = thin.checks.find((c) => c.id === 'plate.thickness');
         const t2 = thick.checks.find((c) => c.id === 'plate.thickness');
         expect(t2?.demand?.value).toBe(t1?.demand?.value);
@@ -116,7 +133,10 @@ describe('connection properties (fast-check)', () => {
 
   const conc = { fc: 4, lambdaA: 1, cracked: true };
   const deeperArb = fc.tuple(
-    len(2, 25), len(0, 10), fc.integer({ min: 1, max: 4 }), len(0, 12),
+    len(2, 25),
+    len(0, 10),
+    fc.integer({ min: 1, max: 4 }),
+    len(0, 12),
     fc.tuple(len(1, 40), len(1, 40), len(1, 40), len(1, 40)),
   );
   function deeper([h1, dh, n, s, edges]: [number, number, number, number, [number, number, number, number]]) {
@@ -151,11 +171,18 @@ describe('connection properties (fast-check)', () => {
     );
   });
 
-  it('when a fourth edge starts to count, the narrow-member hef\' jumps up and breakout falls a lot', () => {
+  it("when a fourth edge starts to count, the narrow-member hef' jumps up and breakout falls a lot", () => {
     // Three rods 9.375 in apart; edges 4.38, 3.91, 3.69, 13.60 in. hef 8.71: three edges within 13.07 in ->
     // hef' = max(4.38/1.5, 9.375/3) = 3.125 in. hef 11.47: all four within 17.2 in -> ca,max = 13.60 ->
     // hef' = 9.07 in, and ANc/ANco psi_ed Nb drops to about 0.65 of the shallower value [calc, ACI 318-19 17.6.2.1.2].
-    const group = { n: 3, spanX: 0, spanY: 18.75, spacing: 9.375, edges: [4.38, 3.91, 3.69, 13.6] as [number, number, number, number], hef: 8.71 };
+    const group = {
+      n: 3,
+      spanX: 0,
+      spanY: 18.75,
+      spacing: 9.375,
+      edges: [4.38, 3.91, 3.69, 13.6] as [number, number, number, number],
+      hef: 8.71,
+    };
     const a = breakoutTension(group, conc);
     const b = breakoutTension({ ...group, hef: 11.47 }, conc);
     expectWithin(a.hefUsed, 3.125, 1e-9);
@@ -177,12 +204,19 @@ describe('connection properties (fast-check)', () => {
     expect(b.Ncbg / a.Ncbg).toBeGreaterThan(0.999);
   });
 
-  it('with all four edges inside the cone and hef\' = s/3 >= hef, the expressions fall as hef grows (found by the property above)', () => {
+  it("with all four edges inside the cone and hef' = s/3 >= hef, the expressions fall as hef grows (found by the property above)", () => {
     // Two rods 6.1875 in apart, 1 in from every edge: ANc = (1 + 1) x (6.1875 + 2) = 16.375 in^2 at both depths,
     // while ANco = 9 hef^2 grows faster than Nb ~ hef^1.5 (17.6.2.1, [calc]). The narrow-member limit
     // max(ca,max/1.5, s/3) = 2.0625 in is not below hef, so it does not step in.
     const conc = { fc: 4, lambdaA: 1, cracked: true };
-    const group = { n: 2, spanX: 0, spanY: 6.1875, spacing: 6.1875, edges: [1, 1, 1, 1] as [number, number, number, number], hef: 2 };
+    const group = {
+      n: 2,
+      spanX: 0,
+      spanY: 6.1875,
+      spacing: 6.1875,
+      edges: [1, 1, 1, 1] as [number, number, number, number],
+      hef: 2,
+    };
     const a = breakoutTension(group, conc);
     const b = breakoutTension({ ...group, hef: 2.0625 }, conc);
     expect(a.ANc).toBe(b.ANc);
@@ -194,7 +228,14 @@ describe('connection properties (fast-check)', () => {
     // Two rods 3.5 in apart, 1.125 in from two opposite edges, 3.125 in from the others; hef 2 -> 2.0625 in.
     // Only two edges are near, so 17.6.2.1.2 does not apply; the value falls by about 5e-5 [calc].
     const conc = { fc: 4, lambdaA: 1, cracked: true };
-    const group = { n: 2, spanX: 0, spanY: 3.5, spacing: 3.5, edges: [1.125, 1.125, 3.125, 3.125] as [number, number, number, number], hef: 2 };
+    const group = {
+      n: 2,
+      spanX: 0,
+      spanY: 3.5,
+      spacing: 3.5,
+      edges: [1.125, 1.125, 3.125, 3.125] as [number, number, number, number],
+      hef: 2,
+    };
     const a = breakoutTension(group, conc);
     const b = breakoutTension({ ...group, hef: 2.0625 }, conc);
     expect(a.nearEdges).toBe(2);

@@ -1,8 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { checkConnection } from '../../../shared/engine/connection/check-connection';
 import { inchFraction } from '../../../shared/engine/connection/inch-fraction';
-import { bearingZone, bearingZoneFromResult, plateLayout } from '../../../shared/engine/connection/plate-layout';
-import { csvField, plateScheduleCsv, plateScheduleRow } from '../../../shared/engine/connection/plate-schedule';
+import {
+  bearingZone,
+  bearingZoneFromResult,
+  plateLayout,
+} from '../../../shared/engine/connection/plate-layout';
+import {
+  csvField,
+  plateScheduleCsv,
+  plateScheduleRow,
+} from '../../../shared/engine/connection/plate-schedule';
 import { ROD_SIZES, rodSize } from '../../../shared/engine/connection/rod-data';
 import { rodEdgeMinimum } from '../../../shared/engine/connection/rod-positions';
 import { findShape } from '../../../shared/engine/shapes/table';
@@ -10,7 +18,11 @@ import { DEMANDS, LRFD_US, W12X26_ROOT, connection, expectWithin } from './conne
 
 describe('AISC Design Guide 1 (2nd ed.) Table 2.3 holes and plate washers [pub, via REFERENCES.md]', () => {
   it('lists each rod size with its hole and washer', () => {
-    const rows = ROD_SIZES.map((r) => [inchFraction(r.diameter), inchFraction(r.hole), `${inchFraction(r.washerSize)} x ${inchFraction(r.washerThickness)}`]);
+    const rows = ROD_SIZES.map((r) => [
+      inchFraction(r.diameter),
+      inchFraction(r.hole),
+      `${inchFraction(r.washerSize)} x ${inchFraction(r.washerThickness)}`,
+    ]);
     expect(rows).toEqual([
       ['3/4', '1-5/16', '2 x 1/4'],
       ['7/8', '1-9/16', '2-1/2 x 5/16'],
@@ -62,10 +74,18 @@ describe('plateLayout', () => {
   });
 
   it('draws an HSS as a tube and a pipe as two circles', () => {
-    const hss = plateLayout(connection({ footprint: { shape: 'HSS8X8X1/2' } }), W12X26_ROOT, findShape).footprint;
+    const hss = plateLayout(
+      connection({ footprint: { shape: 'HSS8X8X1/2' } }),
+      W12X26_ROOT,
+      findShape,
+    ).footprint;
     expect(hss.kind).toBe('box');
     if (hss.kind === 'box') expectWithin(hss.inner.x1, 4 - 0.465, 1e-12);
-    const pipe = plateLayout(connection({ footprint: { shape: 'Pipe6STD' } }), W12X26_ROOT, findShape).footprint;
+    const pipe = plateLayout(
+      connection({ footprint: { shape: 'Pipe6STD' } }),
+      W12X26_ROOT,
+      findShape,
+    ).footprint;
     expect(pipe).toMatchObject({ kind: 'round', outerRadius: 6.625 / 2 });
   });
 
@@ -99,7 +119,10 @@ describe('plate schedule CSV (RFC 4180)', () => {
     expect(csvField('a,b')).toBe('"a,b"');
     expect(csvField('say "hi"')).toBe('"say ""hi"""');
     expect(csvField('two\nlines')).toBe('"two\nlines"');
-    const csv = plateScheduleCsv([plateScheduleRow('North, "typ."', input, result), plateScheduleRow('BP-2', input, null)]);
+    const csv = plateScheduleCsv([
+      plateScheduleRow('North, "typ."', input, result),
+      plateScheduleRow('BP-2', input, null),
+    ]);
     const lines = csv.split('\r\n');
     expect(lines).toHaveLength(4); // header, two rows, and the empty string after the final CRLF
     expect(lines[3]).toBe('');

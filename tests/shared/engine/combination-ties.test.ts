@@ -10,7 +10,14 @@ describe('physically tied combinations', () => {
     // ASCE 7-16 2.4.1 (from memory): D + L and D + 0.75L + 0.75S give the same load when L = 3S.
     const doc = designSchema.parse({
       ...exampleDesign,
-      loads: { ...exampleDesign.loads, area: [{ case: 'D', value: '15 psf' }, { case: 'L', value: '75 psf' }, { case: 'S', value: '25 psf' }] },
+      loads: {
+        ...exampleDesign.loads,
+        area: [
+          { case: 'D', value: '15 psf' },
+          { case: 'L', value: '75 psf' },
+          { case: 'S', value: '25 psf' },
+        ],
+      },
     });
     const total = evaluateDesign(doc).checks.find((c) => c.id === 'member.deflection.total');
     expect(total?.combination).toBe('D + L');
@@ -19,7 +26,14 @@ describe('physically tied combinations', () => {
   it('lets a later combination govern once it is larger by more than rounding noise', () => {
     const doc = designSchema.parse({
       ...exampleDesign,
-      loads: { ...exampleDesign.loads, area: [{ case: 'D', value: '15 psf' }, { case: 'L', value: '75 psf' }, { case: 'S', value: '26 psf' }] },
+      loads: {
+        ...exampleDesign.loads,
+        area: [
+          { case: 'D', value: '15 psf' },
+          { case: 'L', value: '75 psf' },
+          { case: 'S', value: '26 psf' },
+        ],
+      },
     });
     const total = evaluateDesign(doc).checks.find((c) => c.id === 'member.deflection.total');
     expect(total?.combination).toBe('D + 0.75L + 0.75S');

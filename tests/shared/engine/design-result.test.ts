@@ -3,7 +3,13 @@ import { exampleDesign, exampleMemberOnly, exampleTapered } from '../../../share
 import { CAUTION, ENGINE_VERSION } from '../../../shared/engine/types';
 import { check, memberDoc, rel, run } from './design-helpers';
 
-const MEMBER_IDS = ['member.flexure', 'member.shear', 'member.deflection.live', 'member.deflection.total', 'member.vibration'];
+const MEMBER_IDS = [
+  'member.flexure',
+  'member.shear',
+  'member.deflection.live',
+  'member.deflection.total',
+  'member.vibration',
+];
 
 describe('the result document', () => {
   it('carries the caution, the engine version and every member check, ok = every check ok', () => {
@@ -29,12 +35,22 @@ describe('the result document', () => {
 
   it('reports the steel used: the family default (REFERENCES.md material defaults [mem]) unless given', () => {
     const w = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [] } }));
-    expect(w.member.steel).toEqual({ grade: 'ASTM A992', Fy: { value: 50, unit: 'ksi' }, E: { value: 29000, unit: 'ksi' } });
-    const pipe = run(memberDoc({ shape: 'Pipe6STD', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    expect(w.member.steel).toEqual({
+      grade: 'ASTM A992',
+      Fy: { value: 50, unit: 'ksi' },
+      E: { value: 29000, unit: 'ksi' },
+    });
+    const pipe = run(
+      memberDoc({ shape: 'Pipe6STD', loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     expect(pipe.member.steel!.Fy.value).toBe(35);
-    const c = run(memberDoc({ shape: 'C10X15.3', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const c = run(
+      memberDoc({ shape: 'C10X15.3', loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     expect(c.member.steel!.Fy.value).toBe(36);
-    const given = run(memberDoc({ steel: { Fy: '345 MPa' }, loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const given = run(
+      memberDoc({ steel: { Fy: '345 MPa' }, loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     expect(given.member.steel!.Fy.value).toBeCloseTo(50.04, 2);
   });
 
@@ -45,33 +61,55 @@ describe('the result document', () => {
   });
 
   it('a frequency below the stated minimum fails member.vibration', () => {
-    const r = run(memberDoc({ frequencyMin: '70 Hz', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const r = run(
+      memberDoc({ frequencyMin: '70 Hz', loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     const v = check(r, 'member.vibration');
     expect(v.ok).toBe(false);
     expect(v.ratio).toBeCloseTo(70 / r.member.frequency.value, 10);
   });
 
   it('SI results are the same design in kN, m, mm: W12X26 8 ft under 0.4 kip/ft live load', () => {
-    const doc = memberDoc({ loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '0.4 kip/ft' }], point: [] } });
+    const doc = memberDoc({
+      loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '0.4 kip/ft' }], point: [] },
+    });
     const us = run(doc);
     const si = run({ ...doc, units: 'SI' });
     // 1 kip ft = 1.355818 kN m, 1 kip = 4.448222 kN, 1 in = 25.4 mm (exact definitions).
     expect(si.member.cases.L!.rootMoment.unit).toBe('kN m');
-    expect(rel(si.member.cases.L!.rootMoment.value, us.member.cases.L!.rootMoment.value * 1.3558179)).toBeLessThan(1e-6);
-    expect(rel(si.member.cases.L!.rootShear.value, us.member.cases.L!.rootShear.value * 4.4482216)).toBeLessThan(1e-6);
+    expect(
+      rel(si.member.cases.L!.rootMoment.value, us.member.cases.L!.rootMoment.value * 1.3558179),
+    ).toBeLessThan(1e-6);
+    expect(
+      rel(si.member.cases.L!.rootShear.value, us.member.cases.L!.rootShear.value * 4.4482216),
+    ).toBeLessThan(1e-6);
     expect(si.member.cases.L!.tipDeflection.unit).toBe('mm');
-    expect(rel(si.member.cases.L!.tipDeflection.value, us.member.cases.L!.tipDeflection.value * 25.4)).toBeLessThan(1e-9);
+    expect(
+      rel(si.member.cases.L!.tipDeflection.value, us.member.cases.L!.tipDeflection.value * 25.4),
+    ).toBeLessThan(1e-9);
     const tapered = run({ ...exampleTapered, units: 'SI' });
     expect(tapered.member.section.label).toBe('W10X19 tapered to 152 mm');
     expect(run(exampleTapered).member.section.label).toBe('W10X19 tapered to 6 in');
   });
 
   it('ASD lists the ASCE 7-16 2.4.1 combinations, LRFD the 2.3.1 ones, named as ASCE 7 writes them', () => {
-    const loads = { selfWeight: true, area: [{ case: 'L' as const, value: '60 psf' }, { case: 'S' as const, value: '30 psf' }], line: [], point: [] };
+    const loads = {
+      selfWeight: true,
+      area: [
+        { case: 'L' as const, value: '60 psf' },
+        { case: 'S' as const, value: '30 psf' },
+      ],
+      line: [],
+      point: [],
+    };
     const r = run(memberDoc({ method: 'ASD', loads }));
     expect(r.member.combinations.map((c) => c.name)).toEqual(['D', 'D + L', 'D + S', 'D + 0.75L + 0.75S']);
     const lrfd = run(memberDoc({ loads }));
-    expect(lrfd.member.combinations.map((c) => c.name)).toEqual(['1.4D', '1.2D + 1.6L + 0.5S', '1.2D + 1.6S + L']);
+    expect(lrfd.member.combinations.map((c) => c.name)).toEqual([
+      '1.4D',
+      '1.2D + 1.6L + 0.5S',
+      '1.2D + 1.6S + L',
+    ]);
   });
 
   it('stations: display units, a series per case and per combination, depth along x', () => {
@@ -98,11 +136,15 @@ describe('checkDocument: schema and engine checks in one call', () => {
     const { checkDocument } = await import('../../../shared/engine/check-document');
     const good = checkDocument(exampleMemberOnly);
     expect(good.ok && good.result.caution).toBe(CAUTION);
-    expect(checkDocument({ member: { length: '-3 ft', spacing: '4 ft', section: { shape: 'W12X26' } } })).toEqual({
+    expect(
+      checkDocument({ member: { length: '-3 ft', spacing: '4 ft', section: { shape: 'W12X26' } } }),
+    ).toEqual({
       ok: false,
       issues: [{ path: 'member.length', message: 'must be a positive length, got "-3 ft"' }],
     });
-    expect(checkDocument({ member: { length: '3 ft', spacing: '4 ft', section: { shape: 'W99X1' } } })).toEqual({
+    expect(
+      checkDocument({ member: { length: '3 ft', spacing: '4 ft', section: { shape: 'W99X1' } } }),
+    ).toEqual({
       ok: false,
       issues: [{ path: 'member.section.shape', message: 'unknown shape "W99X1": not in the shapes table' }],
     });

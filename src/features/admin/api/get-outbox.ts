@@ -13,7 +13,12 @@ export function sortOutbox(mails: OutboxDto[]): OutboxDto[] {
 }
 
 export function outboxQueryOptions() {
-  return queryOptions({ queryKey: adminKeys.outbox(), queryFn: ({ signal }) => getOutbox(signal), select: sortOutbox, staleTime: 0 });
+  return queryOptions({
+    queryKey: adminKeys.outbox(),
+    queryFn: ({ signal }) => getOutbox(signal),
+    select: sortOutbox,
+    staleTime: 0,
+  });
 }
 
 export function useOutbox() {

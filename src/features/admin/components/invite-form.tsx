@@ -42,29 +42,65 @@ export function InviteForm() {
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Create an account" className="grid gap-3 sm:grid-cols-2">
       <Field id="invite-email" label="E-mail" error={errors.email?.message}>
-        <input id="invite-email" type="email" autoComplete="off" className={inputClass(Boolean(errors.email))} {...describedBy('invite-email', errors.email?.message)} {...form.register('email')} />
+        <input
+          id="invite-email"
+          type="email"
+          autoComplete="off"
+          className={inputClass(Boolean(errors.email))}
+          {...describedBy('invite-email', errors.email?.message)}
+          {...form.register('email')}
+        />
       </Field>
       <Field id="invite-name" label="Name" error={errors.displayName?.message}>
-        <input id="invite-name" autoComplete="off" className={inputClass(Boolean(errors.displayName))} {...describedBy('invite-name', errors.displayName?.message)} {...form.register('displayName')} />
+        <input
+          id="invite-name"
+          autoComplete="off"
+          className={inputClass(Boolean(errors.displayName))}
+          {...describedBy('invite-name', errors.displayName?.message)}
+          {...form.register('displayName')}
+        />
       </Field>
       <Field id="invite-role" label="Role" error={errors.role?.message}>
-        <select id="invite-role" className={inputClass(Boolean(errors.role))} {...describedBy('invite-role', errors.role?.message)} {...form.register('role')}>
+        <select
+          id="invite-role"
+          className={inputClass(Boolean(errors.role))}
+          {...describedBy('invite-role', errors.role?.message)}
+          {...form.register('role')}
+        >
           {ROLES.map((role) => (
-            <option key={role} value={role}>{role}</option>
+            <option key={role} value={role}>
+              {role}
+            </option>
           ))}
         </select>
       </Field>
-      <Field id="invite-password" label="First password" error={errors.password?.message} hint="At least 10 characters; the person changes it later.">
-        <input id="invite-password" type="password" autoComplete="new-password" className={inputClass(Boolean(errors.password))} {...describedBy('invite-password', errors.password?.message, true)} {...form.register('password')} />
+      <Field
+        id="invite-password"
+        label="First password"
+        error={errors.password?.message}
+        hint="At least 10 characters; the person changes it later."
+      >
+        <input
+          id="invite-password"
+          type="password"
+          autoComplete="new-password"
+          className={inputClass(Boolean(errors.password))}
+          {...describedBy('invite-password', errors.password?.message, true)}
+          {...form.register('password')}
+        />
       </Field>
       <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
         <Button type="submit" variant="primary" disabled={create.isPending}>
           {create.isPending ? 'Creating…' : 'Create account'}
         </Button>
-        <p role="status" aria-live="polite" className="text-sm text-concrete-800">{status}</p>
+        <p role="status" aria-live="polite" className="text-sm text-concrete-800">
+          {status}
+        </p>
         {refused && refused.issues.length === 0 && (
           <p role="alert" className="text-sm text-util-over">
-            {refused.status === 409 ? `That e-mail already has an account. ${refused.message}` : refused.message}
+            {refused.status === 409
+              ? `That e-mail already has an account. ${refused.message}`
+              : refused.message}
           </p>
         )}
       </div>

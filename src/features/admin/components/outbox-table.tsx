@@ -19,13 +19,27 @@ export function OutboxTable({ mails }: { mails: OutboxDto[] }) {
       <caption className="sr-only">E-mails captured, newest first</caption>
       <thead>
         <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">Time</th>
-          <th scope="col" className="py-1 pr-3 font-medium">To</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Subject</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Status</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Attempts</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Last error</th>
-          <th scope="col" className="py-1 font-medium"><span className="sr-only">Text</span></th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Time
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            To
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Subject
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Status
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Attempts
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Last error
+          </th>
+          <th scope="col" className="py-1 font-medium">
+            <span className="sr-only">Text</span>
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -35,11 +49,18 @@ export function OutboxTable({ mails }: { mails: OutboxDto[] }) {
           return (
             <Fragment key={mail.id}>
               <tr className="border-b border-concrete-100 align-top" data-mail={mail.id}>
-                <td className="py-1 pr-3 whitespace-nowrap text-concrete-700"><time dateTime={mail.createdAt}>{formatDateTime(mail.createdAt)}</time></td>
+                <td className="py-1 pr-3 whitespace-nowrap text-concrete-700">
+                  <time dateTime={mail.createdAt}>{formatDateTime(mail.createdAt)}</time>
+                </td>
                 <td className="py-1 pr-3 text-concrete-900">{mail.to.join(', ')}</td>
-                <th scope="row" className="py-1 pr-3 text-left font-medium text-concrete-900">{mail.subject}</th>
+                <th scope="row" className="py-1 pr-3 text-left font-medium text-concrete-900">
+                  {mail.subject}
+                </th>
                 <td className={`py-1 pr-3 ${tone}`}>
-                  <span className="inline-flex items-center gap-1"><Icon aria-hidden="true" className="h-4 w-4" />{word}</span>
+                  <span className="inline-flex items-center gap-1">
+                    <Icon aria-hidden="true" className="h-4 w-4" />
+                    {word}
+                  </span>
                 </td>
                 <td className="py-1 pr-3 font-mono tabular-nums">{mail.attempts}</td>
                 <td className="py-1 pr-3 text-concrete-700">{mail.lastError ?? '—'}</td>

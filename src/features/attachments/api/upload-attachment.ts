@@ -15,14 +15,24 @@ function failure(status: number, text: string): ApiError {
     body = null;
   }
   const err = body?.error;
-  return new ApiError(status, err?.code ?? `http_${status}`, err?.message ?? `The server answered ${status}.`, err?.issues ?? [], body);
+  return new ApiError(
+    status,
+    err?.code ?? `http_${status}`,
+    err?.message ?? `The server answered ${status}.`,
+    err?.issues ?? [],
+    body,
+  );
 }
 
 /**
  * Uploads one file as multipart field `file`. fetch cannot report upload progress, so this is the one
  * request that uses XMLHttpRequest; errors come back as the same ApiError as everywhere else.
  */
-export function uploadAttachment(cantileverId: number, file: File, onProgress: (fraction: number) => void): Promise<AttachmentDto> {
+export function uploadAttachment(
+  cantileverId: number,
+  file: File,
+  onProgress: (fraction: number) => void,
+): Promise<AttachmentDto> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', `/api/cantilevers/${cantileverId}/attachments`);
@@ -37,11 +47,20 @@ export function uploadAttachment(cantileverId: number, file: File, onProgress: (
         try {
           resolve(JSON.parse(xhr.responseText) as AttachmentDto);
         } catch {
-          reject(new ApiError(xhr.status, 'bad_response', 'The server answered with something that is not an attachment.'));
+          reject(
+            new ApiError(
+              xhr.status,
+              'bad_response',
+              'The server answered with something that is not an attachment.',
+            ),
+          );
         }
       } else reject(failure(xhr.status, xhr.responseText));
     };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.'));
+    xhr.onerror = () =>
+      reject(
+        new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.'),
+      );
     const form = new FormData();
     form.append('file', file);
     xhr.send(form);
@@ -51,7 +70,8 @@ export function uploadAttachment(cantileverId: number, file: File, onProgress: (
 export function useUploadAttachment(cantileverId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) => uploadAttachment(cantileverId, file, onProgress),
+    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) =>
+      uploadAttachment(cantileverId, file, onProgress),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.list(cantileverId) }),
   });
 }

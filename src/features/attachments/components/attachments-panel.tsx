@@ -12,10 +12,26 @@ export function AttachmentsPanel({ cantileverId }: { cantileverId: number }) {
   const mayUpload = me.data ? EDIT_RIGHTS[me.data.role].attachments : false;
   return (
     <section aria-label="Attachments" className="space-y-3">
-      {attachments.isPending && <p role="status" className="text-sm text-concrete-600">Loading files…</p>}
-      {attachments.isError && <p role="alert" className="text-sm text-util-over">Files could not be loaded: {errorText(attachments.error)}</p>}
+      {attachments.isPending && (
+        <p role="status" className="text-sm text-concrete-600">
+          Loading files…
+        </p>
+      )}
+      {attachments.isError && (
+        <p role="alert" className="text-sm text-util-over">
+          Files could not be loaded: {errorText(attachments.error)}
+        </p>
+      )}
       {attachments.data && <AttachmentsList attachments={attachments.data} />}
-      {mayUpload ? <UploadControl cantileverId={cantileverId} /> : me.data && <p className="text-xs text-concrete-600">Your role ({me.data.role}) may look at files but not add them.</p>}
+      {mayUpload ? (
+        <UploadControl cantileverId={cantileverId} />
+      ) : (
+        me.data && (
+          <p className="text-xs text-concrete-600">
+            Your role ({me.data.role}) may look at files but not add them.
+          </p>
+        )
+      )}
     </section>
   );
 }

@@ -35,13 +35,19 @@ export function UploadControl({ cantileverId }: { cantileverId: number }) {
     <div className="space-y-2">
       <div className="flex flex-wrap items-end gap-2">
         <div className="flex flex-col gap-0.5">
-          <label htmlFor={inputId} className="text-xs font-medium text-concrete-700">Add a file (PDF, PNG, JPEG, DXF or CSV, up to about 10 MiB)</label>
+          <label htmlFor={inputId} className="text-xs font-medium text-concrete-700">
+            Add a file (PDF, PNG, JPEG, DXF or CSV, up to about 10 MiB)
+          </label>
           <input
             id={inputId}
             ref={inputRef}
             type="file"
             accept={ACCEPTED}
-            onChange={(e) => { setFile(e.target.files?.[0] ?? null); upload.reset(); setStatus(''); }}
+            onChange={(e) => {
+              setFile(e.target.files?.[0] ?? null);
+              upload.reset();
+              setStatus('');
+            }}
             className="text-sm file:mr-2 file:rounded file:border file:border-concrete-300 file:bg-white file:px-2 file:py-1"
           />
         </div>
@@ -53,12 +59,23 @@ export function UploadControl({ cantileverId }: { cantileverId: number }) {
       {hint && <p className="text-sm text-oxide-700">{hint}</p>}
       {progress !== null && (
         <div className="flex items-center gap-2 text-xs text-concrete-700">
-          <progress max={1} value={progress} aria-label="Upload progress" className="h-2 w-48 accent-oxide-600" />
+          <progress
+            max={1}
+            value={progress}
+            aria-label="Upload progress"
+            className="h-2 w-48 accent-oxide-600"
+          />
           <span className="tabular-nums">{Math.round(progress * 100)} %</span>
         </div>
       )}
-      <p role="status" aria-live="polite" className="text-sm text-concrete-800">{status}</p>
-      {upload.isError && <p role="alert" className="text-sm text-util-over">{uploadErrorText(upload.error)}</p>}
+      <p role="status" aria-live="polite" className="text-sm text-concrete-800">
+        {status}
+      </p>
+      {upload.isError && (
+        <p role="alert" className="text-sm text-util-over">
+          {uploadErrorText(upload.error)}
+        </p>
+      )}
     </div>
   );
 }

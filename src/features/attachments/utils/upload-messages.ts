@@ -14,8 +14,10 @@ export function formatBytes(bytes: number): string {
 /** A warning before uploading, when the file looks too large or of a kind the server refuses. */
 export function uploadHint(file: File): string | null {
   const ext = file.name.split('.').pop()?.toLowerCase() ?? '';
-  if (!EXTENSIONS.includes(ext)) return `“${file.name}” does not look like a PDF, PNG, JPEG, DXF or CSV file; the server will probably refuse it.`;
-  if (file.size > SIZE_HINT_BYTES) return `“${file.name}” is ${formatBytes(file.size)}, more than the usual limit of ${formatBytes(SIZE_HINT_BYTES)}; the server will probably refuse it.`;
+  if (!EXTENSIONS.includes(ext))
+    return `“${file.name}” does not look like a PDF, PNG, JPEG, DXF or CSV file; the server will probably refuse it.`;
+  if (file.size > SIZE_HINT_BYTES)
+    return `“${file.name}” is ${formatBytes(file.size)}, more than the usual limit of ${formatBytes(SIZE_HINT_BYTES)}; the server will probably refuse it.`;
   return null;
 }
 
@@ -23,7 +25,8 @@ export function uploadHint(file: File): string | null {
 export function uploadErrorText(error: unknown): string {
   if (error instanceof ApiError) {
     if (error.status === 413) return `The file is too large. ${error.message}`;
-    if (error.status === 400) return `This file is not allowed. ${error.message} Allowed: PDF, PNG, JPEG, DXF and CSV.`;
+    if (error.status === 400)
+      return `This file is not allowed. ${error.message} Allowed: PDF, PNG, JPEG, DXF and CSV.`;
     if (error.status === 403) return `You may not upload here. ${error.message}`;
     return error.message;
   }

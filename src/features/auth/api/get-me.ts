@@ -14,7 +14,11 @@ export async function getMe(signal?: AbortSignal): Promise<UserDto | null> {
 }
 
 export function meQueryOptions() {
-  return queryOptions({ queryKey: authKeys.me(), queryFn: ({ signal }) => getMe(signal), staleTime: 5 * 60_000 });
+  return queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: ({ signal }) => getMe(signal),
+    staleTime: 5 * 60_000,
+  });
 }
 
 export function useMe() {

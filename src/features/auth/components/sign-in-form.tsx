@@ -9,7 +9,10 @@ import { useLogin, type LoginBody } from '../api/login';
 /** E-mail and password, with plain errors next to each field and one for a refused sign-in. */
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const login = useLogin();
-  const form = useForm<LoginBody>({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
+  const form = useForm<LoginBody>({
+    resolver: zodResolver(loginSchema),
+    defaultValues: { email: '', password: '' },
+  });
   const { errors } = form.formState;
 
   const submit = form.handleSubmit((values) => {
@@ -20,12 +23,24 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-3" aria-label="Sign in">
       <Field id="email" label="E-mail" error={errors.email?.message}>
-        <input id="email" type="email" autoComplete="username" className={inputClass(Boolean(errors.email))}
-          {...describedBy('email', errors.email?.message)} {...form.register('email')} />
+        <input
+          id="email"
+          type="email"
+          autoComplete="username"
+          className={inputClass(Boolean(errors.email))}
+          {...describedBy('email', errors.email?.message)}
+          {...form.register('email')}
+        />
       </Field>
       <Field id="password" label="Password" error={errors.password?.message}>
-        <input id="password" type="password" autoComplete="current-password" className={inputClass(Boolean(errors.password))}
-          {...describedBy('password', errors.password?.message)} {...form.register('password')} />
+        <input
+          id="password"
+          type="password"
+          autoComplete="current-password"
+          className={inputClass(Boolean(errors.password))}
+          {...describedBy('password', errors.password?.message)}
+          {...form.register('password')}
+        />
       </Field>
       {login.isError ? (
         <p role="alert" className="text-sm text-util-over">

@@ -8,7 +8,10 @@ export function getCantilever(cantileverId: number, signal?: AbortSignal): Promi
 }
 
 export function cantileverQueryOptions(cantileverId: number) {
-  return queryOptions({ queryKey: cantileverKeys.detail(cantileverId), queryFn: ({ signal }) => getCantilever(cantileverId, signal) });
+  return queryOptions({
+    queryKey: cantileverKeys.detail(cantileverId),
+    queryFn: ({ signal }) => getCantilever(cantileverId, signal),
+  });
 }
 
 export function useCantilever(cantileverId: number) {

@@ -19,9 +19,15 @@ export function ChangedInputsTable({ changes, labelA, labelB }: ChangedInputsTab
       </caption>
       <thead>
         <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">Input</th>
-          <th scope="col" className="py-1 pr-3 font-medium">{labelA}</th>
-          <th scope="col" className="py-1 font-medium">{labelB}</th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Input
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            {labelA}
+          </th>
+          <th scope="col" className="py-1 font-medium">
+            {labelB}
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -31,8 +37,12 @@ export function ChangedInputsTable({ changes, labelA, labelB }: ChangedInputsTab
               {pathWords(change.path)}
               <span className="block font-mono text-[11px] text-concrete-600">{change.path}</span>
             </th>
-            <td className="py-1 pr-3 font-mono tabular-nums text-concrete-700">{valueWords(change.before)}</td>
-            <td className="py-1 font-mono tabular-nums font-medium text-concrete-900">{valueWords(change.after)}</td>
+            <td className="py-1 pr-3 font-mono tabular-nums text-concrete-700">
+              {valueWords(change.before)}
+            </td>
+            <td className="py-1 font-mono tabular-nums font-medium text-concrete-900">
+              {valueWords(change.after)}
+            </td>
           </tr>
         ))}
       </tbody>

@@ -23,13 +23,22 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
   const deflectionNames = service && !names.includes(service) ? [service, ...names] : names;
   const [momentChoice, setMomentChoice] = useState<string | undefined>(undefined);
   const [deflectionChoice, setDeflectionChoice] = useState<string | undefined>(undefined);
-  const momentName = momentChoice && names.includes(momentChoice) ? momentChoice : governingName(checksB, names);
-  const deflectionName = deflectionChoice && deflectionNames.includes(deflectionChoice) ? deflectionChoice : (service ?? momentName);
+  const momentName =
+    momentChoice && names.includes(momentChoice) ? momentChoice : governingName(checksB, names);
+  const deflectionName =
+    deflectionChoice && deflectionNames.includes(deflectionChoice)
+      ? deflectionChoice
+      : (service ?? momentName);
   const target = stationsB ?? stationsA;
   if (!target || !momentName || !deflectionName) {
-    return <p className="text-sm text-concrete-700">The station values of these revisions are not available, so the curves cannot be drawn.</p>;
+    return (
+      <p className="text-sm text-concrete-700">
+        The station values of these revisions are not available, so the curves cannot be drawn.
+      </p>
+    );
   }
-  const points = (s: Stations | undefined, name: string, curve: 'M' | 'deflection') => (s ? curvePoints(s, name, curve, target.units) : null);
+  const points = (s: Stations | undefined, name: string, curve: 'M' | 'deflection') =>
+    s ? curvePoints(s, name, curve, target.units) : null;
   const limit = deflectionName === service ? deflectionLimit(checksB, target.units.deflection) : null;
 
   return (
@@ -46,7 +55,12 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
           />
         </div>
         <div className="space-y-2 text-sm">
-          <SeriesSelect label="Deflection under" value={deflectionName} names={deflectionNames} onChange={setDeflectionChoice} />
+          <SeriesSelect
+            label="Deflection under"
+            value={deflectionName}
+            names={deflectionNames}
+            onChange={setDeflectionChoice}
+          />
           <CurvesChart
             title={`Deflection (downward), ${deflectionName}`}
             xUnit={target.units.x}
@@ -54,9 +68,21 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
             a={{ label: labelA, points: points(stationsA, deflectionName, 'deflection') }}
             b={{ label: labelB, points: points(stationsB, deflectionName, 'deflection') }}
             downward
-            limit={limit === null ? null : { value: limit, label: `${labelB} total-load limit ${limit.toPrecision(3)} ${target.units.deflection}` }}
+            limit={
+              limit === null
+                ? null
+                : {
+                    value: limit,
+                    label: `${labelB} total-load limit ${limit.toPrecision(3)} ${target.units.deflection}`,
+                  }
+            }
           />
-          {limit === null && service && <p className="text-xs text-concrete-600">The limit line shows under {service}, the service combination of the total-load deflection check.</p>}
+          {limit === null && service && (
+            <p className="text-xs text-concrete-600">
+              The limit line shows under {service}, the service combination of the total-load deflection
+              check.
+            </p>
+          )}
         </div>
       </div>
       <p className="text-sm text-concrete-700" aria-live="polite">

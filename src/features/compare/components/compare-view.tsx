@@ -10,7 +10,10 @@ import { CompareCurves } from './compare-curves';
 
 /** Passes only when the engine said so and every check has a computed ratio. */
 function allComputedPass(revision: RevisionDto): boolean {
-  return revision.result.ok && revision.result.checks.every((c) => c.ok && c.ratio !== null && Number.isFinite(c.ratio));
+  return (
+    revision.result.ok &&
+    revision.result.checks.every((c) => c.ok && c.ratio !== null && Number.isFinite(c.ratio))
+  );
 }
 
 /** Two stored revisions side by side: changed inputs, check ratios and overlaid curves. */
@@ -26,30 +29,51 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
     <div className="space-y-6">
       <CautionNote />
       <section aria-labelledby="compare-summary" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="compare-summary" className="text-lg font-semibold text-concrete-900">Summary</h2>
+        <h2 id="compare-summary" className="text-lg font-semibold text-concrete-900">
+          Summary
+        </h2>
         <p className="text-sm text-concrete-800" aria-live="polite">
-          {labelA} by {a.authorName}, “{a.message}”, compared with {labelB} by {b.authorName}, “{b.message}”. {changes.length === 1 ? '1 input changed' : `${changes.length} inputs changed`}.{' '}
+          {labelA} by {a.authorName}, “{a.message}”, compared with {labelB} by {b.authorName}, “{b.message}”.{' '}
+          {changes.length === 1 ? '1 input changed' : `${changes.length} inputs changed`}.{' '}
           {ratioSummary(rows)}
         </p>
         <p className="mt-1 flex flex-wrap gap-4 text-sm">
-          <span>{labelA}: <VerdictWord ok={allComputedPass(a)} /></span>
-          <span>{labelB}: <VerdictWord ok={allComputedPass(b)} /></span>
+          <span>
+            {labelA}: <VerdictWord ok={allComputedPass(a)} />
+          </span>
+          <span>
+            {labelB}: <VerdictWord ok={allComputedPass(b)} />
+          </span>
         </p>
       </section>
       <section aria-labelledby="compare-inputs" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="compare-inputs" className="mb-2 text-lg font-semibold text-concrete-900">Changed inputs</h2>
+        <h2 id="compare-inputs" className="mb-2 text-lg font-semibold text-concrete-900">
+          Changed inputs
+        </h2>
         <ChangedInputsTable changes={changes} labelA={labelA} labelB={labelB} />
       </section>
       <section aria-labelledby="compare-ratios" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="compare-ratios" className="mb-2 text-lg font-semibold text-concrete-900">Check ratios</h2>
+        <h2 id="compare-ratios" className="mb-2 text-lg font-semibold text-concrete-900">
+          Check ratios
+        </h2>
         <RatioTable rows={rows} labelA={labelA} labelB={labelB} />
       </section>
       <section aria-labelledby="compare-curves" className="rounded border border-concrete-200 bg-white p-4">
-        <h2 id="compare-curves" className="mb-2 text-lg font-semibold text-concrete-900">Moment and deflection curves</h2>
+        <h2 id="compare-curves" className="mb-2 text-lg font-semibold text-concrete-900">
+          Moment and deflection curves
+        </h2>
         {stationsA.pending || stationsB.pending ? (
-          <p role="status" className="text-sm text-concrete-600">Computing the curves…</p>
+          <p role="status" className="text-sm text-concrete-600">
+            Computing the curves…
+          </p>
         ) : (
-          <CompareCurves labelA={labelA} labelB={labelB} stationsA={stationsA.stations} stationsB={stationsB.stations} checksB={b.result.checks} />
+          <CompareCurves
+            labelA={labelA}
+            labelB={labelB}
+            stationsA={stationsA.stations}
+            stationsB={stationsB.stations}
+            checksB={b.result.checks}
+          />
         )}
       </section>
       <CautionNote />

@@ -1,4 +1,14 @@
-import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { Point } from '../utils/series';
 
 interface CurvesChartProps {
@@ -23,23 +33,69 @@ export function CurvesChart({ title, xUnit, yUnit, a, b, downward = false, limit
         <ResponsiveContainer width="100%" height="100%" initialDimension={{ width: 640, height: 256 }}>
           <LineChart margin={{ top: 8, right: 24, bottom: 16, left: 8 }}>
             <CartesianGrid stroke="#dcd8d1" strokeDasharray="3 3" />
-            <XAxis type="number" dataKey="x" domain={[0, 'dataMax']} unit={` ${xUnit}`} tick={{ fontSize: 11 }} allowDuplicatedCategory={false} />
-            <YAxis type="number" dataKey="y" reversed={downward} unit={` ${yUnit}`} tick={{ fontSize: 11 }} width={80} />
-            <Tooltip formatter={(value) => (typeof value === 'number' ? value.toPrecision(3) : String(value))} labelFormatter={(x) => `x = ${Number(x).toFixed(2)} ${xUnit}`} />
+            <XAxis
+              type="number"
+              dataKey="x"
+              domain={[0, 'dataMax']}
+              unit={` ${xUnit}`}
+              tick={{ fontSize: 11 }}
+              allowDuplicatedCategory={false}
+            />
+            <YAxis
+              type="number"
+              dataKey="y"
+              reversed={downward}
+              unit={` ${yUnit}`}
+              tick={{ fontSize: 11 }}
+              width={80}
+            />
+            <Tooltip
+              formatter={(value) => (typeof value === 'number' ? value.toPrecision(3) : String(value))}
+              labelFormatter={(x) => `x = ${Number(x).toFixed(2)} ${xUnit}`}
+            />
             <Legend />
             {a.points && (
-              <Line data={a.points} dataKey="y" name={a.label} stroke="#857d71" strokeDasharray="6 4" strokeWidth={2} dot={false} isAnimationActive={false} />
+              <Line
+                data={a.points}
+                dataKey="y"
+                name={a.label}
+                stroke="#857d71"
+                strokeDasharray="6 4"
+                strokeWidth={2}
+                dot={false}
+                isAnimationActive={false}
+              />
             )}
-            {b.points && <Line data={b.points} dataKey="y" name={b.label} stroke="#c8571b" strokeWidth={2} dot={false} isAnimationActive={false} />}
+            {b.points && (
+              <Line
+                data={b.points}
+                dataKey="y"
+                name={b.label}
+                stroke="#c8571b"
+                strokeWidth={2}
+                dot={false}
+                isAnimationActive={false}
+              />
+            )}
             {limit && (
-              <ReferenceLine y={limit.value} ifOverflow="extendDomain" stroke="#b3261e" strokeDasharray="2 2" label={{ value: limit.label, position: 'insideBottomRight', fontSize: 11, fill: '#b3261e' }} />
+              <ReferenceLine
+                y={limit.value}
+                ifOverflow="extendDomain"
+                stroke="#b3261e"
+                strokeDasharray="2 2"
+                label={{ value: limit.label, position: 'insideBottomRight', fontSize: 11, fill: '#b3261e' }}
+              />
             )}
           </LineChart>
         </ResponsiveContainer>
       </div>
-      {[a, b].filter((s) => !s.points).map((s) => (
-        <p key={s.label} className="text-xs text-concrete-600">{s.label} has no curve for this choice.</p>
-      ))}
+      {[a, b]
+        .filter((s) => !s.points)
+        .map((s) => (
+          <p key={s.label} className="text-xs text-concrete-600">
+            {s.label} has no curve for this choice.
+          </p>
+        ))}
     </figure>
   );
 }

@@ -6,7 +6,9 @@ export function RatioCell({ ratio, ok }: { ratio: number | null; ok: boolean | n
   const computed = ratio !== null && Number.isFinite(ratio);
   const passed = computed && ok;
   return (
-    <span className={`whitespace-nowrap font-mono tabular-nums ${passed ? 'text-concrete-900' : 'font-semibold text-util-over'}`}>
+    <span
+      className={`whitespace-nowrap font-mono tabular-nums ${passed ? 'text-concrete-900' : 'font-semibold text-util-over'}`}
+    >
       {formatRatio(ratio)} <span className="font-sans text-xs">{passed ? 'pass' : 'fail'}</span>
     </span>
   );

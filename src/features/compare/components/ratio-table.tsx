@@ -22,14 +22,26 @@ function signed(change: number | null): string {
 export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA: string; labelB: string }) {
   return (
     <table className="w-full border-collapse text-sm">
-      <caption className="sr-only">Check ratios, {labelA} and {labelB}</caption>
+      <caption className="sr-only">
+        Check ratios, {labelA} and {labelB}
+      </caption>
       <thead>
         <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">Check</th>
-          <th scope="col" className="py-1 pr-3 font-medium">{labelA}</th>
-          <th scope="col" className="py-1 pr-3 font-medium">{labelB}</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Change</th>
-          <th scope="col" className="py-1 font-medium">Trend</th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Check
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            {labelA}
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            {labelB}
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Change
+          </th>
+          <th scope="col" className="py-1 font-medium">
+            Trend
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -41,8 +53,12 @@ export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA:
                 {row.title}
                 <span className="block font-mono text-[11px] text-concrete-600">{row.id}</span>
               </th>
-              <td className="py-1 pr-3"><RatioCell ratio={row.ratioA} ok={row.okA} /></td>
-              <td className="py-1 pr-3"><RatioCell ratio={row.ratioB} ok={row.okB} /></td>
+              <td className="py-1 pr-3">
+                <RatioCell ratio={row.ratioA} ok={row.okA} />
+              </td>
+              <td className="py-1 pr-3">
+                <RatioCell ratio={row.ratioB} ok={row.okB} />
+              </td>
               <td className="py-1 pr-3 font-mono tabular-nums">{signed(row.change)}</td>
               <td className={`py-1 ${tone}`}>
                 <span className="inline-flex items-center gap-1">

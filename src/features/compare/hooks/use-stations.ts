@@ -24,5 +24,9 @@ export function useStations(revision: RevisionDto | undefined) {
     enabled: Boolean(revision) && !stored,
     staleTime: Infinity,
   });
-  return { stations: stored ?? computed.data ?? undefined, pending: !stored && computed.isPending && Boolean(revision), error: computed.error };
+  return {
+    stations: stored ?? computed.data ?? undefined,
+    pending: !stored && computed.isPending && Boolean(revision),
+    error: computed.error,
+  };
 }

@@ -1,7 +1,12 @@
 import type { Stations } from '../../../../shared/engine/types';
 import { curvePoints } from './series';
 
-function ends(stations: Stations | undefined, momentName: string, deflectionName: string, target: Stations['units']) {
+function ends(
+  stations: Stations | undefined,
+  momentName: string,
+  deflectionName: string,
+  target: Stations['units'],
+) {
   if (!stations) return null;
   const m = curvePoints(stations, momentName, 'M', target);
   const d = curvePoints(stations, deflectionName, 'deflection', target);
@@ -10,7 +15,14 @@ function ends(stations: Stations | undefined, momentName: string, deflectionName
 }
 
 /** The curves in words: reach, root moment and tip deflection of both revisions. */
-export function curveSummary(labelA: string, labelB: string, a: Stations | undefined, b: Stations | undefined, momentName: string, deflectionName: string): string {
+export function curveSummary(
+  labelA: string,
+  labelB: string,
+  a: Stations | undefined,
+  b: Stations | undefined,
+  momentName: string,
+  deflectionName: string,
+): string {
   const target = (b ?? a)?.units;
   if (!target) return 'No curves are available.';
   const ea = ends(a, momentName, deflectionName, target);

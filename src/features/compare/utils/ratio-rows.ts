@@ -1,6 +1,7 @@
 import type { Check } from '../../../../shared/engine/types';
 
-export type RatioTrend = 'worse' | 'better' | 'unchanged' | 'new check' | 'no longer checked' | 'not computed';
+export type RatioTrend =
+  'worse' | 'better' | 'unchanged' | 'new check' | 'no longer checked' | 'not computed';
 
 export interface RatioRow {
   id: string;
@@ -53,7 +54,11 @@ export function ratioRows(a: Check[], b: Check[]): RatioRow[] {
 export function ratioSummary(rows: RatioRow[]): string {
   const count = (t: RatioTrend) => rows.filter((r) => r.trend === t).length;
   const failingB = rows.filter((r) => r.okB === false).length;
-  const parts = [`${count('worse')} ${count('worse') === 1 ? 'check' : 'checks'} worse`, `${count('better')} better`, `${count('unchanged')} unchanged`];
+  const parts = [
+    `${count('worse')} ${count('worse') === 1 ? 'check' : 'checks'} worse`,
+    `${count('better')} better`,
+    `${count('unchanged')} unchanged`,
+  ];
   if (count('not computed')) parts.push(`${count('not computed')} not computed`);
   if (count('new check')) parts.push(`${count('new check')} new`);
   if (count('no longer checked')) parts.push(`${count('no longer checked')} no longer checked`);

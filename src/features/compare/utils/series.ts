@@ -41,7 +41,12 @@ function fromCases(stations: Stations, name: string): StationSeries | undefined 
   const terms = name.split('+').map((t) => /^\s*(\d*\.?\d*)\s*([A-Za-z]+)\s*$/.exec(t));
   if (terms.some((t) => t === null)) return undefined;
   const n = stations.x.length;
-  const out: StationSeries = { name, V: new Array<number>(n).fill(0), M: new Array<number>(n).fill(0), deflection: new Array<number>(n).fill(0) };
+  const out: StationSeries = {
+    name,
+    V: new Array<number>(n).fill(0),
+    M: new Array<number>(n).fill(0),
+    deflection: new Array<number>(n).fill(0),
+  };
   let used = 0;
   for (const t of terms as RegExpExecArray[]) {
     const series = stations.cases.find((c) => c.name === t[2]);
@@ -58,7 +63,11 @@ function fromCases(stations: Stations, name: string): StationSeries | undefined 
 }
 
 function findSeries(stations: Stations, name: string): StationSeries | undefined {
-  return stations.combinations.find((c) => c.name === name) ?? stations.cases.find((c) => c.name === name) ?? fromCases(stations, name);
+  return (
+    stations.combinations.find((c) => c.name === name) ??
+    stations.cases.find((c) => c.name === name) ??
+    fromCases(stations, name)
+  );
 }
 
 /** The service combination of the total-load deflection check ("D + L"), which the limit line belongs to. */
@@ -70,7 +79,12 @@ export function serviceName(checks: Check[]): string | undefined {
  * One curve of one revision as points in the units of `target` (the other revision's stations),
  * so the two revisions overlay even when one of them was saved in other units.
  */
-export function curvePoints(stations: Stations, name: string, curve: Curve, target: Stations['units']): Point[] | null {
+export function curvePoints(
+  stations: Stations,
+  name: string,
+  curve: Curve,
+  target: Stations['units'],
+): Point[] | null {
   const series = findSeries(stations, name);
   if (!series) return null;
   const ys = series[curve];

@@ -19,7 +19,15 @@ export const tickLabel = (v: number) => `${Number(v.toPrecision(3))}`;
  */
 export function AxisTick({ x, y, textAnchor = 'middle', verticalAnchor = 'end', payload }: AxisTickProps) {
   return (
-    <text x={x} y={y} dy={DY[verticalAnchor]} textAnchor={textAnchor} fontSize={10} fill="#666" className="recharts-cartesian-axis-tick-value">
+    <text
+      x={x}
+      y={y}
+      dy={DY[verticalAnchor]}
+      textAnchor={textAnchor}
+      fontSize={10}
+      fill="#666"
+      className="recharts-cartesian-axis-tick-value"
+    >
       {tickLabel(Number(payload?.value))}
     </text>
   );

@@ -2,16 +2,36 @@ import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
 import { checkTone, checkWord, sortWorstFirst, type Tone } from '../lib/check-words';
 
-const BAR: Record<Tone, string> = { calm: 'bg-util-calm', steady: 'bg-util-steady', near: 'bg-util-near', over: 'bg-util-over' };
-const TEXT: Record<Tone, string> = { calm: 'text-util-calm', steady: 'text-concrete-700', near: 'text-concrete-800', over: 'text-util-over' };
+const BAR: Record<Tone, string> = {
+  calm: 'bg-util-calm',
+  steady: 'bg-util-steady',
+  near: 'bg-util-near',
+  over: 'bg-util-over',
+};
+const TEXT: Record<Tone, string> = {
+  calm: 'text-util-calm',
+  steady: 'text-concrete-700',
+  near: 'text-concrete-800',
+  over: 'text-util-over',
+};
 
 function UtilBar({ ratio, tone }: { ratio: number | null; tone: Tone }) {
-  if (ratio === null) return <div className="h-2 w-full rounded bg-[repeating-linear-gradient(45deg,#dcd8d1_0_4px,#f7f6f4_4px_8px)]" aria-hidden="true" />;
+  if (ratio === null)
+    return (
+      <div
+        className="h-2 w-full rounded bg-[repeating-linear-gradient(45deg,#dcd8d1_0_4px,#f7f6f4_4px_8px)]"
+        aria-hidden="true"
+      />
+    );
   const width = Math.min(ratio / 1.25, 1) * 100;
   return (
     <div className="relative h-2 w-full rounded bg-concrete-200" aria-hidden="true">
       <div className={`h-2 rounded ${BAR[tone]}`} style={{ width: `${width}%` }} />
-      <div className="absolute top-[-2px] h-3 w-px bg-concrete-800" style={{ left: '80%' }} title="capacity" />
+      <div
+        className="absolute top-[-2px] h-3 w-px bg-concrete-800"
+        style={{ left: '80%' }}
+        title="capacity"
+      />
     </div>
   );
 }
@@ -37,18 +57,37 @@ export function CheckBoard({ checks }: { checks: readonly Check[] }) {
           const word = checkWord(c);
           const tone = checkTone(word);
           return (
-            <tr key={c.id} data-check={c.id} data-word={word} className="border-b border-concrete-200 align-top">
+            <tr
+              key={c.id}
+              data-check={c.id}
+              data-word={word}
+              className="border-b border-concrete-200 align-top"
+            >
               <td className="py-1.5 pr-2">
                 <div className="font-medium">{c.title}</div>
-                <div className="text-xs text-concrete-500">{c.reference}{c.at ? ` · at ${formatQuantity(c.at)}` : ''}</div>
+                <div className="text-xs text-concrete-500">
+                  {c.reference}
+                  {c.at ? ` · at ${formatQuantity(c.at)}` : ''}
+                </div>
                 {c.note ? <div className="text-xs text-concrete-700">{c.note}</div> : null}
               </td>
               <td className="py-1.5 pr-2 text-xs">{c.combination ?? '—'}</td>
-              <td className="num py-1.5 pr-2 text-right whitespace-nowrap">{c.demand ? formatQuantity(c.demand) : '—'}</td>
-              <td className="num py-1.5 pr-2 text-right whitespace-nowrap">{c.capacity ? formatQuantity(c.capacity) : '—'}</td>
-              <td className="py-2.5 pr-2"><UtilBar ratio={c.ratio} tone={tone} /></td>
-              <td className="num py-1.5 pr-2 text-right font-mono">{c.ratio === null ? '—' : c.ratio.toFixed(2)}</td>
-              <td className={`py-1.5 text-xs font-semibold whitespace-nowrap ${TEXT[tone]}`}>{word === 'exceeds' || word === 'fails' || word === 'not computed' ? '✕ ' : ''}{word}</td>
+              <td className="num py-1.5 pr-2 text-right whitespace-nowrap">
+                {c.demand ? formatQuantity(c.demand) : '—'}
+              </td>
+              <td className="num py-1.5 pr-2 text-right whitespace-nowrap">
+                {c.capacity ? formatQuantity(c.capacity) : '—'}
+              </td>
+              <td className="py-2.5 pr-2">
+                <UtilBar ratio={c.ratio} tone={tone} />
+              </td>
+              <td className="num py-1.5 pr-2 text-right font-mono">
+                {c.ratio === null ? '—' : c.ratio.toFixed(2)}
+              </td>
+              <td className={`py-1.5 text-xs font-semibold whitespace-nowrap ${TEXT[tone]}`}>
+                {word === 'exceeds' || word === 'fails' || word === 'not computed' ? '✕ ' : ''}
+                {word}
+              </td>
             </tr>
           );
         })}

@@ -13,7 +13,13 @@ function show(value: string | number | boolean | null): string {
  * Someone saved a newer revision while you were working. Shows their inputs against yours and lets
  * you keep yours on top of theirs, or load theirs (yours stay restorable); nothing typed is lost.
  */
-export function ConflictDialog({ latest, mine, onKeepMine, onLoadLatest, onClose }: {
+export function ConflictDialog({
+  latest,
+  mine,
+  onKeepMine,
+  onLoadLatest,
+  onClose,
+}: {
   latest: RevisionDto | null;
   mine: DesignDocument;
   onKeepMine: () => void;
@@ -25,10 +31,13 @@ export function ConflictDialog({ latest, mine, onKeepMine, onLoadLatest, onClose
   return (
     <Dialog open title={`Revision ${latest.number} was saved while you worked`} onClose={onClose} wide>
       <p className="text-sm">
-        {latest.authorName} saved revision {latest.number} (“{latest.message}”). Your changes were not saved. The inputs that differ:
+        {latest.authorName} saved revision {latest.number} (“{latest.message}”). Your changes were not saved.
+        The inputs that differ:
       </p>
       {changes.length === 0 ? (
-        <p className="mt-2 text-sm text-concrete-600">No input differs: your design matches revision {latest.number}.</p>
+        <p className="mt-2 text-sm text-concrete-600">
+          No input differs: your design matches revision {latest.number}.
+        </p>
       ) : (
         <div className="mt-2 max-h-80 overflow-auto">
           <table className="w-full text-sm" aria-label="Inputs that differ">
@@ -53,7 +62,9 @@ export function ConflictDialog({ latest, mine, onKeepMine, onLoadLatest, onClose
       )}
       <div className="mt-4 flex flex-wrap justify-end gap-2">
         <Button onClick={onLoadLatest}>Load revision {latest.number}</Button>
-        <Button variant="primary" onClick={onKeepMine}>Keep my changes on top of revision {latest.number}</Button>
+        <Button variant="primary" onClick={onKeepMine}>
+          Keep my changes on top of revision {latest.number}
+        </Button>
       </div>
     </Dialog>
   );

@@ -3,7 +3,12 @@ import { useCallback, useEffect, useMemo, useState } from 'react';
 import { FormProvider, useForm, useFormState } from 'react-hook-form';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { UnitSystem } from '../../../../shared/engine/units';
-import { EDIT_RIGHTS, type CantileverDto, type RevisionDto, type UserDto } from '../../../../shared/schemas/api';
+import {
+  EDIT_RIGHTS,
+  type CantileverDto,
+  type RevisionDto,
+  type UserDto,
+} from '../../../../shared/schemas/api';
 import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
 import { useUpdateMe } from '../../auth/api/update-me';
 import { ShapePickerDialog } from '../../shapes/components/shape-picker-dialog';
@@ -33,13 +38,19 @@ export interface DeskEditorProps {
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
 export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({ resolver: zodResolver(designSchema), mode: 'onChange', defaultValues: initialDoc });
+  const form = useForm<DesignDocument, unknown, DesignInput>({
+    resolver: zodResolver(designSchema),
+    mode: 'onChange',
+    defaultValues: initialDoc,
+  });
   const { isDirty: formSaysDirty } = useFormState({ control: form.control });
   const differsFromSaved = useDiffersFromSaved(form);
   // react-hook-form can keep isDirty set after every field is typed back to its saved value, so the
   // marker also asks whether the document really differs; isDirty still covers the reset after a save.
   const isDirty = formSaysDirty && differsFromSaved;
-  const [baseRevision, setBase] = useState<{ id: number; number: number } | null>(revision ? { id: revision.id, number: revision.number } : null);
+  const [baseRevision, setBase] = useState<{ id: number; number: number } | null>(
+    revision ? { id: revision.id, number: revision.number } : null,
+  );
   const base = baseRevision?.number ?? null;
   const [units, setUnits] = useState<UnitSystem>(initialDoc.units === 'SI' ? 'SI' : 'US');
   const [picker, setPicker] = useState<'member' | 'footprint' | null>(null);
@@ -55,11 +66,14 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
     return form.subscribe({ formState: { values: true }, callback: ({ values }) => submit(values) });
   }, [form, submit]);
 
-  const onUnits = useCallback((to: UnitSystem) => {
-    switchUnits(to);
-    setUnits(to);
-    updateMe.mutate({ units: to });
-  }, [switchUnits, updateMe]);
+  const onUnits = useCallback(
+    (to: UnitSystem) => {
+      switchUnits(to);
+      setUnits(to);
+      updateMe.mutate({ units: to });
+    },
+    [switchUnits, updateMe],
+  );
 
   const openMember = useCallback(() => setPicker('member'), []);
   const openFootprint = useCallback(() => setPicker('footprint'), []);
@@ -67,7 +81,10 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const hasConnection = live.doc?.connection !== undefined;
   const baseId = baseRevision?.id ?? null;
   // Memoised so that the results (a memo component) skip the re-render of every keystroke.
-  const schedule = useMemo(() => <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />, [baseId, isDirty, hasConnection]);
+  const schedule = useMemo(
+    () => <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />,
+    [baseId, isDirty, hasConnection],
+  );
 
   function applyShape(target: 'member' | 'footprint', label: string) {
     const opts = { shouldDirty: true, shouldValidate: true } as const;
@@ -82,7 +99,9 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
 
   const actions = [
     ...(rights.member ? [{ label: 'Use for member', onUse: (l: string) => applyShape('member', l) }] : []),
-    ...(rights.connection && hasConnection ? [{ label: 'Use for post footprint', onUse: (l: string) => applyShape('footprint', l) }] : []),
+    ...(rights.connection && hasConnection
+      ? [{ label: 'Use for post footprint', onUse: (l: string) => applyShape('footprint', l) }]
+      : []),
   ];
   if (picker === 'footprint') actions.reverse();
 
@@ -90,12 +109,39 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
     <FormProvider {...form}>
       <EngineIssuesContext.Provider value={engineIssues}>
         <div className="flex flex-col">
-          <DeskHeader cantilever={cantilever} base={base} dirty={isDirty} busy={busy} live={live} units={units} onUnits={onUnits}
-            save={<DeskSave cantileverId={cantilever.id} base={base} setBase={setBase} dirty={isDirty} mayEdit={rights.member || rights.connection} toUserUnits={toUserUnits} />} />
+          <DeskHeader
+            cantilever={cantilever}
+            base={base}
+            dirty={isDirty}
+            busy={busy}
+            live={live}
+            units={units}
+            onUnits={onUnits}
+            save={
+              <DeskSave
+                cantileverId={cantilever.id}
+                base={base}
+                setBase={setBase}
+                dirty={isDirty}
+                mayEdit={rights.member || rights.connection}
+                toUserUnits={toUserUnits}
+              />
+            }
+          />
           <div className="grid gap-4 p-4 lg:grid-cols-[26rem_1fr]">
-            <form onSubmit={(e) => e.preventDefault()} noValidate aria-label="Design inputs" className="flex flex-col gap-2">
+            <form
+              onSubmit={(e) => e.preventDefault()}
+              noValidate
+              aria-label="Design inputs"
+              className="flex flex-col gap-2"
+            >
               <IssueSummary issues={live.issues} failure={live.failure} />
-              <DeskInputs mayEditMember={rights.member} mayEditConnection={rights.connection} onBrowseMember={openMember} onBrowseFootprint={openFootprint} />
+              <DeskInputs
+                mayEditMember={rights.member}
+                mayEditConnection={rights.connection}
+                onBrowseMember={openMember}
+                onBrowseFootprint={openFootprint}
+              />
             </form>
             <div className="flex min-w-0 flex-col gap-3">
               <DeskResults live={live} doc={live.doc} schedule={schedule} />
@@ -103,8 +149,16 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
             </div>
           </div>
         </div>
-        <ShapePickerDialog open={picker !== null} onClose={() => setPicker(null)} actions={actions}
-          initial={picker === 'footprint' ? form.getValues('connection.footprint.shape') ?? null : form.getValues('member.section.shape') ?? null} />
+        <ShapePickerDialog
+          open={picker !== null}
+          onClose={() => setPicker(null)}
+          actions={actions}
+          initial={
+            picker === 'footprint'
+              ? (form.getValues('connection.footprint.shape') ?? null)
+              : (form.getValues('member.section.shape') ?? null)
+          }
+        />
       </EngineIssuesContext.Provider>
     </FormProvider>
   );

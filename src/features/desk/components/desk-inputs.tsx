@@ -13,7 +13,12 @@ export interface DeskInputsProps {
 }
 
 /** The four input groups; memoised so a new result does not re-render the inputs. */
-export const DeskInputs = memo(function DeskInputs({ mayEditMember, mayEditConnection, onBrowseMember, onBrowseFootprint }: DeskInputsProps) {
+export const DeskInputs = memo(function DeskInputs({
+  mayEditMember,
+  mayEditConnection,
+  onBrowseMember,
+  onBrowseFootprint,
+}: DeskInputsProps) {
   return (
     <div className="flex flex-col gap-2">
       <ReachGroup disabled={!mayEditMember} />
@@ -28,10 +33,23 @@ export const DeskInputs = memo(function DeskInputs({ mayEditMember, mayEditConne
 export function IssueSummary({ issues, failure }: { issues: readonly FieldIssue[]; failure: string | null }) {
   if (issues.length === 0 && !failure) return null;
   return (
-    <div role="alert" className="rounded-md border border-util-over/50 bg-oxide-50 p-2 text-xs text-util-over" data-testid="issue-summary">
-      <p className="font-semibold">Not recomputed: {failure ? 'the engine stopped on these inputs.' : `${issues.length} input${issues.length === 1 ? ' needs' : 's need'} attention.`}</p>
+    <div
+      role="alert"
+      className="rounded-md border border-util-over/50 bg-oxide-50 p-2 text-xs text-util-over"
+      data-testid="issue-summary"
+    >
+      <p className="font-semibold">
+        Not recomputed:{' '}
+        {failure
+          ? 'the engine stopped on these inputs.'
+          : `${issues.length} input${issues.length === 1 ? ' needs' : 's need'} attention.`}
+      </p>
       <ul className="mt-1 list-disc pl-4">
-        {issues.map((i) => <li key={`${i.path}:${i.message}`}><span className="font-mono">{i.path}</span>: {i.message}</li>)}
+        {issues.map((i) => (
+          <li key={`${i.path}:${i.message}`}>
+            <span className="font-mono">{i.path}</span>: {i.message}
+          </li>
+        ))}
         {failure ? <li>{failure}</li> : null}
       </ul>
     </div>

@@ -9,7 +9,10 @@ import { Verdict } from './verdict';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <section aria-label={title} className="rounded-md border border-concrete-300 bg-white p-3 [contain:layout_paint]">
+    <section
+      aria-label={title}
+      className="rounded-md border border-concrete-300 bg-white p-3 [contain:layout_paint]"
+    >
       <h2 className="mb-2 text-sm font-semibold text-concrete-800">{title}</h2>
       {children}
     </section>
@@ -17,7 +20,15 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
 }
 
 /** The right side of the desk: verdict and caution, diagrams, check board, sketches. */
-export const DeskResults = memo(function DeskResults({ live, doc, schedule }: { live: LiveDesign; doc: DesignDocument | null; schedule?: ReactNode }) {
+export const DeskResults = memo(function DeskResults({
+  live,
+  doc,
+  schedule,
+}: {
+  live: LiveDesign;
+  doc: DesignDocument | null;
+  schedule?: ReactNode;
+}) {
   const result = live.result;
   const liveLimit = doc?.deflectionLimits?.live ?? 360;
   const totalLimit = doc?.deflectionLimits?.total ?? 240;
@@ -27,7 +38,12 @@ export const DeskResults = memo(function DeskResults({ live, doc, schedule }: { 
       {result ? (
         <>
           <Panel title="Moment, shear and deflection along the member">
-            <DeskCharts result={result} resultId={live.resultId} liveLimit={liveLimit} totalLimit={totalLimit} />
+            <DeskCharts
+              result={result}
+              resultId={live.resultId}
+              liveLimit={liveLimit}
+              totalLimit={totalLimit}
+            />
           </Panel>
           <Panel title="Check board">
             <CheckBoard checks={result.checks} />

@@ -15,7 +15,14 @@ import { SaveDialog } from './save-dialog';
  * "Save revision": asks for a message, posts against the base revision; a stale base opens the
  * conflict dialog (keep mine on top of the latest, or load the latest with mine kept to restore).
  */
-export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUnits }: {
+export function DeskSave({
+  cantileverId,
+  base,
+  setBase,
+  dirty,
+  mayEdit,
+  toUserUnits,
+}: {
   cantileverId: number;
   base: number | null;
   /** The revision the desk now stands on (its number is shown; its id names the plate schedule). */
@@ -40,30 +47,33 @@ export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUn
       return;
     }
     const input = form.getValues();
-    save.mutate({ baseRevision: base, message: text, input }, {
-      onSuccess: (revision) => {
-        setBase(revision);
-        form.reset(input);
-        setOpen(false);
-        setMessage('');
-        setDraft(null);
-      },
-      onError: (err) => {
-        const latest = staleLatest(err);
-        if (latest) {
+    save.mutate(
+      { baseRevision: base, message: text, input },
+      {
+        onSuccess: (revision) => {
+          setBase(revision);
+          form.reset(input);
           setOpen(false);
-          setConflict(latest);
-          return;
-        }
-        if (err instanceof ApiError && err.issues.length > 0) {
-          for (const issue of err.issues) {
-            const name = issue.path.replace(/^input\./, '').replace(/\[(\d+)\]/g, '.$1');
-            form.setError(name as 'member.length', { type: 'server', message: issue.message });
+          setMessage('');
+          setDraft(null);
+        },
+        onError: (err) => {
+          const latest = staleLatest(err);
+          if (latest) {
+            setOpen(false);
+            setConflict(latest);
+            return;
           }
-        }
-        setError(err.message);
+          if (err instanceof ApiError && err.issues.length > 0) {
+            for (const issue of err.issues) {
+              const name = issue.path.replace(/^input\./, '').replace(/\[(\d+)\]/g, '.$1');
+              form.setError(name as 'member.length', { type: 'server', message: issue.message });
+            }
+          }
+          setError(err.message);
+        },
       },
-    });
+    );
   }
 
   function keepMine() {
@@ -95,17 +105,36 @@ export function DeskSave({ cantileverId, base, setBase, dirty, mayEdit, toUserUn
       {draft ? (
         <span className="flex items-center gap-1 text-xs">
           Your unsaved version is kept.
-          <Button size="sm" onClick={restoreDraft}>Restore my version</Button>
+          <Button size="sm" onClick={restoreDraft}>
+            Restore my version
+          </Button>
         </span>
       ) : null}
-      <Button variant={dirty || base === null ? 'primary' : 'secondary'} disabled={!dirty && base !== null} onClick={() => setOpen(true)}>
+      <Button
+        variant={dirty || base === null ? 'primary' : 'secondary'}
+        disabled={!dirty && base !== null}
+        onClick={() => setOpen(true)}
+      >
         <Save size={14} aria-hidden="true" /> Save revision
       </Button>
       {open ? (
-        <SaveDialog open onClose={() => setOpen(false)} onSave={onSave} saving={save.isPending} error={error} initialMessage={message}
-          baseLabel={base ? `Saved as the next revision after revision ${base}.` : 'Saved as revision 1.'} />
+        <SaveDialog
+          open
+          onClose={() => setOpen(false)}
+          onSave={onSave}
+          saving={save.isPending}
+          error={error}
+          initialMessage={message}
+          baseLabel={base ? `Saved as the next revision after revision ${base}.` : 'Saved as revision 1.'}
+        />
       ) : null}
-      <ConflictDialog latest={conflict} mine={form.getValues()} onKeepMine={keepMine} onLoadLatest={loadLatest} onClose={() => setConflict(null)} />
+      <ConflictDialog
+        latest={conflict}
+        mine={form.getValues()}
+        onKeepMine={keepMine}
+        onLoadLatest={loadLatest}
+        onClose={() => setConflict(null)}
+      />
       <LeaveGuard dirty={dirty && !save.isPending} />
     </>
   );

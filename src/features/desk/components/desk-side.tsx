@@ -3,7 +3,13 @@ import { AttachmentsPanel } from '../../attachments/components/attachments-panel
 import { RevisionList } from './revision-list';
 
 /** Revisions and files of the cantilever, under the results. */
-export const DeskSide = memo(function DeskSide({ cantileverId, current }: { cantileverId: number; current: number | null }) {
+export const DeskSide = memo(function DeskSide({
+  cantileverId,
+  current,
+}: {
+  cantileverId: number;
+  current: number | null;
+}) {
   return (
     <div className="grid gap-3 xl:grid-cols-2">
       <section aria-label="Revisions" className="rounded-md border border-concrete-300 bg-white p-3">

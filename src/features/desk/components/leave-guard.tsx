@@ -5,7 +5,9 @@ import { Dialog } from '../../../components/ui/dialog';
 
 /** Stops a move away (in the app or by closing the tab) while there is unsaved work. */
 export function LeaveGuard({ dirty }: { dirty: boolean }) {
-  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname,
+  );
 
   useEffect(() => {
     if (!dirty) return;
@@ -18,11 +20,21 @@ export function LeaveGuard({ dirty }: { dirty: boolean }) {
   }, [dirty]);
 
   return (
-    <Dialog open={blocker.state === 'blocked'} title="Leave without saving?" onClose={() => blocker.reset?.()}>
-      <p className="text-sm">This design has changes that are not saved as a revision. If you leave, they are lost.</p>
+    <Dialog
+      open={blocker.state === 'blocked'}
+      title="Leave without saving?"
+      onClose={() => blocker.reset?.()}
+    >
+      <p className="text-sm">
+        This design has changes that are not saved as a revision. If you leave, they are lost.
+      </p>
       <div className="mt-4 flex justify-end gap-2">
-        <Button variant="primary" onClick={() => blocker.reset?.()}>Stay on the desk</Button>
-        <Button variant="danger" onClick={() => blocker.proceed?.()}>Leave and lose the changes</Button>
+        <Button variant="primary" onClick={() => blocker.reset?.()}>
+          Stay on the desk
+        </Button>
+        <Button variant="danger" onClick={() => blocker.proceed?.()}>
+          Leave and lose the changes
+        </Button>
       </div>
     </Dialog>
   );

@@ -20,7 +20,8 @@ export function LoadList({ kind }: { kind: Kind }) {
 
   function add() {
     const value = `0 ${customaryUnit(`loads.${kind}.0.value`, system)}`;
-    const row = kind === 'point' ? { case: 'L', value, at: getValues('member.length') } : { case: 'L', value };
+    const row =
+      kind === 'point' ? { case: 'L', value, at: getValues('member.length') } : { case: 'L', value };
     append(row as never);
   }
 
@@ -34,17 +35,30 @@ export function LoadList({ kind }: { kind: Kind }) {
       </div>
       {fields.length === 0 ? <p className="text-xs text-concrete-500">none</p> : null}
       {fields.map((row, i) => (
-        <div key={row.id} className="grid grid-cols-[4rem_1fr_auto] items-end gap-1.5 rounded bg-concrete-50 p-1.5">
+        <div
+          key={row.id}
+          className="grid grid-cols-[4rem_1fr_auto] items-end gap-1.5 rounded bg-concrete-50 p-1.5"
+        >
           <SelectField name={`loads.${kind}.${i}.case`} label="Case">
             {LOAD_CASES.map((c) => (
-              <option key={c} value={c}>{c}</option>
+              <option key={c} value={c}>
+                {c}
+              </option>
             ))}
           </SelectField>
           <QuantityField name={`loads.${kind}.${i}.value`} label={kind === 'point' ? 'Force' : 'Value'} />
-          <Button size="sm" variant="ghost" onClick={() => remove(i)} aria-label={`Remove ${NOUN[kind]} ${i + 1}`} className="mb-1">
+          <Button
+            size="sm"
+            variant="ghost"
+            onClick={() => remove(i)}
+            aria-label={`Remove ${NOUN[kind]} ${i + 1}`}
+            className="mb-1"
+          >
             <Trash2 size={14} aria-hidden="true" />
           </Button>
-          {kind === 'point' ? <QuantityField name={`loads.point.${i}.at`} label="At, from the root" className="col-start-2" /> : null}
+          {kind === 'point' ? (
+            <QuantityField name={`loads.point.${i}.at`} label="At, from the root" className="col-start-2" />
+          ) : null}
         </div>
       ))}
     </div>

@@ -30,7 +30,11 @@ export function LoadsGroup({ disabled }: { disabled: boolean }) {
       if (!spacing.ok || !perLength.ok) return;
       value = `${plainNumber(convert(perLength.value * spacing.value, 'kip', unit))} ${unit}`;
     }
-    setValue('loads.point', [...(getValues('loads.point') ?? []), { case: preset.case, value, at: length }], opts);
+    setValue(
+      'loads.point',
+      [...(getValues('loads.point') ?? []), { case: preset.case, value, at: length }],
+      opts,
+    );
   }
 
   return (
@@ -46,16 +50,21 @@ export function LoadsGroup({ disabled }: { disabled: boolean }) {
       <LoadList kind="line" />
       <LoadList kind="point" />
       <div className="mt-1 border-t border-concrete-200 pt-2">
-        <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-concrete-600">Common deck loads</h3>
+        <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-concrete-600">
+          Common deck loads
+        </h3>
         <ul className="flex flex-col gap-1">
           {LOAD_PRESETS.map((p) => (
             <li key={p.id} className="flex items-start justify-between gap-2 text-xs">
               <span>
-                <span className="font-medium">{p.label}</span> <span className="text-concrete-500">({p.case})</span>
+                <span className="font-medium">{p.label}</span>{' '}
+                <span className="text-concrete-500">({p.case})</span>
                 <br />
                 <span className="text-concrete-500">{p.source}</span>
               </span>
-              <Button size="sm" onClick={() => addPreset(p)} aria-label={`Add preset: ${p.label}`}>Add</Button>
+              <Button size="sm" onClick={() => addPreset(p)} aria-label={`Add preset: ${p.label}`}>
+                Add
+              </Button>
             </li>
           ))}
         </ul>

@@ -29,20 +29,38 @@ export function MemberSketch({ result }: { result: DesignResult }) {
   const rootText = `${plainNumber(root)} ${small}`;
   const tipText = `${plainNumber(tip)} ${small}`;
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-labelledby="member-sketch-title member-sketch-desc">
+    <svg
+      viewBox={`0 0 ${W} ${H}`}
+      className="w-full"
+      role="img"
+      aria-labelledby="member-sketch-title member-sketch-desc"
+    >
       <title id="member-sketch-title">Member elevation, to scale</title>
       <desc id="member-sketch-desc">
         {`${result.member.section.label}: ${len} long, ${rootText} deep at the root and ${tipText} deep at the tip${root !== tip ? ' (tapered)' : ''}.`}
       </desc>
       <rect x={PAD} y={y0 - 10} width={30} height={h + 30} fill="#c3bdb3" stroke="#857d71" />
       <polygon points={outline} fill="#fae1cf" stroke="#a94714" strokeWidth={1.5} />
-      <g stroke="#56504a" strokeWidth={0.8} fill="#56504a" fontSize={11} fontFamily="IBM Plex Mono, monospace">
+      <g
+        stroke="#56504a"
+        strokeWidth={0.8}
+        fill="#56504a"
+        fontSize={11}
+        fontFamily="IBM Plex Mono, monospace"
+      >
         <line x1={x0} y1={y0 + h + 22} x2={x0 + length * scale} y2={y0 + h + 22} />
         <line x1={x0} y1={y0 + h + 16} x2={x0} y2={y0 + h + 28} />
         <line x1={x0 + length * scale} y1={y0 + h + 16} x2={x0 + length * scale} y2={y0 + h + 28} />
-        <text x={x0 + (length * scale) / 2} y={y0 + h + 40} textAnchor="middle" stroke="none">{len}</text>
+        <text x={x0 + (length * scale) / 2} y={y0 + h + 40} textAnchor="middle" stroke="none">
+          {len}
+        </text>
         <text x={x0 + 4} y={y0 + root * scale + 14} stroke="none">{`root ${rootText}`}</text>
-        <text x={x0 + length * scale} y={y0 + tip * scale + 14} textAnchor="end" stroke="none">{`tip ${tipText}`}</text>
+        <text
+          x={x0 + length * scale}
+          y={y0 + tip * scale + 14}
+          textAnchor="end"
+          stroke="none"
+        >{`tip ${tipText}`}</text>
       </g>
     </svg>
   );

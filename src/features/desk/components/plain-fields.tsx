@@ -21,14 +21,31 @@ export function useFieldError(name: string): string | undefined {
 }
 
 /** A whole number or ratio; the browser keeps what is typed, the schema says what is wrong. */
-export function NumberField({ name, label, hint, step = 1 }: { name: string; label: string; hint?: string; step?: number }) {
+export function NumberField({
+  name,
+  label,
+  hint,
+  step = 1,
+}: {
+  name: string;
+  label: string;
+  hint?: string;
+  step?: number;
+}) {
   const { register } = useFormContext<DesignDocument>();
   const error = useFieldError(name);
   const id = fieldId(name);
   return (
     <Field id={id} label={label} error={error} hint={hint}>
-      <input id={id} type="number" step={step} inputMode="numeric" className={inputClass(Boolean(error), 'font-mono')}
-        {...describedBy(id, error, Boolean(hint))} {...register(name as Name, { valueAsNumber: true })} />
+      <input
+        id={id}
+        type="number"
+        step={step}
+        inputMode="numeric"
+        className={inputClass(Boolean(error), 'font-mono')}
+        {...describedBy(id, error, Boolean(hint))}
+        {...register(name as Name, { valueAsNumber: true })}
+      />
     </Field>
   );
 }
@@ -39,7 +56,12 @@ export function SelectField({ name, label, children }: { name: string; label: st
   const id = fieldId(name);
   return (
     <Field id={id} label={label} error={error}>
-      <select id={id} className={inputClass(Boolean(error))} {...describedBy(id, error)} {...register(name as Name)}>
+      <select
+        id={id}
+        className={inputClass(Boolean(error))}
+        {...describedBy(id, error)}
+        {...register(name as Name)}
+      >
         {children}
       </select>
     </Field>
@@ -58,10 +80,22 @@ export function CheckField({ name, label }: { name: string; label: string }) {
 }
 
 /** One input group of the desk, collapsible, with its own heading. */
-export function Group({ title, children, disabled = false, note }: { title: string; children: ReactNode; disabled?: boolean; note?: string }) {
+export function Group({
+  title,
+  children,
+  disabled = false,
+  note,
+}: {
+  title: string;
+  children: ReactNode;
+  disabled?: boolean;
+  note?: string;
+}) {
   return (
     <details open className="rounded-md border border-concrete-300 bg-white">
-      <summary className="cursor-pointer select-none px-3 py-2 text-sm font-semibold text-concrete-800">{title}</summary>
+      <summary className="cursor-pointer select-none px-3 py-2 text-sm font-semibold text-concrete-800">
+        {title}
+      </summary>
       <fieldset disabled={disabled} className="flex flex-col gap-2 px-3 pb-3">
         <legend className="sr-only">{title}</legend>
         {disabled && note ? <p className="text-xs text-concrete-500">{note}</p> : null}

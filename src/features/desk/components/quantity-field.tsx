@@ -19,7 +19,14 @@ export interface QuantityFieldProps {
  * A quantity typed with its unit ("10 ft"), with a small chooser that rewrites the same physical
  * value in another unit. The error (schema or engine) sits right under it in plain words.
  */
-export function QuantityField({ name, label, hint, optional = false, placeholder, className }: QuantityFieldProps) {
+export function QuantityField({
+  name,
+  label,
+  hint,
+  optional = false,
+  placeholder,
+  className,
+}: QuantityFieldProps) {
   const { control } = useFormContext<DesignDocument>();
   const {
     field: { value, onChange, onBlur, ref },
@@ -66,7 +73,9 @@ export function QuantityField({ name, label, hint, optional = false, placeholder
           >
             {chosen ? null : <option value="">unit…</option>}
             {choices.map((c) => (
-              <option key={c} value={c}>{c}</option>
+              <option key={c} value={c}>
+                {c}
+              </option>
             ))}
           </select>
         ) : null}

@@ -9,13 +9,30 @@ export function ReachGroup({ disabled }: { disabled: boolean }) {
         <QuantityField name="member.length" label="Length (root to tip)" />
         <QuantityField name="member.spacing" label="Spacing" hint="tributary width" />
       </div>
-      <QuantityField name="member.unbracedLength" label="Unbraced length, bottom flange" optional hint="blank = the whole length (unbraced)" />
+      <QuantityField
+        name="member.unbracedLength"
+        label="Unbraced length, bottom flange"
+        optional
+        hint="blank = the whole length (unbraced)"
+      />
       <div className="grid grid-cols-2 gap-2">
-        <NumberField name="deflectionLimits.live" label="Live deflection limit, span /" hint="span = 2 × length" />
-        <NumberField name="deflectionLimits.total" label="Total deflection limit, span /" hint="IBC Table 1604.3" />
+        <NumberField
+          name="deflectionLimits.live"
+          label="Live deflection limit, span /"
+          hint="span = 2 × length"
+        />
+        <NumberField
+          name="deflectionLimits.total"
+          label="Total deflection limit, span /"
+          hint="IBC Table 1604.3"
+        />
       </div>
-      <QuantityField name="frequencyMin" label="Lowest natural frequency" optional
-        hint="blank = not checked; 8 Hz is a common floor-vibration threshold (example value, common practice)" />
+      <QuantityField
+        name="frequencyMin"
+        label="Lowest natural frequency"
+        optional
+        hint="blank = not checked; 8 Hz is a common floor-vibration threshold (example value, common practice)"
+      />
     </Group>
   );
 }

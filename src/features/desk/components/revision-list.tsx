@@ -12,20 +12,33 @@ export function RevisionList({ cantileverId, current }: { cantileverId: number; 
   const list = [...revisions.data].sort((a, b) => b.number - a.number);
   return (
     <div>
-      {list.length === 0 ? <p className="text-sm text-concrete-600">Not saved yet: the first save makes revision 1.</p> : (
-        <ol className="flex flex-col divide-y divide-concrete-200 text-sm" aria-label="Revisions" data-testid="revision-list">
+      {list.length === 0 ? (
+        <p className="text-sm text-concrete-600">Not saved yet: the first save makes revision 1.</p>
+      ) : (
+        <ol
+          className="flex flex-col divide-y divide-concrete-200 text-sm"
+          aria-label="Revisions"
+          data-testid="revision-list"
+        >
           {list.map((r) => (
             <li key={r.id} className="flex flex-wrap items-baseline gap-x-2 py-1.5">
-              <span className="num font-mono font-semibold">rev {r.number}{r.number === current ? ' ·' : ''}</span>
+              <span className="num font-mono font-semibold">
+                rev {r.number}
+                {r.number === current ? ' ·' : ''}
+              </span>
               <span className="flex-1">{r.message}</span>
               <span className="text-xs text-concrete-600">{r.authorName}</span>
-              <time className="num text-xs text-concrete-500" dateTime={r.createdAt}>{new Date(r.createdAt).toLocaleString()}</time>
+              <time className="num text-xs text-concrete-500" dateTime={r.createdAt}>
+                {new Date(r.createdAt).toLocaleString()}
+              </time>
               <ReviewStateBadge state={r.reviewState} />
             </li>
           ))}
         </ol>
       )}
-      <Link to={paths.history(cantileverId)} className="mt-2 inline-block text-sm text-oxide-700 underline">Open the history</Link>
+      <Link to={paths.history(cantileverId)} className="mt-2 inline-block text-sm text-oxide-700 underline">
+        Open the history
+      </Link>
     </div>
   );
 }

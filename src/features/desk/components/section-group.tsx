@@ -22,8 +22,20 @@ function sectionFor(mode: Mode, from: Section | undefined, si: boolean): Section
   if (mode === 'tapered') return { shape, tipDepth: si ? '180 mm' : '7 in' };
   return {
     plates: si
-      ? { rootDepth: '400 mm', tipDepth: '200 mm', flangeWidth: '150 mm', flangeThickness: '12 mm', webThickness: '6 mm' }
-      : { rootDepth: '16 in', tipDepth: '8 in', flangeWidth: '6 in', flangeThickness: '0.5 in', webThickness: '0.25 in' },
+      ? {
+          rootDepth: '400 mm',
+          tipDepth: '200 mm',
+          flangeWidth: '150 mm',
+          flangeThickness: '12 mm',
+          webThickness: '6 mm',
+        }
+      : {
+          rootDepth: '16 in',
+          tipDepth: '8 in',
+          flangeWidth: '6 in',
+          flangeThickness: '0.5 in',
+          webThickness: '0.25 in',
+        },
   };
 }
 
@@ -44,13 +56,22 @@ export function SectionGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
   return (
     <Group title="Section" disabled={disabled} note="Your role may not change the member.">
       <Field id="section-kind" label="Kind of section">
-        <select id="section-kind" value={mode} onChange={(e) => changeMode(e.target.value as Mode)} className={inputClass(false)}>
+        <select
+          id="section-kind"
+          value={mode}
+          onChange={(e) => changeMode(e.target.value as Mode)}
+          className={inputClass(false)}
+        >
           <option value="catalog">Catalog shape, same along the member</option>
           <option value="tapered">Rolled W, web cut to a taper</option>
           <option value="plates">Built-up I from plates, tapered</option>
         </select>
       </Field>
-      {sectionError ? <p role="alert" className="text-xs text-util-over">Section {sectionError}</p> : null}
+      {sectionError ? (
+        <p role="alert" className="text-xs text-util-over">
+          Section {sectionError}
+        </p>
+      ) : null}
       {mode !== 'plates' ? (
         <div className="flex items-end gap-2">
           <ShapeNameField name="member.section.shape" label="Shape" className="flex-1" />
@@ -59,7 +80,13 @@ export function SectionGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
           </Button>
         </div>
       ) : null}
-      {mode === 'tapered' ? <QuantityField name="member.section.tipDepth" label="Depth at the tip" hint="full depth at the root" /> : null}
+      {mode === 'tapered' ? (
+        <QuantityField
+          name="member.section.tipDepth"
+          label="Depth at the tip"
+          hint="full depth at the root"
+        />
+      ) : null}
       {mode === 'plates' ? (
         <div className="grid grid-cols-2 gap-2">
           <QuantityField name="member.section.plates.rootDepth" label="Depth at the root" />
@@ -70,7 +97,12 @@ export function SectionGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
         </div>
       ) : null}
       <div className="grid grid-cols-2 gap-2">
-        <QuantityField name="member.steel.Fy" label="Steel Fy" optional hint="blank = A992 (W) / A500 Gr C (HSS)" />
+        <QuantityField
+          name="member.steel.Fy"
+          label="Steel Fy"
+          optional
+          hint="blank = A992 (W) / A500 Gr C (HSS)"
+        />
         <QuantityField name="member.steel.E" label="Steel E" optional hint="blank = 29000 ksi" />
       </div>
     </Group>

@@ -26,10 +26,24 @@ function FootprintField({ onBrowse }: { onBrowse: () => void }) {
   const value = (footprint as { shape?: string } | undefined)?.shape ?? '';
   return (
     <div className="flex items-end gap-2">
-      <Field id={id} label="Footprint on the plate" error={error} hint="blank = the member at the root" className="flex-1">
-        <input id={id} value={value} ref={ref} onBlur={onBlur} autoComplete="off" spellCheck={false}
+      <Field
+        id={id}
+        label="Footprint on the plate"
+        error={error}
+        hint="blank = the member at the root"
+        className="flex-1"
+      >
+        <input
+          id={id}
+          value={value}
+          ref={ref}
+          onBlur={onBlur}
+          autoComplete="off"
+          spellCheck={false}
           onChange={(e) => onChange(e.target.value.trim() ? { shape: e.target.value } : undefined)}
-          className={inputClass(Boolean(error), 'font-mono uppercase')} {...describedBy(id, error, true)} />
+          className={inputClass(Boolean(error), 'font-mono uppercase')}
+          {...describedBy(id, error, true)}
+        />
       </Field>
       <Button onClick={onBrowse} aria-label="Browse shapes for the post footprint" className="mb-4">
         <BookOpen size={14} aria-hidden="true" /> Browse
@@ -55,17 +69,26 @@ export function SupportGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
     }
     const existing = getValues('connection');
     if (existing) return setValue('connection.arrangement', next, opts);
-    if (lastConnection.current) return setValue('connection', { ...lastConnection.current, arrangement: next }, opts);
+    if (lastConnection.current)
+      return setValue('connection', { ...lastConnection.current, arrangement: next }, opts);
     const system = getValues('units') === 'SI' ? 'SI' : 'US';
     const base = { ...DEFAULT_CONNECTION, arrangement: next };
-    const converted = switchUnits({ member: { length: '1 ft', spacing: '1 ft', section: { shape: 'W12X26' } }, connection: base }, system).doc;
+    const converted = switchUnits(
+      { member: { length: '1 ft', spacing: '1 ft', section: { shape: 'W12X26' } }, connection: base },
+      system,
+    ).doc;
     setValue('connection', converted.connection, opts);
   }
 
   return (
     <Group title="Support" disabled={disabled} note="Your role may not change the connection.">
       <Field id="support-arrangement" label="Held at the pier by">
-        <select id="support-arrangement" value={current} onChange={(e) => choose(e.target.value as Arrangement)} className={inputClass(false)}>
+        <select
+          id="support-arrangement"
+          value={current}
+          onChange={(e) => choose(e.target.value as Arrangement)}
+          className={inputClass(false)}
+        >
           <option value="post-base">A post on a base plate on top of the pier</option>
           <option value="face-plate">An end plate on the face of the pier or wall</option>
           <option value="none">No connection (check the member only)</option>
@@ -87,7 +110,9 @@ export function SupportGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
             <QuantityField name="connection.anchors.diameter" label="Rod diameter" />
             <SelectField name="connection.anchors.grade" label="Grade (ASTM F1554)">
               {ANCHOR_GRADES.map((g) => (
-                <option key={g} value={g}>{g.replace('F1554-', 'Grade ')}</option>
+                <option key={g} value={g}>
+                  {g.replace('F1554-', 'Grade ')}
+                </option>
               ))}
             </SelectField>
             <QuantityField name="connection.anchors.embedment" label="Embedment hef" />
@@ -97,7 +122,9 @@ export function SupportGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
           <h3 className="text-xs font-semibold uppercase tracking-wide text-concrete-600">Concrete pier</h3>
           <div className="grid grid-cols-2 gap-2">
             <QuantityField name="connection.concrete.fc" label="f'c" />
-            <div className="flex items-end pb-1"><CheckField name="connection.concrete.cracked" label="Cracked concrete" /></div>
+            <div className="flex items-end pb-1">
+              <CheckField name="connection.concrete.cracked" label="Cracked concrete" />
+            </div>
             <QuantityField name="connection.pier.length" label="Pier length, along N" />
             <QuantityField name="connection.pier.width" label="Pier width, along B" />
           </div>

@@ -3,7 +3,11 @@ import type { UnitSystem } from '../../../../shared/engine/units';
 /** US / SI for the whole desk: a two-button radio group. */
 export function UnitSwitch({ value, onChange }: { value: UnitSystem; onChange: (next: UnitSystem) => void }) {
   return (
-    <div role="radiogroup" aria-label="Units" className="inline-flex overflow-hidden rounded border border-concrete-300 text-xs">
+    <div
+      role="radiogroup"
+      aria-label="Units"
+      className="inline-flex overflow-hidden rounded border border-concrete-300 text-xs"
+    >
       {(['US', 'SI'] as const).map((system) => (
         <button
           key={system}

@@ -7,16 +7,29 @@ export function Verdict({ checks, stale }: { checks: readonly Check[] | null; st
   const v = checks ? verdictOf(checks) : null;
   return (
     <div className="rounded-md border border-concrete-300 bg-white p-3">
-      <p aria-live="polite" data-testid="verdict" className={`flex items-center gap-2 font-semibold ${v?.pass ? 'text-util-calm' : 'text-util-over'}`}>
+      <p
+        aria-live="polite"
+        data-testid="verdict"
+        className={`flex items-center gap-2 font-semibold ${v?.pass ? 'text-util-calm' : 'text-util-over'}`}
+      >
         {v === null ? (
           <span className="text-concrete-600">No result yet.</span>
         ) : (
           <>
-            {v.pass ? <CheckCircle2 size={18} aria-hidden="true" /> : <XCircle size={18} aria-hidden="true" />}
-            <span>{v.pass ? 'Passes. ' : 'Does not pass. '}{v.sentence}</span>
+            {v.pass ? (
+              <CheckCircle2 size={18} aria-hidden="true" />
+            ) : (
+              <XCircle size={18} aria-hidden="true" />
+            )}
+            <span>
+              {v.pass ? 'Passes. ' : 'Does not pass. '}
+              {v.sentence}
+            </span>
           </>
         )}
-        {stale && v ? <span className="text-xs font-normal text-concrete-500">(for the last inputs that computed)</span> : null}
+        {stale && v ? (
+          <span className="text-xs font-normal text-concrete-500">(for the last inputs that computed)</span>
+        ) : null}
       </p>
       <p className="mt-1 flex items-start gap-1.5 text-xs text-concrete-700" data-testid="caution">
         <AlertTriangle size={14} className="mt-px shrink-0 text-oxide-500" aria-hidden="true" />

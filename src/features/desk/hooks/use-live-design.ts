@@ -27,7 +27,15 @@ export interface LiveDesign {
 // One shared empty list: a fresh [] per answer would change the engine-issues context on every
 // result and re-render every field of the form.
 const NO_ISSUES: FieldIssue[] = [];
-const EMPTY: LiveDesign = { result: null, resultId: 0, issues: NO_ISSUES, failure: null, stale: true, engineMs: 0, doc: null };
+const EMPTY: LiveDesign = {
+  result: null,
+  resultId: 0,
+  issues: NO_ISSUES,
+  failure: null,
+  stale: true,
+  engineMs: 0,
+  doc: null,
+};
 
 interface Engine {
   post(message: WorkerRequest): void;
@@ -75,7 +83,8 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
 
   useEffect(() => {
     const e = startEngine((reply) => {
-      if (performance.getEntriesByName(`desk-input-${reply.id}`, 'mark').length > 0) performance.measure('desk-engine', `desk-input-${reply.id}`);
+      if (performance.getEntriesByName(`desk-input-${reply.id}`, 'mark').length > 0)
+        performance.measure('desk-engine', `desk-input-${reply.id}`);
       const next = queued.current;
       queued.current = null;
       if (next) engine.current?.post({ type: 'evaluate', ...next });
@@ -89,9 +98,18 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
         setBusy(Boolean(next));
         setLive((prev) => {
           if (reply.kind === 'result') {
-            return { result: reply.result, resultId: reply.id, issues: NO_ISSUES, failure: null, stale: Boolean(next), engineMs: reply.ms, doc };
+            return {
+              result: reply.result,
+              resultId: reply.id,
+              issues: NO_ISSUES,
+              failure: null,
+              stale: Boolean(next),
+              engineMs: reply.ms,
+              doc,
+            };
           }
-          if (reply.kind === 'invalid') return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
+          if (reply.kind === 'invalid')
+            return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
           return { ...prev, issues: NO_ISSUES, failure: reply.message, stale: true, engineMs: reply.ms };
         });
       });

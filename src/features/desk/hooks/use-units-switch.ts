@@ -17,11 +17,18 @@ export function replaceKeepingDirty(form: Form, baseline: DesignDocument, values
  * same physical design does not count as an unsaved change; a switch straight back restores the text.
  */
 export function useUnitsSwitch(form: Form) {
-  const records = useRef<{ values: SwitchRecord | null; baseline: SwitchRecord | null }>({ values: null, baseline: null });
+  const records = useRef<{ values: SwitchRecord | null; baseline: SwitchRecord | null }>({
+    values: null,
+    baseline: null,
+  });
   return useCallback(
     (to: UnitSystem) => {
       const values = switchUnits(form.getValues(), to, records.current.values);
-      const baseline = switchUnits(form.formState.defaultValues as DesignDocument, to, records.current.baseline);
+      const baseline = switchUnits(
+        form.formState.defaultValues as DesignDocument,
+        to,
+        records.current.baseline,
+      );
       records.current = { values: values.record, baseline: baseline.record };
       replaceKeepingDirty(form, baseline.doc, values.doc);
     },

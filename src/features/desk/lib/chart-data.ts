@@ -13,8 +13,18 @@ export function seriesChoices(result: DesignResult): SeriesChoice[] {
   const s = result.stations;
   if (!s) return [];
   return [
-    ...s.combinations.map((series) => ({ key: `combination:${series.name}`, label: series.name, kind: 'combination' as const, series })),
-    ...s.cases.map((series) => ({ key: `case:${series.name}`, label: `${series.name} alone (unfactored)`, kind: 'case' as const, series })),
+    ...s.combinations.map((series) => ({
+      key: `combination:${series.name}`,
+      label: series.name,
+      kind: 'combination' as const,
+      series,
+    })),
+    ...s.cases.map((series) => ({
+      key: `case:${series.name}`,
+      label: `${series.name} alone (unfactored)`,
+      kind: 'case' as const,
+      series,
+    })),
   ];
 }
 
@@ -35,8 +45,18 @@ export interface ChartRow {
   limit?: number;
 }
 
-export function chartRows(x: readonly number[], series: StationSeries, limit: number | null = null): ChartRow[] {
-  return x.map((xi, i) => ({ x: xi, M: series.M[i], V: series.V[i], d: series.deflection[i], ...(limit !== null ? { limit } : {}) }));
+export function chartRows(
+  x: readonly number[],
+  series: StationSeries,
+  limit: number | null = null,
+): ChartRow[] {
+  return x.map((xi, i) => ({
+    x: xi,
+    M: series.M[i],
+    V: series.V[i],
+    d: series.deflection[i],
+    ...(limit !== null ? { limit } : {}),
+  }));
 }
 
 /** The deflection limit (span = 2 × length) in the chart's deflection unit. */

@@ -59,8 +59,10 @@ export function verdictOf(checks: readonly Check[]): Verdict {
   const total = checks.length;
   const notComputed = checks.filter((c) => checkWord(c) === 'not computed').length;
   const failing = checks.filter((c) => !passes(c)).length;
-  if (total === 0) return { pass: false, failing: 0, notComputed: 0, total, sentence: 'No checks were computed.' };
-  if (failing === 0) return { pass: true, failing, notComputed, total, sentence: `All ${total} checks pass.` };
+  if (total === 0)
+    return { pass: false, failing: 0, notComputed: 0, total, sentence: 'No checks were computed.' };
+  if (failing === 0)
+    return { pass: true, failing, notComputed, total, sentence: `All ${total} checks pass.` };
   const parts = [`${failing} of ${total} checks do not pass`];
   if (notComputed > 0) parts.push(`${notComputed} of them could not be computed`);
   return { pass: false, failing, notComputed, total, sentence: `${parts.join('; ')}.` };

@@ -32,7 +32,8 @@ export const LOAD_PRESETS: readonly LoadPreset[] = [
     case: 'L',
     value: '50 lbf/ft',
     perLength: true,
-    source: 'Guard top-rail load 50 lb/ft, IBC 1607.8.1 [from memory]; need not act together with the 200 lb load',
+    source:
+      'Guard top-rail load 50 lb/ft, IBC 1607.8.1 [from memory]; need not act together with the 200 lb load',
   },
   {
     id: 'guard-point',

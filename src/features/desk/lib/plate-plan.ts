@@ -3,7 +3,12 @@
  * pier, footprint outline, rods, DG1 holes and washers, edge distances) and the result's bearing
  * length. Internal inches; x along N toward the tension row, y along B, origin at the plate centre.
  */
-import { bearingZoneFromResult, plateLayout, type PlateLayout, type Rect } from '../../../../shared/engine/connection/plate-layout';
+import {
+  bearingZoneFromResult,
+  plateLayout,
+  type PlateLayout,
+  type Rect,
+} from '../../../../shared/engine/connection/plate-layout';
 import { lookupWith } from '../../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { DesignResult, RootFootprint } from '../../../../shared/engine/types';
@@ -37,7 +42,11 @@ function rootOf(doc: DesignDocument, find: (label: string) => ShapeRecord | unde
   return d && bf && tf ? { label: 'built-up I', family: 'I', d, bf, tf } : null;
 }
 
-export function platePlan(doc: DesignDocument, result: DesignResult | null, custom: readonly ShapeRecord[] = []): PlatePlan | null {
+export function platePlan(
+  doc: DesignDocument,
+  result: DesignResult | null,
+  custom: readonly ShapeRecord[] = [],
+): PlatePlan | null {
   const parsed = connectionSchema.safeParse(doc.connection);
   if (!doc.connection || !parsed.success) return null;
   const find = lookupWith(custom);

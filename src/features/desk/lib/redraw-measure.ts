@@ -17,7 +17,8 @@ export function noteChartsCommitted(id: number): () => void {
   const mark = `desk-input-${id}`;
   const channel = new MessageChannel();
   channel.port1.onmessage = () => {
-    if (performance.getEntriesByName(mark, 'mark').length > 0) performance.measure('desk-redraw-next-task', mark);
+    if (performance.getEntriesByName(mark, 'mark').length > 0)
+      performance.measure('desk-redraw-next-task', mark);
     performance.clearMarks(mark);
   };
   channel.port2.postMessage(null);

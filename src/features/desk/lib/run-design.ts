@@ -18,12 +18,14 @@ export type DesignAnswer =
 export function runDesign(doc: unknown, extraShapes: readonly ShapeRecord[] = []): DesignAnswer {
   const started = performance.now();
   const parsed = designSchema.safeParse(doc);
-  if (!parsed.success) return { kind: 'invalid', issues: toFieldIssues(parsed.error), ms: performance.now() - started };
+  if (!parsed.success)
+    return { kind: 'invalid', issues: toFieldIssues(parsed.error), ms: performance.now() - started };
   try {
     const result = evaluateDesign(parsed.data, { stations: true, shapes: lookupWith(extraShapes) });
     return { kind: 'result', result, ms: performance.now() - started };
   } catch (error) {
-    if (error instanceof DesignInputError) return { kind: 'invalid', issues: error.issues, ms: performance.now() - started };
+    if (error instanceof DesignInputError)
+      return { kind: 'invalid', issues: error.issues, ms: performance.now() - started };
     const message = error instanceof Error ? error.message : String(error);
     return { kind: 'error', message, ms: performance.now() - started };
   }

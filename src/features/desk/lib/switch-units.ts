@@ -18,7 +18,8 @@ function walk(value: unknown, prefix: string, visit: (name: string, text: string
   if (Array.isArray(value)) return value.map((item, i) => walk(item, `${prefix}.${i}`, visit));
   if (value !== null && typeof value === 'object') {
     const out: Record<string, unknown> = {};
-    for (const [key, child] of Object.entries(value)) out[key] = walk(child, prefix ? `${prefix}.${key}` : key, visit);
+    for (const [key, child] of Object.entries(value))
+      out[key] = walk(child, prefix ? `${prefix}.${key}` : key, visit);
     return out;
   }
   if (typeof value === 'string') return visit(prefix, value);

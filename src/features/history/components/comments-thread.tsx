@@ -27,14 +27,21 @@ export function CommentsThread({ revisionId }: { revisionId: number }) {
   return (
     <section aria-label={`Comments on this revision`} className="space-y-3">
       {comments.isPending && <p className="text-sm text-concrete-600">Loading comments…</p>}
-      {comments.isError && <p role="alert" className="text-sm text-util-over">Comments could not be loaded: {errorText(comments.error)}</p>}
-      {comments.data && comments.data.length === 0 && <p className="text-sm text-concrete-600">No comments yet.</p>}
+      {comments.isError && (
+        <p role="alert" className="text-sm text-util-over">
+          Comments could not be loaded: {errorText(comments.error)}
+        </p>
+      )}
+      {comments.data && comments.data.length === 0 && (
+        <p className="text-sm text-concrete-600">No comments yet.</p>
+      )}
       {comments.data && comments.data.length > 0 && (
         <ol className="space-y-2" aria-live="polite">
           {comments.data.map((c) => (
             <li key={c.id} className="rounded border border-concrete-200 bg-white p-2 text-sm">
               <p className="text-xs text-concrete-600">
-                <span className="font-medium text-concrete-800">{c.authorName}</span> · <time dateTime={c.createdAt}>{formatDateTime(c.createdAt)}</time>
+                <span className="font-medium text-concrete-800">{c.authorName}</span> ·{' '}
+                <time dateTime={c.createdAt}>{formatDateTime(c.createdAt)}</time>
               </p>
               <p className="whitespace-pre-wrap text-concrete-900">{c.body}</p>
             </li>
@@ -58,7 +65,11 @@ export function CommentsThread({ revisionId }: { revisionId: number }) {
             Comment {error}
           </p>
         )}
-        {create.isError && <p role="alert" className="text-sm text-util-over">The comment was not saved: {errorText(create.error)}</p>}
+        {create.isError && (
+          <p role="alert" className="text-sm text-util-over">
+            The comment was not saved: {errorText(create.error)}
+          </p>
+        )}
         <button
           type="submit"
           disabled={create.isPending}

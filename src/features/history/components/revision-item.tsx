@@ -20,12 +20,24 @@ interface RevisionItemProps {
 }
 
 /** One revision in the timeline: who, why, when, its review state, verdict and actions. */
-export function RevisionItem({ revision, picked, pickDisabled, onPick, canReview, canSubmit, submitting, onSubmit }: RevisionItemProps) {
+export function RevisionItem({
+  revision,
+  picked,
+  pickDisabled,
+  onPick,
+  canReview,
+  canSubmit,
+  submitting,
+  onSubmit,
+}: RevisionItemProps) {
   const [showComments, setShowComments] = useState(false);
   const pickId = `pick-${revision.id}`;
   const commentsId = `comments-${revision.id}`;
   return (
-    <li className="rounded border border-concrete-200 bg-white p-3 shadow-sm" aria-labelledby={`rev-${revision.id}-title`}>
+    <li
+      className="rounded border border-concrete-200 bg-white p-3 shadow-sm"
+      aria-labelledby={`rev-${revision.id}-title`}
+    >
       <div className="flex flex-wrap items-start gap-3">
         <input
           id={pickId}
@@ -37,7 +49,10 @@ export function RevisionItem({ revision, picked, pickDisabled, onPick, canReview
           className="mt-1 h-4 w-4 accent-oxide-600"
         />
         <div className="min-w-0 flex-1 space-y-1">
-          <h3 id={`rev-${revision.id}-title`} className="flex flex-wrap items-center gap-2 text-base font-semibold text-concrete-900">
+          <h3
+            id={`rev-${revision.id}-title`}
+            className="flex flex-wrap items-center gap-2 text-base font-semibold text-concrete-900"
+          >
             <label htmlFor={pickId} className="cursor-pointer">
               Revision {revision.number}
             </label>
@@ -46,9 +61,12 @@ export function RevisionItem({ revision, picked, pickDisabled, onPick, canReview
           </h3>
           <p className="whitespace-pre-wrap text-sm text-concrete-900">{revision.message}</p>
           <p className="text-xs text-concrete-600">
-            {revision.authorName} · <time dateTime={revision.createdAt}>{formatDateTime(revision.createdAt)}</time> ·{' '}
-            {revision.baseRevisionNumber === null ? 'first revision' : `based on revision ${revision.baseRevisionNumber}`} · engine{' '}
-            {revision.engineVersion}
+            {revision.authorName} ·{' '}
+            <time dateTime={revision.createdAt}>{formatDateTime(revision.createdAt)}</time> ·{' '}
+            {revision.baseRevisionNumber === null
+              ? 'first revision'
+              : `based on revision ${revision.baseRevisionNumber}`}{' '}
+            · engine {revision.engineVersion}
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
@@ -64,12 +82,18 @@ export function RevisionItem({ revision, picked, pickDisabled, onPick, canReview
             </button>
           )}
           {revision.reviewState === 'submitted' && canReview && (
-            <Link to={paths.review(revision.id)} className="rounded border border-oxide-600 px-3 py-1 text-sm font-medium text-oxide-700 hover:bg-oxide-50">
+            <Link
+              to={paths.review(revision.id)}
+              className="rounded border border-oxide-600 px-3 py-1 text-sm font-medium text-oxide-700 hover:bg-oxide-50"
+            >
               Open review of revision {revision.number}
             </Link>
           )}
           {(revision.reviewState === 'approved' || revision.reviewState === 'changes-requested') && (
-            <Link to={paths.review(revision.id)} className="rounded border border-concrete-300 px-3 py-1 text-sm text-concrete-800 hover:bg-concrete-50">
+            <Link
+              to={paths.review(revision.id)}
+              className="rounded border border-concrete-300 px-3 py-1 text-sm text-concrete-800 hover:bg-concrete-50"
+            >
               Review record
             </Link>
           )}

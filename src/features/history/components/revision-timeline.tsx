@@ -29,13 +29,20 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
   const latest = revisions[0];
 
   function onPick(revisionId: number, on: boolean) {
-    setPicked((current) => (on ? [...current.filter((id) => id !== revisionId), revisionId].slice(-2) : current.filter((id) => id !== revisionId)));
+    setPicked((current) =>
+      on
+        ? [...current.filter((id) => id !== revisionId), revisionId].slice(-2)
+        : current.filter((id) => id !== revisionId),
+    );
   }
 
   function onSubmit(revision: RevisionSummaryDto) {
     setStatus('');
     submit.mutate(revision.id, {
-      onSuccess: () => setStatus(`Revision ${revision.number} was submitted for review. The project's engineers were notified.`),
+      onSuccess: () =>
+        setStatus(
+          `Revision ${revision.number} was submitted for review. The project's engineers were notified.`,
+        ),
     });
   }
 
@@ -45,7 +52,9 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3 rounded border border-concrete-200 bg-concrete-50 p-3 text-sm">
         <span id="compare-hint" aria-live="polite" className="text-concrete-700">
-          {pair.length === 2 ? `Revisions ${pair[0].number} and ${pair[1].number} picked.` : `Pick two revisions to compare (${pair.length} of 2 picked).`}
+          {pair.length === 2
+            ? `Revisions ${pair[0].number} and ${pair[1].number} picked.`
+            : `Pick two revisions to compare (${pair.length} of 2 picked).`}
         </span>
         {pair.length === 2 ? (
           <Link
@@ -56,7 +65,10 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
             Compare revision {pair[0].number} with {pair[1].number}
           </Link>
         ) : (
-          <span aria-hidden="true" className="inline-flex items-center gap-1 rounded bg-concrete-200 px-3 py-1 text-concrete-600">
+          <span
+            aria-hidden="true"
+            className="inline-flex items-center gap-1 rounded bg-concrete-200 px-3 py-1 text-concrete-600"
+          >
             <GitCompare className="h-4 w-4" />
             Compare
           </span>

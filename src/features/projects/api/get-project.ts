@@ -8,7 +8,10 @@ export function getProject(projectId: number, signal?: AbortSignal): Promise<Pro
 }
 
 export function projectQueryOptions(projectId: number) {
-  return queryOptions({ queryKey: projectKeys.detail(projectId), queryFn: ({ signal }) => getProject(projectId, signal) });
+  return queryOptions({
+    queryKey: projectKeys.detail(projectId),
+    queryFn: ({ signal }) => getProject(projectId, signal),
+  });
 }
 
 export function useProject(projectId: number) {

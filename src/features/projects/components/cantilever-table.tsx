@@ -6,7 +6,8 @@ import { VerdictWord } from '../../../components/ui/verdict-word';
 
 /** The project's cantilevers with their current revision, review state and pass/fail word. */
 export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] }) {
-  if (cantilevers.length === 0) return <p className="text-sm text-concrete-600">No cantilevers in this project yet.</p>;
+  if (cantilevers.length === 0)
+    return <p className="text-sm text-concrete-600">No cantilevers in this project yet.</p>;
   return (
     <table className="w-full border-collapse text-sm">
       <thead>
@@ -22,12 +23,23 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
         {cantilevers.map((c) => (
           <tr key={c.id} className="border-b border-concrete-200">
             <td className="py-2 pr-3">
-              <Link to={paths.desk(c.id)} className="font-medium text-oxide-700 underline-offset-2 hover:underline">{c.name}</Link>
+              <Link
+                to={paths.desk(c.id)}
+                className="font-medium text-oxide-700 underline-offset-2 hover:underline"
+              >
+                {c.name}
+              </Link>
               {c.description ? <div className="text-xs text-concrete-500">{c.description}</div> : null}
             </td>
-            <td className="num py-2 pr-3">{c.currentRevisionNumber ? `rev ${c.currentRevisionNumber}` : '—'}</td>
-            <td className="py-2 pr-3"><ReviewStateBadge state={c.reviewState} /></td>
-            <td className="py-2 pr-3"><VerdictWord ok={c.ok} /></td>
+            <td className="num py-2 pr-3">
+              {c.currentRevisionNumber ? `rev ${c.currentRevisionNumber}` : '—'}
+            </td>
+            <td className="py-2 pr-3">
+              <ReviewStateBadge state={c.reviewState} />
+            </td>
+            <td className="py-2 pr-3">
+              <VerdictWord ok={c.ok} />
+            </td>
             <td className="num py-2 text-xs text-concrete-600">{new Date(c.updatedAt).toLocaleString()}</td>
           </tr>
         ))}

@@ -12,22 +12,52 @@ const formSchema = z.object({
 type FormValues = z.infer<typeof formSchema>;
 
 /** A new cantilever; its first design starts from the example on the desk. */
-export function CreateCantileverForm({ projectId, onDone }: { projectId: number; onDone: (cantileverId: number) => void }) {
+export function CreateCantileverForm({
+  projectId,
+  onDone,
+}: {
+  projectId: number;
+  onDone: (cantileverId: number) => void;
+}) {
   const create = useCreateCantilever(projectId);
-  const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { name: '', description: '' } });
+  const form = useForm<FormValues>({
+    resolver: zodResolver(formSchema),
+    defaultValues: { name: '', description: '' },
+  });
   const { errors } = form.formState;
   const submit = form.handleSubmit((values) => create.mutate(values, { onSuccess: (c) => onDone(c.id) }));
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-3">
-      <Field id="cantilever-name" label="Name" error={errors.name?.message} hint='e.g. "north deck, typical beam"'>
-        <input id="cantilever-name" data-autofocus className={inputClass(Boolean(errors.name))}
-          {...describedBy('cantilever-name', errors.name?.message, true)} {...form.register('name')} />
+      <Field
+        id="cantilever-name"
+        label="Name"
+        error={errors.name?.message}
+        hint='e.g. "north deck, typical beam"'
+      >
+        <input
+          id="cantilever-name"
+          data-autofocus
+          className={inputClass(Boolean(errors.name))}
+          {...describedBy('cantilever-name', errors.name?.message, true)}
+          {...form.register('name')}
+        />
       </Field>
       <Field id="cantilever-description" label="Description" error={errors.description?.message}>
-        <textarea id="cantilever-description" rows={2} className={inputClass(Boolean(errors.description))} {...form.register('description')} />
+        <textarea
+          id="cantilever-description"
+          rows={2}
+          className={inputClass(Boolean(errors.description))}
+          {...form.register('description')}
+        />
       </Field>
-      {create.isError ? <p role="alert" className="text-sm text-util-over">{create.error.message}</p> : null}
-      <Button type="submit" variant="primary" disabled={create.isPending}>Create cantilever</Button>
+      {create.isError ? (
+        <p role="alert" className="text-sm text-util-over">
+          {create.error.message}
+        </p>
+      ) : null}
+      <Button type="submit" variant="primary" disabled={create.isPending}>
+        Create cantilever
+      </Button>
     </form>
   );
 }

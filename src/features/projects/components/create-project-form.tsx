@@ -17,13 +17,23 @@ export function CreateProjectForm({ onDone }: { onDone: (projectId: number) => v
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-3">
       <Field id="project-name" label="Name" error={errors.name?.message}>
-        <input id="project-name" data-autofocus className={inputClass(Boolean(errors.name))} {...describedBy('project-name', errors.name?.message)} {...form.register('name')} />
+        <input
+          id="project-name"
+          data-autofocus
+          className={inputClass(Boolean(errors.name))}
+          {...describedBy('project-name', errors.name?.message)}
+          {...form.register('name')}
+        />
       </Field>
       <Field id="project-site" label="Site" error={errors.site?.message}>
         <input id="project-site" className={inputClass(Boolean(errors.site))} {...form.register('site')} />
       </Field>
       <Field id="project-code" label="Code basis" error={errors.codeBasis?.message}>
-        <input id="project-code" className={inputClass(Boolean(errors.codeBasis))} {...form.register('codeBasis')} />
+        <input
+          id="project-code"
+          className={inputClass(Boolean(errors.codeBasis))}
+          {...form.register('codeBasis')}
+        />
       </Field>
       <Field id="project-units" label="Units">
         <select id="project-units" className={inputClass(false)} {...form.register('units')}>
@@ -31,8 +41,14 @@ export function CreateProjectForm({ onDone }: { onDone: (projectId: number) => v
           <option value="SI">SI (metric)</option>
         </select>
       </Field>
-      {create.isError ? <p role="alert" className="text-sm text-util-over">{create.error.message}</p> : null}
-      <Button type="submit" variant="primary" disabled={create.isPending}>Create project</Button>
+      {create.isError ? (
+        <p role="alert" className="text-sm text-util-over">
+          {create.error.message}
+        </p>
+      ) : null}
+      <Button type="submit" variant="primary" disabled={create.isPending}>
+        Create project
+      </Button>
     </form>
   );
 }

@@ -6,7 +6,12 @@ export const projectScheduleUrl = (projectId: number) => `/api/projects/${projec
 /** The project's plate schedule as a CSV download (one row per cantilever with a connection). */
 export function ProjectScheduleLink({ projectId }: { projectId: number }) {
   return (
-    <a href={projectScheduleUrl(projectId)} download className="inline-flex items-center gap-1 text-sm text-oxide-700 underline" data-testid="project-schedule-link">
+    <a
+      href={projectScheduleUrl(projectId)}
+      download
+      className="inline-flex items-center gap-1 text-sm text-oxide-700 underline"
+      data-testid="project-schedule-link"
+    >
       <Download size={14} aria-hidden="true" /> Plate schedule (CSV)
     </a>
   );

@@ -10,17 +10,28 @@ export function worstFirst(checks: Check[]): Check[] {
 
 /** Every check with its clause, combination, demand, capacity and ratio, worst first. */
 export function CheckList({ checks }: { checks: Check[] }) {
-  if (checks.length === 0) return <p className="text-sm text-util-over">The stored result has no checks: nothing was verified.</p>;
+  if (checks.length === 0)
+    return <p className="text-sm text-util-over">The stored result has no checks: nothing was verified.</p>;
   return (
     <table className="w-full border-collapse text-sm">
       <caption className="sr-only">Checks of this revision, worst first</caption>
       <thead>
         <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">Check</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Combination</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Demand</th>
-          <th scope="col" className="py-1 pr-3 font-medium">Capacity</th>
-          <th scope="col" className="py-1 font-medium">Ratio</th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Check
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Combination
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Demand
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Capacity
+          </th>
+          <th scope="col" className="py-1 font-medium">
+            Ratio
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -32,9 +43,15 @@ export function CheckList({ checks }: { checks: Check[] }) {
               {check.note && <span className="block text-xs text-concrete-700">{check.note}</span>}
             </th>
             <td className="py-1 pr-3 text-concrete-700">{check.combination ?? '—'}</td>
-            <td className="py-1 pr-3 font-mono tabular-nums">{check.demand ? formatQuantity(check.demand) : '—'}</td>
-            <td className="py-1 pr-3 font-mono tabular-nums">{check.capacity ? formatQuantity(check.capacity) : '—'}</td>
-            <td className="py-1"><RatioCell ratio={check.ratio} ok={check.ok} /></td>
+            <td className="py-1 pr-3 font-mono tabular-nums">
+              {check.demand ? formatQuantity(check.demand) : '—'}
+            </td>
+            <td className="py-1 pr-3 font-mono tabular-nums">
+              {check.capacity ? formatQuantity(check.capacity) : '—'}
+            </td>
+            <td className="py-1">
+              <RatioCell ratio={check.ratio} ok={check.ok} />
+            </td>
           </tr>
         ))}
       </tbody>

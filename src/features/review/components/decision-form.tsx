@@ -34,13 +34,18 @@ export function DecisionForm({ revisionId, revisionNumber, cantileverId, onDecid
   const onSubmit = form.handleSubmit(async (values) => {
     await review.mutateAsync(values);
     onDecided(
-      values.decision === 'approve' ? `You approved revision ${revisionNumber}.` : `You requested changes on revision ${revisionNumber}.`,
+      values.decision === 'approve'
+        ? `You approved revision ${revisionNumber}.`
+        : `You requested changes on revision ${revisionNumber}.`,
     );
   });
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" aria-label="Review decision">
-      <fieldset aria-describedby={errors.decision ? 'decision-error' : undefined} aria-invalid={errors.decision ? true : undefined}>
+      <fieldset
+        aria-describedby={errors.decision ? 'decision-error' : undefined}
+        aria-invalid={errors.decision ? true : undefined}
+      >
         <legend className="text-sm font-medium text-concrete-800">Decision</legend>
         <div className="mt-1 flex flex-wrap gap-4 text-sm">
           <label className="inline-flex items-center gap-2">
@@ -48,13 +53,21 @@ export function DecisionForm({ revisionId, revisionNumber, cantileverId, onDecid
             Approve revision {revisionNumber}
           </label>
           <label className="inline-flex items-center gap-2">
-            <input type="radio" value="request-changes" className="accent-oxide-600" {...form.register('decision')} />
+            <input
+              type="radio"
+              value="request-changes"
+              className="accent-oxide-600"
+              {...form.register('decision')}
+            />
             Request changes
           </label>
         </div>
         {errors.decision && (
           <p id="decision-error" className="text-sm text-util-over">
-            Decision {errors.decision.message === 'must be "approve" or "request-changes"' ? 'must be chosen: approve or request changes' : errors.decision.message}
+            Decision{' '}
+            {errors.decision.message === 'must be "approve" or "request-changes"'
+              ? 'must be chosen: approve or request changes'
+              : errors.decision.message}
           </p>
         )}
       </fieldset>
@@ -76,7 +89,11 @@ export function DecisionForm({ revisionId, revisionNumber, cantileverId, onDecid
           </p>
         )}
       </div>
-      {review.isError && <p role="alert" className="text-sm text-util-over">The decision was not recorded: {errorText(review.error)}</p>}
+      {review.isError && (
+        <p role="alert" className="text-sm text-util-over">
+          The decision was not recorded: {errorText(review.error)}
+        </p>
+      )}
       <Button type="submit" variant="primary" disabled={review.isPending}>
         {review.isPending ? 'Recording…' : 'Record decision'}
       </Button>

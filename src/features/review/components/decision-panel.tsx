@@ -6,7 +6,13 @@ import { decisionAccess, latestDecision } from '../utils/decision-rules';
 import { DecisionForm } from './decision-form';
 
 /** The outcome so far, and the decision form for the engineers who may decide. */
-export function DecisionPanel({ revision, user }: { revision: RevisionDto; user: UserDto | null | undefined }) {
+export function DecisionPanel({
+  revision,
+  user,
+}: {
+  revision: RevisionDto;
+  user: UserDto | null | undefined;
+}) {
   const [status, setStatus] = useState('');
   const access = decisionAccess(user, revision);
   const decision = latestDecision(revision.reviews);
@@ -28,11 +34,20 @@ export function DecisionPanel({ revision, user }: { revision: RevisionDto; user:
             <MessageSquareWarning aria-hidden="true" className="h-5 w-5" />
             Changes requested by {decision.reviewerName} on {formatDate(decision.createdAt)}
           </p>
-          {decision.comment && <blockquote className="mt-1 border-l-2 border-concrete-300 pl-2 whitespace-pre-wrap text-concrete-800">{decision.comment}</blockquote>}
+          {decision.comment && (
+            <blockquote className="mt-1 border-l-2 border-concrete-300 pl-2 whitespace-pre-wrap text-concrete-800">
+              {decision.comment}
+            </blockquote>
+          )}
         </div>
       )}
       {access.allowed ? (
-        <DecisionForm revisionId={revision.id} revisionNumber={revision.number} cantileverId={revision.cantileverId} onDecided={setStatus} />
+        <DecisionForm
+          revisionId={revision.id}
+          revisionNumber={revision.number}
+          cantileverId={revision.cantileverId}
+          onDecided={setStatus}
+        />
       ) : (
         <p className="flex items-start gap-2 text-sm text-concrete-700" data-testid="decision-unavailable">
           <Lock aria-hidden="true" className="mt-0.5 h-4 w-4 shrink-0" />

@@ -3,22 +3,40 @@ import type { DesignDocument } from '../../../../shared/schemas/design';
 import { formatQuantity, type Quantity } from '../../../../shared/engine/units';
 
 function largest<T>(items: T[], value: (item: T) => number): T | undefined {
-  return items.reduce<T | undefined>((best, item) => (best === undefined || value(item) > value(best) ? item : best), undefined);
+  return items.reduce<T | undefined>(
+    (best, item) => (best === undefined || value(item) > value(best) ? item : best),
+    undefined,
+  );
 }
 
-function Item({ term, value, detail }: { term: string; value: Quantity | string | null | undefined; detail?: string }) {
+function Item({
+  term,
+  value,
+  detail,
+}: {
+  term: string;
+  value: Quantity | string | null | undefined;
+  detail?: string;
+}) {
   return (
     <div className="rounded border border-concrete-200 bg-concrete-50 p-2">
       <dt className="text-xs text-concrete-600">{term}</dt>
       <dd className="font-mono text-base tabular-nums text-concrete-900">
-        {value === null || value === undefined ? 'not available' : typeof value === 'string' ? value : formatQuantity(value)}
+        {value === null || value === undefined
+          ? 'not available'
+          : typeof value === 'string'
+            ? value
+            : formatQuantity(value)}
       </dd>
       {detail && <dd className="text-xs text-concrete-600">{detail}</dd>}
     </div>
   );
 }
 
-function serviceDetail(combination: string | null | undefined, limit: Quantity | null | undefined): string | undefined {
+function serviceDetail(
+  combination: string | null | undefined,
+  limit: Quantity | null | undefined,
+): string | undefined {
   if (!combination) return undefined;
   return limit ? `${combination}, unfactored; limit ${formatQuantity(limit)}` : `${combination}, unfactored`;
 }
@@ -35,15 +53,39 @@ export function KeyResults({ result, input }: { result: DesignResult; input: Des
   return (
     <dl className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
       <Item term="Root moment (largest combination)" value={moment?.rootMoment} detail={moment?.name} />
-      <Item term="Tip deflection, live load (service)" value={live?.demand} detail={serviceDetail(live?.combination, live?.capacity)} />
-      <Item term="Tip deflection, total load (service)" value={total?.demand} detail={serviceDetail(total?.combination, total?.capacity)} />
+      <Item
+        term="Tip deflection, live load (service)"
+        value={live?.demand}
+        detail={serviceDetail(live?.combination, live?.capacity)}
+      />
+      <Item
+        term="Tip deflection, total load (service)"
+        value={total?.demand}
+        detail={serviceDetail(total?.combination, total?.capacity)}
+      />
       <Item term="First natural frequency" value={result.member.frequency} />
-      <Item term="Section" value={result.member.section.label} detail={`steel weight ${formatQuantity(result.member.steelWeight)}`} />
+      <Item
+        term="Section"
+        value={result.member.section.label}
+        detail={`steel weight ${formatQuantity(result.member.steelWeight)}`}
+      />
       {connection ? (
         <>
-          <Item term="Connection" value={connection.arrangement === 'post-base' ? 'post on a base plate' : 'plate on the pier face'} detail={connection.combination} />
-          <Item term="Anchor tension per rod" value={connection.anchorTensionPerRod} detail={`bearing length ${formatQuantity(connection.bearingLength)}`} />
-          <Item term="Plate thickness required" value={connection.requiredThickness} detail={`provided ${input.connection?.plate.thickness ?? 'not given'}`} />
+          <Item
+            term="Connection"
+            value={connection.arrangement === 'post-base' ? 'post on a base plate' : 'plate on the pier face'}
+            detail={connection.combination}
+          />
+          <Item
+            term="Anchor tension per rod"
+            value={connection.anchorTensionPerRod}
+            detail={`bearing length ${formatQuantity(connection.bearingLength)}`}
+          />
+          <Item
+            term="Plate thickness required"
+            value={connection.requiredThickness}
+            detail={`provided ${input.connection?.plate.thickness ?? 'not given'}`}
+          />
         </>
       ) : (
         <Item term="Connection" value="not designed in this revision" />

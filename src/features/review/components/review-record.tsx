@@ -15,8 +15,10 @@ export function ReviewRecord({ reviews }: { reviews: ReviewDto[] }) {
     <ol className="space-y-1 text-sm">
       {ordered.map((r) => (
         <li key={r.id}>
-          <time dateTime={r.createdAt} className="text-concrete-600">{formatDateTime(r.createdAt)}</time>:{' '}
-          <span className="font-medium text-concrete-900">{r.reviewerName}</span> {WORDS[r.state]}
+          <time dateTime={r.createdAt} className="text-concrete-600">
+            {formatDateTime(r.createdAt)}
+          </time>
+          : <span className="font-medium text-concrete-900">{r.reviewerName}</span> {WORDS[r.state]}
           {r.comment && <span className="text-concrete-700"> — “{r.comment}”</span>}
         </li>
       ))}

@@ -16,7 +16,9 @@ import { ReviewRecord } from './review-record';
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
   return (
     <section aria-labelledby={id} className="rounded border border-concrete-200 bg-white p-4">
-      <h2 id={id} className="mb-2 text-lg font-semibold text-concrete-900">{title}</h2>
+      <h2 id={id} className="mb-2 text-lg font-semibold text-concrete-900">
+        {title}
+      </h2>
       {children}
     </section>
   );
@@ -29,9 +31,13 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
     <div className="space-y-4">
       <header className="space-y-1">
         <nav aria-label="Breadcrumb" className="text-sm text-concrete-600">
-          <Link to={paths.history(revision.cantileverId)} className="underline hover:text-oxide-700">History</Link>
+          <Link to={paths.history(revision.cantileverId)} className="underline hover:text-oxide-700">
+            History
+          </Link>
           {' · '}
-          <Link to={paths.desk(revision.cantileverId)} className="underline hover:text-oxide-700">Design desk</Link>
+          <Link to={paths.desk(revision.cantileverId)} className="underline hover:text-oxide-700">
+            Design desk
+          </Link>
         </nav>
         <h1 className="flex flex-wrap items-center gap-3 text-xl font-semibold text-concrete-900">
           Review of revision {revision.number}
@@ -40,7 +46,10 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
         <p className="text-sm text-concrete-800">“{revision.message}”</p>
         <p className="text-xs text-concrete-600">
           {revision.authorName} · {formatDateTime(revision.createdAt)} ·{' '}
-          {revision.baseRevisionNumber === null ? 'first revision' : `based on revision ${revision.baseRevisionNumber}`} · engine {revision.engineVersion}
+          {revision.baseRevisionNumber === null
+            ? 'first revision'
+            : `based on revision ${revision.baseRevisionNumber}`}{' '}
+          · engine {revision.engineVersion}
         </p>
       </header>
       <CautionNote />
@@ -51,7 +60,9 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
         <p className="mb-2 text-sm">
           <VerdictWord ok={revision.result.ok && failing === 0} />{' '}
           <span className="text-concrete-700">
-            {failing === 0 ? `All ${revision.result.checks.length} checks pass.` : `${failing} of ${revision.result.checks.length} checks fail or were not computed.`}{' '}
+            {failing === 0
+              ? `All ${revision.result.checks.length} checks pass.`
+              : `${failing} of ${revision.result.checks.length} checks fail or were not computed.`}{' '}
             {revision.result.method}, results in {revision.result.units} units.
           </span>
         </p>
@@ -60,7 +71,14 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
       <Section id="review-key" title="Key results">
         <KeyResults result={revision.result} input={revision.input} />
       </Section>
-      <Section id="review-changes" title={revision.baseRevisionNumber === null ? 'Changes' : `Changes from revision ${revision.baseRevisionNumber}`}>
+      <Section
+        id="review-changes"
+        title={
+          revision.baseRevisionNumber === null
+            ? 'Changes'
+            : `Changes from revision ${revision.baseRevisionNumber}`
+        }
+      >
         <BaseChanges revision={revision} />
       </Section>
       <Section id="review-comments" title="Comments">

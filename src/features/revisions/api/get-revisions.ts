@@ -9,7 +9,10 @@ export function getRevisions(cantileverId: number, signal?: AbortSignal): Promis
 }
 
 export function revisionsQueryOptions(cantileverId: number) {
-  return queryOptions({ queryKey: revisionKeys.list(cantileverId), queryFn: ({ signal }) => getRevisions(cantileverId, signal) });
+  return queryOptions({
+    queryKey: revisionKeys.list(cantileverId),
+    queryFn: ({ signal }) => getRevisions(cantileverId, signal),
+  });
 }
 
 export function useRevisions(cantileverId: number) {

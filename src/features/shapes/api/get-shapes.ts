@@ -9,7 +9,11 @@ export function getShapes(signal?: AbortSignal): Promise<ShapesDto> {
 }
 
 export function shapesQueryOptions() {
-  return queryOptions({ queryKey: shapeKeys.list(), queryFn: ({ signal }) => getShapes(signal), staleTime: 5 * 60_000 });
+  return queryOptions({
+    queryKey: shapeKeys.list(),
+    queryFn: ({ signal }) => getShapes(signal),
+    staleTime: 5 * 60_000,
+  });
 }
 
 export function useShapes() {

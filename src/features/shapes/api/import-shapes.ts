@@ -16,7 +16,10 @@ export function importShapes(file: File, onProgress?: (fraction: number) => void
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable && onProgress) onProgress(event.loaded / event.total);
     };
-    xhr.onerror = () => reject(new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.'));
+    xhr.onerror = () =>
+      reject(
+        new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.'),
+      );
     xhr.onload = () => {
       let data: unknown = null;
       try {
@@ -28,8 +31,20 @@ export function importShapes(file: File, onProgress?: (fraction: number) => void
         resolve(data as ShapeImportDto);
         return;
       }
-      const err = (data as { error?: { code?: string; message?: string; issues?: { path: string; message: string }[] } } | null)?.error;
-      reject(new ApiError(xhr.status, err?.code ?? `http_${xhr.status}`, err?.message ?? `The server answered ${xhr.status}.`, err?.issues ?? [], data));
+      const err = (
+        data as {
+          error?: { code?: string; message?: string; issues?: { path: string; message: string }[] };
+        } | null
+      )?.error;
+      reject(
+        new ApiError(
+          xhr.status,
+          err?.code ?? `http_${xhr.status}`,
+          err?.message ?? `The server answered ${xhr.status}.`,
+          err?.issues ?? [],
+          data,
+        ),
+      );
     };
     const form = new FormData();
     form.append('file', file);

@@ -28,12 +28,16 @@ export function ShapeDetail({ shape }: { shape: ShapeRecord }) {
   return (
     <div>
       <h2 className="font-mono text-lg font-semibold">{shape.label}</h2>
-      <p className="text-xs text-concrete-600">{shape.custom ? 'Imported by a user' : 'Published shapes table'} · family {shape.family}</p>
+      <p className="text-xs text-concrete-600">
+        {shape.custom ? 'Imported by a user' : 'Published shapes table'} · family {shape.family}
+      </p>
       <dl className="mt-2 grid grid-cols-[1fr_auto] gap-x-3 gap-y-0.5 text-sm">
         {PROPS.filter((p) => typeof shape[p.key] === 'number').map((p) => (
           <div key={p.key} className="contents">
             <dt className="text-concrete-600">{p.label}</dt>
-            <dd className="num text-right font-mono">{String(shape[p.key])} <span className="text-xs text-concrete-500">{p.unit}</span></dd>
+            <dd className="num text-right font-mono">
+              {String(shape[p.key])} <span className="text-xs text-concrete-500">{p.unit}</span>
+            </dd>
           </div>
         ))}
       </dl>

@@ -12,28 +12,73 @@ export function ShapeImport() {
 
   return (
     <section aria-labelledby="import-title" className="rounded-md border border-concrete-300 bg-white p-3">
-      <h2 id="import-title" className="text-sm font-semibold">Import shapes from a CSV file</h2>
-      <p className="text-xs text-concrete-600">The published shapes database file, or your own CSV with a label, a family (W, HSS, PIPE, C) and the property columns.</p>
-      <form className="mt-2 flex flex-wrap items-center gap-2" onSubmit={(e) => { e.preventDefault(); if (file) { setProgress(0); upload.mutate(file); } }}>
-        <label htmlFor="shape-file" className="text-sm">CSV file</label>
-        <input id="shape-file" ref={input} type="file" accept=".csv,text/csv" onChange={(e) => setFile(e.target.files?.[0] ?? null)} className="text-sm file:mr-2 file:rounded file:border file:border-concrete-300 file:bg-concrete-100 file:px-2 file:py-1" />
-        <Button type="submit" variant="primary" disabled={!file || upload.isPending}><Upload size={14} aria-hidden="true" /> Import</Button>
+      <h2 id="import-title" className="text-sm font-semibold">
+        Import shapes from a CSV file
+      </h2>
+      <p className="text-xs text-concrete-600">
+        The published shapes database file, or your own CSV with a label, a family (W, HSS, PIPE, C) and the
+        property columns.
+      </p>
+      <form
+        className="mt-2 flex flex-wrap items-center gap-2"
+        onSubmit={(e) => {
+          e.preventDefault();
+          if (file) {
+            setProgress(0);
+            upload.mutate(file);
+          }
+        }}
+      >
+        <label htmlFor="shape-file" className="text-sm">
+          CSV file
+        </label>
+        <input
+          id="shape-file"
+          ref={input}
+          type="file"
+          accept=".csv,text/csv"
+          onChange={(e) => setFile(e.target.files?.[0] ?? null)}
+          className="text-sm file:mr-2 file:rounded file:border file:border-concrete-300 file:bg-concrete-100 file:px-2 file:py-1"
+        />
+        <Button type="submit" variant="primary" disabled={!file || upload.isPending}>
+          <Upload size={14} aria-hidden="true" /> Import
+        </Button>
       </form>
       {upload.isPending ? (
         <div className="mt-2" role="status">
-          <progress max={1} value={progress} className="w-64" aria-label="Upload progress" /> <span className="num text-xs">{Math.round(progress * 100)} %</span>
+          <progress max={1} value={progress} className="w-64" aria-label="Upload progress" />{' '}
+          <span className="num text-xs">{Math.round(progress * 100)} %</span>
         </div>
       ) : null}
-      {upload.isError ? <p role="alert" className="mt-2 text-sm text-util-over">The import failed: {upload.error.message}</p> : null}
+      {upload.isError ? (
+        <p role="alert" className="mt-2 text-sm text-util-over">
+          The import failed: {upload.error.message}
+        </p>
+      ) : null}
       {upload.data ? (
         <div className="mt-2 text-sm" role="status" data-testid="import-result">
-          <p><strong className="num">{upload.data.imported}</strong> shape{upload.data.imported === 1 ? '' : 's'} imported; <strong className="num">{upload.data.rejected.length}</strong> row{upload.data.rejected.length === 1 ? '' : 's'} rejected.</p>
+          <p>
+            <strong className="num">{upload.data.imported}</strong> shape
+            {upload.data.imported === 1 ? '' : 's'} imported;{' '}
+            <strong className="num">{upload.data.rejected.length}</strong> row
+            {upload.data.rejected.length === 1 ? '' : 's'} rejected.
+          </p>
           {upload.data.rejected.length > 0 ? (
             <table className="mt-1 w-full text-xs" aria-label="Rejected rows">
-              <thead><tr className="text-left text-concrete-600"><th className="pr-2 font-medium">Row</th><th className="pr-2 font-medium">Label</th><th className="font-medium">Reason</th></tr></thead>
+              <thead>
+                <tr className="text-left text-concrete-600">
+                  <th className="pr-2 font-medium">Row</th>
+                  <th className="pr-2 font-medium">Label</th>
+                  <th className="font-medium">Reason</th>
+                </tr>
+              </thead>
               <tbody>
                 {upload.data.rejected.map((r) => (
-                  <tr key={r.row} className="border-t border-concrete-200"><td className="num pr-2">{r.row}</td><td className="pr-2 font-mono">{r.label ?? '—'}</td><td>{r.reason}</td></tr>
+                  <tr key={r.row} className="border-t border-concrete-200">
+                    <td className="num pr-2">{r.row}</td>
+                    <td className="pr-2 font-mono">{r.label ?? '—'}</td>
+                    <td>{r.reason}</td>
+                  </tr>
                 ))}
               </tbody>
             </table>

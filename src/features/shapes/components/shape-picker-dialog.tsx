@@ -2,7 +2,17 @@ import { Dialog } from '../../../components/ui/dialog';
 import { ShapesBrowser, type ShapeAction } from './shapes-browser';
 
 /** The shapes browser as a picker, opened from the desk. */
-export function ShapePickerDialog({ open, onClose, actions, initial }: { open: boolean; onClose: () => void; actions: ShapeAction[]; initial?: string | null }) {
+export function ShapePickerDialog({
+  open,
+  onClose,
+  actions,
+  initial,
+}: {
+  open: boolean;
+  onClose: () => void;
+  actions: ShapeAction[];
+  initial?: string | null;
+}) {
   return (
     <Dialog open={open} title="Pick a shape" onClose={onClose} wide>
       <ShapesBrowser actions={actions} initial={initial ?? null} />

@@ -19,14 +19,25 @@ function depthValue(text: string): number | null {
 }
 
 /** Search, filter and inspect the shapes; optional actions ("use for member") for the chosen one. */
-export function ShapesBrowser({ actions = [], initial = null }: { actions?: ShapeAction[]; initial?: string | null }) {
+export function ShapesBrowser({
+  actions = [],
+  initial = null,
+}: {
+  actions?: ShapeAction[];
+  initial?: string | null;
+}) {
   const shapes = useShapes();
   const [q, setQ] = useState('');
   const [family, setFamily] = useState<ShapeFamily | ''>('');
   const [minDepth, setMin] = useState('');
   const [maxDepth, setMax] = useState('');
   const [selected, setSelected] = useState<string | null>(initial);
-  const filter = useDeferredValue({ q, family, minDepth: depthValue(minDepth), maxDepth: depthValue(maxDepth) });
+  const filter = useDeferredValue({
+    q,
+    family,
+    minDepth: depthValue(minDepth),
+    maxDepth: depthValue(maxDepth),
+  });
   const rows = useMemo(() => filterShapes(shapes.data?.shapes ?? [], filter), [shapes.data, filter]);
   const chosen = shapes.data?.shapes.find((s) => s.label === selected) ?? null;
   const depthError = (t: string) => t.trim() !== '' && depthValue(t) === null;
@@ -37,24 +48,61 @@ export function ShapesBrowser({ actions = [], initial = null }: { actions?: Shap
     <div className="grid gap-3 lg:grid-cols-[1fr_18rem]">
       <div className="min-w-0">
         <div className="mb-2 grid grid-cols-2 gap-2 sm:grid-cols-4">
-          <label className="flex flex-col text-xs text-concrete-700">Search by label
-            <input type="search" value={q} onChange={(e) => setQ(e.target.value)} placeholder="e.g. W12" className={inputClass(false)} data-autofocus />
+          <label className="flex flex-col text-xs text-concrete-700">
+            Search by label
+            <input
+              type="search"
+              value={q}
+              onChange={(e) => setQ(e.target.value)}
+              placeholder="e.g. W12"
+              className={inputClass(false)}
+              data-autofocus
+            />
           </label>
-          <label className="flex flex-col text-xs text-concrete-700">Family
-            <select value={family} onChange={(e) => setFamily(e.target.value as ShapeFamily | '')} className={inputClass(false)}>
-              <option value="">all</option><option value="W">W</option><option value="HSS">HSS</option><option value="PIPE">Pipe</option><option value="C">Channel</option>
+          <label className="flex flex-col text-xs text-concrete-700">
+            Family
+            <select
+              value={family}
+              onChange={(e) => setFamily(e.target.value as ShapeFamily | '')}
+              className={inputClass(false)}
+            >
+              <option value="">all</option>
+              <option value="W">W</option>
+              <option value="HSS">HSS</option>
+              <option value="PIPE">Pipe</option>
+              <option value="C">Channel</option>
             </select>
           </label>
-          <label className="flex flex-col text-xs text-concrete-700">Depth from (in)
-            <input inputMode="decimal" value={minDepth} onChange={(e) => setMin(e.target.value)} className={inputClass(depthError(minDepth))} aria-invalid={depthError(minDepth)} />
-            {depthError(minDepth) ? <span className="text-util-over">must be a number of inches, 0 or more</span> : null}
+          <label className="flex flex-col text-xs text-concrete-700">
+            Depth from (in)
+            <input
+              inputMode="decimal"
+              value={minDepth}
+              onChange={(e) => setMin(e.target.value)}
+              className={inputClass(depthError(minDepth))}
+              aria-invalid={depthError(minDepth)}
+            />
+            {depthError(minDepth) ? (
+              <span className="text-util-over">must be a number of inches, 0 or more</span>
+            ) : null}
           </label>
-          <label className="flex flex-col text-xs text-concrete-700">Depth to (in)
-            <input inputMode="decimal" value={maxDepth} onChange={(e) => setMax(e.target.value)} className={inputClass(depthError(maxDepth))} aria-invalid={depthError(maxDepth)} />
-            {depthError(maxDepth) ? <span className="text-util-over">must be a number of inches, 0 or more</span> : null}
+          <label className="flex flex-col text-xs text-concrete-700">
+            Depth to (in)
+            <input
+              inputMode="decimal"
+              value={maxDepth}
+              onChange={(e) => setMax(e.target.value)}
+              className={inputClass(depthError(maxDepth))}
+              aria-invalid={depthError(maxDepth)}
+            />
+            {depthError(maxDepth) ? (
+              <span className="text-util-over">must be a number of inches, 0 or more</span>
+            ) : null}
           </label>
         </div>
-        <p className="num mb-1 text-xs text-concrete-600" role="status">{rows.length} of {shapes.data.shapes.length} shapes · {shapes.data.source}</p>
+        <p className="num mb-1 text-xs text-concrete-600" role="status">
+          {rows.length} of {shapes.data.shapes.length} shapes · {shapes.data.source}
+        </p>
         <div className="max-h-[60vh] overflow-auto rounded border border-concrete-300 bg-white">
           <ShapesTable shapes={rows} selected={selected} onSelect={setSelected} />
         </div>
@@ -65,11 +113,17 @@ export function ShapesBrowser({ actions = [], initial = null }: { actions?: Shap
             <ShapeDetail shape={chosen} />
             {actions.length ? (
               <div className="mt-3 flex flex-col gap-2">
-                {actions.map((a) => <Button key={a.label} variant="primary" onClick={() => a.onUse(chosen.label)}>{a.label}</Button>)}
+                {actions.map((a) => (
+                  <Button key={a.label} variant="primary" onClick={() => a.onUse(chosen.label)}>
+                    {a.label}
+                  </Button>
+                ))}
               </div>
             ) : null}
           </>
-        ) : <p className="text-sm text-concrete-600">Choose a shape to see its properties.</p>}
+        ) : (
+          <p className="text-sm text-concrete-600">Choose a shape to see its properties.</p>
+        )}
       </aside>
     </div>
   );

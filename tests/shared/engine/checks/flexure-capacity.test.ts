@@ -117,7 +117,9 @@ describe('HSS and pipe', () => {
 
   it('Pipe6STD, A53 Gr B default Fy 35 (REFERENCES.md [mem]): compact, phi Mn = 0.9 x 35 x Zx', () => {
     // Published Pipe6STD: OD 6.625, tdes 0.261, Zx 10.6 (AISC Shapes Database v15.0); D/t 25.4 < 0.07 E/Fy = 58.
-    const r = run(memberDoc({ shape: 'Pipe6STD', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const r = run(
+      memberDoc({ shape: 'Pipe6STD', loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     expect(rel(check(r, 'member.flexure').capacity!.value, (0.9 * 35 * 10.6) / 12)).toBeLessThan(0.002);
     expect(check(r, 'member.flexure').reference).toBe('AISC 360-16 F8.1');
   });

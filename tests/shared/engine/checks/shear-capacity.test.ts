@@ -19,9 +19,17 @@ describe('shear, AISC 360-16 Chapter G', () => {
   });
 
   it('W24X62: phi Vn = 306 kip, Vn/Omega = 204 kip (AISC Design Examples v15.0, G.1A [mem])', () => {
-    const lrfd = run(memberDoc({ shape: 'W24X62', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const lrfd = run(
+      memberDoc({ shape: 'W24X62', loads: { selfWeight: true, area: [], line: [], point: [] } }),
+    );
     expect(rel(check(lrfd, 'member.shear').capacity!.value, 306)).toBeLessThan(0.005);
-    const asd = run(memberDoc({ shape: 'W24X62', method: 'ASD', loads: { selfWeight: true, area: [], line: [], point: [] } }));
+    const asd = run(
+      memberDoc({
+        shape: 'W24X62',
+        method: 'ASD',
+        loads: { selfWeight: true, area: [], line: [], point: [] },
+      }),
+    );
     expect(rel(check(asd, 'member.shear').capacity!.value, 204)).toBeLessThan(0.005);
   });
 

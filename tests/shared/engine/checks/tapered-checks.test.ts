@@ -9,7 +9,13 @@ const Fy = 50;
 describe('tapered members are checked at every station with the local section', () => {
   it('web slenderness changes along x: a 40 in root web (h/tw 156) is slender (F5), the 12 in tip compact (F2/F3)', () => {
     // AISC 360-16 Table B4.1b case 15: lambda_p = 3.76 sqrt(E/Fy) = 90.6, lambda_r = 5.70 sqrt(E/Fy) = 137.3 [mem].
-    const s = builtUpSection({ rootDepth: 40, tipDepth: 12, flangeWidth: 10, flangeThickness: 0.5, webThickness: 0.25 });
+    const s = builtUpSection({
+      rootDepth: 40,
+      tipDepth: 12,
+      flangeWidth: 10,
+      flangeThickness: 0.5,
+      webThickness: 0.25,
+    });
     expect(s.root.h / s.root.tw).toBeCloseTo(156, 6);
     expect(flexuralStrength(s, s.root, { Fy, E, Lb: 60 }).clause).toMatch(/^F5/);
     const mid = s.at(0.5); // 26 in deep: h/tw = 100, noncompact
@@ -18,7 +24,13 @@ describe('tapered members are checked at every station with the local section', 
   });
 
   it('F5 compression flange yielding recomputed here: Mn = Rpg Fy Sx with Eq. F5-6 (compact 10 x 1 in flanges)', () => {
-    const s = builtUpSection({ rootDepth: 40, tipDepth: 12, flangeWidth: 10, flangeThickness: 1, webThickness: 0.25 });
+    const s = builtUpSection({
+      rootDepth: 40,
+      tipDepth: 12,
+      flangeWidth: 10,
+      flangeThickness: 1,
+      webThickness: 0.25,
+    });
     const p = s.root;
     const aw = (p.h * p.tw) / (p.bf * p.tf);
     const Rpg = 1 - (aw / (1200 + 300 * aw)) * (p.h / p.tw - 5.7 * Math.sqrt(E / Fy));
@@ -41,7 +53,12 @@ describe('tapered members are checked at every station with the local section', 
   });
 
   it('flexure under uniform load governs at the deep root and reports its position', () => {
-    const r = run(memberDoc({ section: { shape: 'W12X26', tipDepth: '6 in' }, loads: { selfWeight: true, area: [{ case: 'L', value: '60 psf' }], line: [], point: [] } }));
+    const r = run(
+      memberDoc({
+        section: { shape: 'W12X26', tipDepth: '6 in' },
+        loads: { selfWeight: true, area: [{ case: 'L', value: '60 psf' }], line: [], point: [] },
+      }),
+    );
     const f = check(r, 'member.flexure');
     expect(f.at).toEqual({ value: 0, unit: 'ft' });
     expect(f.title).toContain('tapered');
@@ -49,9 +66,36 @@ describe('tapered members are checked at every station with the local section', 
 
   it('a tapered member deflects more than the full prismatic shape and less than one as shallow as its tip', () => {
     const loads = { selfWeight: false, area: [{ case: 'L' as const, value: '60 psf' }], line: [], point: [] };
-    const tapered = run(memberDoc({ section: { shape: 'W12X26', tipDepth: '6 in' }, loads })).member.cases.L!.tipDeflection.value;
-    const full = run(memberDoc({ section: { plates: { rootDepth: '12.2 in', tipDepth: '12.2 in', flangeWidth: '6.49 in', flangeThickness: '0.38 in', webThickness: '0.23 in' } }, loads })).member.cases.L!.tipDeflection.value;
-    const shallow = run(memberDoc({ section: { plates: { rootDepth: '6 in', tipDepth: '6 in', flangeWidth: '6.49 in', flangeThickness: '0.38 in', webThickness: '0.23 in' } }, loads })).member.cases.L!.tipDeflection.value;
+    const tapered = run(memberDoc({ section: { shape: 'W12X26', tipDepth: '6 in' }, loads })).member.cases.L!
+      .tipDeflection.value;
+    const full = run(
+      memberDoc({
+        section: {
+          plates: {
+            rootDepth: '12.2 in',
+            tipDepth: '12.2 in',
+            flangeWidth: '6.49 in',
+            flangeThickness: '0.38 in',
+            webThickness: '0.23 in',
+          },
+        },
+        loads,
+      }),
+    ).member.cases.L!.tipDeflection.value;
+    const shallow = run(
+      memberDoc({
+        section: {
+          plates: {
+            rootDepth: '6 in',
+            tipDepth: '6 in',
+            flangeWidth: '6.49 in',
+            flangeThickness: '0.38 in',
+            webThickness: '0.23 in',
+          },
+        },
+        loads,
+      }),
+    ).member.cases.L!.tipDeflection.value;
     expect(tapered).toBeGreaterThan(full);
     expect(tapered).toBeLessThan(shallow);
   });

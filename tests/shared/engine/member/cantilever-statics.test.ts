@@ -50,10 +50,18 @@ describe('cantilever statics against AISC Manual Table 3-23', () => {
   });
 
   it('point load at the tip: PL^3/3EI = 0.0498 in for 1 kip; at b = 6 ft: Pb^2(3L - b)/6EI = 0.03155 in', () => {
-    const tip = run(memberDoc({ loads: { selfWeight: false, area: [], line: [], point: [{ case: 'L', value: '1 kip', at: '8 ft' }] } }));
+    const tip = run(
+      memberDoc({
+        loads: { selfWeight: false, area: [], line: [], point: [{ case: 'L', value: '1 kip', at: '8 ft' }] },
+      }),
+    );
     expect(rel(tip.member.cases.L!.tipDeflection.value, 0.0498)).toBeLessThan(0.01);
     expect(rel(tip.member.cases.L!.rootMoment.value, 8)).toBeLessThan(1e-9);
-    const mid = run(memberDoc({ loads: { selfWeight: false, area: [], line: [], point: [{ case: 'L', value: '1 kip', at: '6 ft' }] } }));
+    const mid = run(
+      memberDoc({
+        loads: { selfWeight: false, area: [], line: [], point: [{ case: 'L', value: '1 kip', at: '6 ft' }] },
+      }),
+    );
     expect(rel(mid.member.cases.L!.tipDeflection.value, 0.03155)).toBeLessThan(0.01);
     expect(rel(mid.member.cases.L!.rootMoment.value, 6)).toBeLessThan(1e-9);
   });
@@ -62,14 +70,28 @@ describe('cantilever statics against AISC Manual Table 3-23', () => {
     const b = 37.3; // in, not a multiple of L / 40
     const P = 2.5;
     const EI = 29000 * 204;
-    const rr = run(memberDoc({ loads: { selfWeight: false, area: [], line: [], point: [{ case: 'L', value: `${P} kip`, at: `${b} in` }] } }), { stations: true });
+    const rr = run(
+      memberDoc({
+        loads: {
+          selfWeight: false,
+          area: [],
+          line: [],
+          point: [{ case: 'L', value: `${P} kip`, at: `${b} in` }],
+        },
+      }),
+      { stations: true },
+    );
     const expected = (P * b * b * (3 * 96 - b)) / (6 * EI); // Table 3-23 [mem]
     expect(rel(rr.member.cases.L!.tipDeflection.value, expected)).toBeLessThan(1e-9);
     expect(rr.stations!.x.some((x) => Math.abs(x - b / 12) < 1e-12)).toBe(true);
   });
 
   it('area loads act on the tributary width: 60 psf x 4 ft = 240 lbf/ft', () => {
-    const a = run(memberDoc({ loads: { selfWeight: false, area: [{ case: 'L', value: '60 psf' }], line: [], point: [] } }));
+    const a = run(
+      memberDoc({
+        loads: { selfWeight: false, area: [{ case: 'L', value: '60 psf' }], line: [], point: [] },
+      }),
+    );
     expect(rel(a.member.cases.L!.rootShear.value, 0.24 * 8)).toBeLessThan(1e-9);
   });
 
@@ -91,22 +113,47 @@ describe('first frequency against Roark (uniform cantilever, 3.516 / 2 pi sqrt(E
   });
 
   it('with 300 lbf/ft of dead load: 17.6 Hz; live load adds no mass (METHOD.md)', () => {
-    const loads = { selfWeight: true, area: [], line: [{ case: 'D' as const, value: '300 lbf/ft' }, { case: 'L' as const, value: '500 lbf/ft' }], point: [] };
+    const loads = {
+      selfWeight: true,
+      area: [],
+      line: [
+        { case: 'D' as const, value: '300 lbf/ft' },
+        { case: 'L' as const, value: '500 lbf/ft' },
+      ],
+      point: [],
+    };
     const r = run(memberDoc({ loads }));
     expect(rel(r.member.frequency.value, 17.6)).toBeLessThan(0.005);
   });
 
   it('the steel vibrates even when its weight is left out of the load cases', () => {
-    const r = run(memberDoc({ loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '100 lbf/ft' }], point: [] } }));
+    const r = run(
+      memberDoc({
+        loads: { selfWeight: false, area: [], line: [{ case: 'L', value: '100 lbf/ft' }], point: [] },
+      }),
+    );
     expect(rel(r.member.frequency.value, 62.3)).toBeLessThan(0.005);
   });
 
-  it.each([0.5, 5, 50])('a %s kip dead point mass at the tip: f = (1/2 pi) sqrt(3 E I g / ((P + 33/140 w L) L^3)) within 0.1 %%', (P) => {
-    // Single-degree cantilever with Rayleigh's effective beam mass 33/140 of the beam (textbook
-    // result, from memory); near exact when the tip mass dominates.
-    const r = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [{ case: 'D', value: `${P} kip`, at: '8 ft' }] } }));
-    const w = (7.65 * 0.49) / 1728; // W12X26 A 7.65 in^2 at 490 lb/ft^3, kip/in
-    const f = Math.sqrt((3 * 29000 * 204 * 386.0886) / ((P + (33 / 140) * w * 96) * 96 ** 3)) / (2 * Math.PI);
-    expect(rel(r.member.frequency.value, f)).toBeLessThan(0.001);
-  });
+  it.each([0.5, 5, 50])(
+    'a %s kip dead point mass at the tip: f = (1/2 pi) sqrt(3 E I g / ((P + 33/140 w L) L^3)) within 0.1 %%',
+    (P) => {
+      // Single-degree cantilever with Rayleigh's effective beam mass 33/140 of the beam (textbook
+      // result, from memory); near exact when the tip mass dominates.
+      const r = run(
+        memberDoc({
+          loads: {
+            selfWeight: true,
+            area: [],
+            line: [],
+            point: [{ case: 'D', value: `${P} kip`, at: '8 ft' }],
+          },
+        }),
+      );
+      const w = (7.65 * 0.49) / 1728; // W12X26 A 7.65 in^2 at 490 lb/ft^3, kip/in
+      const f =
+        Math.sqrt((3 * 29000 * 204 * 386.0886) / ((P + (33 / 140) * w * 96) * 96 ** 3)) / (2 * Math.PI);
+      expect(rel(r.member.frequency.value, f)).toBeLessThan(0.001);
+    },
+  );
 });

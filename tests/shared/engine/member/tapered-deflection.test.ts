@@ -13,8 +13,17 @@ function sectionWithIx(Ix: (t: number) => number): MemberSection {
   const base = iSectionProps(12, 6, 0.5, 0.25);
   const at = (t: number): SectionProps => ({ ...base, Ix: Ix(t) });
   return {
-    label: 'test', kind: 'built-up', family: 'I', prismatic: false, rolled: false,
-    root: at(0), tip: at(1), at, IxAt: Ix, defaultFy: 50, defaultGrade: 'test',
+    label: 'test',
+    kind: 'built-up',
+    family: 'I',
+    prismatic: false,
+    rolled: false,
+    root: at(0),
+    tip: at(1),
+    at,
+    IxAt: Ix,
+    defaultFy: 50,
+    defaultGrade: 'test',
   };
 }
 
@@ -34,14 +43,17 @@ describe('tapered cantilevers against published closed forms', () => {
     expect(rel(tipDeflection(s, tipLoad(W)), expected)).toBeLessThan(1e-5);
   });
 
-  it.each([0.2, 1, 3, 9])('general n = 1 law I = I_tip (1 + a u), u from the tip (REFERENCES.md [calc]), a = %s', (a) => {
-    const Itip = 50;
-    const P = 1.5;
-    const s = sectionWithIx((t) => Itip * (1 + a * (1 - t)));
-    const bracket = (1 + a) ** 2 / 2 - 2 * (1 + a) + 1.5 + Math.log(1 + a);
-    const expected = ((P * L ** 3) / (E * Itip)) * (bracket / a ** 3);
-    expect(rel(tipDeflection(s, tipLoad(P)), expected)).toBeLessThan(1e-4);
-  });
+  it.each([0.2, 1, 3, 9])(
+    'general n = 1 law I = I_tip (1 + a u), u from the tip (REFERENCES.md [calc]), a = %s',
+    (a) => {
+      const Itip = 50;
+      const P = 1.5;
+      const s = sectionWithIx((t) => Itip * (1 + a * (1 - t)));
+      const bracket = (1 + a) ** 2 / 2 - 2 * (1 + a) + 1.5 + Math.log(1 + a);
+      const expected = ((P * L ** 3) / (E * Itip)) * (bracket / a ** 3);
+      expect(rel(tipDeflection(s, tipLoad(P)), expected)).toBeLessThan(1e-4);
+    },
+  );
 
   it('converges: the default 40 intervals agree with 400 intervals to far better than 0.1 %', () => {
     const s = sectionWithIx((t) => 200 * (1 - 0.8 * t) ** 3);
@@ -54,8 +66,18 @@ describe('tapered cantilevers against published closed forms', () => {
 
 /** Adaptive Simpson quadrature (common practice, no source). */
 function adaptiveSimpson(f: (x: number) => number, a: number, b: number, tol = 1e-12): number {
-  const simpson = (lo: number, hi: number, flo: number, fm: number, fhi: number) => ((hi - lo) / 6) * (flo + 4 * fm + fhi);
-  const recurse = (lo: number, hi: number, flo: number, fm: number, fhi: number, whole: number, eps: number, depth: number): number => {
+  const simpson = (lo: number, hi: number, flo: number, fm: number, fhi: number) =>
+    ((hi - lo) / 6) * (flo + 4 * fm + fhi);
+  const recurse = (
+    lo: number,
+    hi: number,
+    flo: number,
+    fm: number,
+    fhi: number,
+    whole: number,
+    eps: number,
+    depth: number,
+  ): number => {
     const m = (lo + hi) / 2;
     const lm = (lo + m) / 2;
     const rm = (m + hi) / 2;
@@ -63,8 +85,12 @@ function adaptiveSimpson(f: (x: number) => number, a: number, b: number, tol = 1
     const frm = f(rm);
     const left = simpson(lo, m, flo, flm, fm);
     const right = simpson(m, hi, fm, frm, fhi);
-    if (depth > 40 || Math.abs(left + right - whole) <= 15 * eps) return left + right + (left + right - whole) / 15;
-    return recurse(lo, m, flo, flm, fm, left, eps / 2, depth + 1) + recurse(m, hi, fm, frm, fhi, right, eps / 2, depth + 1);
+    if (depth > 40 || Math.abs(left + right - whole) <= 15 * eps)
+      return left + right + (left + right - whole) / 15;
+    return (
+      recurse(lo, m, flo, flm, fm, left, eps / 2, depth + 1) +
+      recurse(m, hi, fm, frm, fhi, right, eps / 2, depth + 1)
+    );
   };
   const fa = f(a);
   const fb = f(b);
@@ -100,8 +126,21 @@ describe('a built-up tapered I against virtual work with adaptive Simpson (indep
     const r = run(
       memberDoc({
         length: '10 ft',
-        section: { plates: { rootDepth: '16 in', tipDepth: '8 in', flangeWidth: '6 in', flangeThickness: '0.5 in', webThickness: '0.25 in' } },
-        loads: { selfWeight: true, area: [], line: [{ case: 'D', value: '400 lbf/ft' }], point: [{ case: 'D', value: '300 lbf', at: '8 ft' }] },
+        section: {
+          plates: {
+            rootDepth: '16 in',
+            tipDepth: '8 in',
+            flangeWidth: '6 in',
+            flangeThickness: '0.5 in',
+            webThickness: '0.25 in',
+          },
+        },
+        loads: {
+          selfWeight: true,
+          area: [],
+          line: [{ case: 'D', value: '400 lbf/ft' }],
+          point: [{ case: 'D', value: '300 lbf', at: '8 ft' }],
+        },
       }),
     );
     expect(rel(r.member.cases.D!.tipDeflection.value, oracle)).toBeLessThan(1e-4);

@@ -6,12 +6,32 @@ import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 
 // The shipped table (data/shapes.json) was generated from the AISC Shapes Database v15.0. These
 // tests are a regression guard against the published values, not an independent derivation.
-const CSV = fileURLToPath(new URL('../../../../../shared/reference/aisc-shapes-v15.0-US.csv', import.meta.url));
+const CSV = fileURLToPath(
+  new URL('../../../../../shared/reference/aisc-shapes-v15.0-US.csv', import.meta.url),
+);
 const KEYS = ['A', 'Ix', 'Sx', 'Zx', 'Iy', 'ry', 'J'] as const;
 
 describe('published values written here (REFERENCES.md, AISC Shapes Database v15.0 [pub])', () => {
   const cases: [string, Partial<Record<keyof ShapeRecord, number>>][] = [
-    ['W12X26', { A: 7.65, d: 12.2, bf: 6.49, tf: 0.38, tw: 0.23, Ix: 204, Sx: 33.4, Zx: 37.2, Iy: 17.3, ry: 1.51, J: 0.3, Cw: 607, rts: 1.75, ho: 11.8 }],
+    [
+      'W12X26',
+      {
+        A: 7.65,
+        d: 12.2,
+        bf: 6.49,
+        tf: 0.38,
+        tw: 0.23,
+        Ix: 204,
+        Sx: 33.4,
+        Zx: 37.2,
+        Iy: 17.3,
+        ry: 1.51,
+        J: 0.3,
+        Cw: 607,
+        rts: 1.75,
+        ho: 11.8,
+      },
+    ],
     ['W18X35', { Ix: 510, Sx: 57.6, Zx: 66.5, ry: 1.22 }],
     ['HSS8X8X1/2', { tdes: 0.465, A: 13.5, Ix: 125, Sx: 31.2, Zx: 37.5 }],
     ['HSS8X8X3/8', { tdes: 0.349, Ix: 100, Zx: 29.4 }],
