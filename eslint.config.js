@@ -37,6 +37,20 @@ export default tseslint.config(
     },
   },
   {
+    files: ['server/**/*.router.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['**/src/**'], message: 'server/ never imports src/' },
+            { group: ['**/*.repository'], message: 'a router calls services; only services use repositories' },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['shared/**/*.ts'],
     rules: {
       'no-restricted-imports': [

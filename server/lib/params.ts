@@ -1,5 +1,4 @@
 /** zod schemas for numeric route parameters (`/api/revisions/:revisionId`). */
-import type { Request } from 'express';
 import { z } from 'zod';
 
 const id = z.coerce
@@ -9,9 +8,4 @@ const id = z.coerce
 
 export function idParams<K extends string>(...names: K[]) {
   return z.object(Object.fromEntries(names.map((n) => [n, id])) as Record<K, typeof id>);
-}
-
-/** A numeric parameter that validate() has already parsed. */
-export function paramId(req: Request, name: string): number {
-  return Number(req.params[name]);
 }

@@ -26,6 +26,8 @@ export const updateMeSchema = z.object({
   units: unitSystemSchema.optional(),
   displayName: z.string().trim().min(1).max(80).optional(),
 });
+export type UpdateMeRequest = z.output<typeof updateMeSchema>;
+export type UpdateMeBody = z.input<typeof updateMeSchema>;
 export interface UserDto {
   id: number;
   email: string;
@@ -40,11 +42,13 @@ export const createUserSchema = z.object({
   role: z.enum(ROLES, { error: 'must be admin, architect, fabricator or engineer' }),
   password: z.string().min(10, 'must be at least 10 characters').max(200),
 });
+export type CreateUserRequest = z.output<typeof createUserSchema>;
 export const updateUserSchema = z.object({
   displayName: z.string().trim().min(1).max(80).optional(),
   role: z.enum(ROLES).optional(),
   active: z.boolean().optional(),
 });
+export type UpdateUserRequest = z.output<typeof updateUserSchema>;
 
 // ---- projects and members --------------------------------------------------------------------
 export const DEFAULT_CODE_BASIS = 'IBC 2021 / ASCE 7-16 / AISC 360-16 / ACI 318-19';
@@ -54,6 +58,7 @@ export const createProjectSchema = z.object({
   codeBasis: z.string().trim().max(200).default(DEFAULT_CODE_BASIS),
   units: unitSystemSchema.default('US'),
 });
+export type CreateProjectRequest = z.output<typeof createProjectSchema>;
 export interface ProjectDto {
   id: number;
   name: string;
@@ -74,6 +79,7 @@ export interface ProjectDetailDto extends ProjectDto {
   cantilevers: CantileverDto[];
 }
 export const addMemberSchema = z.object({ userId: z.number().int().positive() });
+export type AddMemberRequest = z.output<typeof addMemberSchema>;
 
 // ---- cantilevers and revisions ---------------------------------------------------------------
 export type ReviewState = 'draft' | 'submitted' | 'approved' | 'changes-requested';
@@ -89,17 +95,22 @@ export interface CantileverDto {
   updatedAt: string;
 }
 export const createCantileverSchema = z.object({
-  name: z.string().trim().min(1, 'is required').max(120),
-  description: z.string().trim().max(500).default(''),
+  name: z.string().trim().min(1, 'is required').max(120, 'is too long (120 characters at most)'),
+  description: z.string().trim().max(500, 'is too long (500 characters at most)').default(''),
   /** Optional first design; saved as revision 1 with the message "First design". */
   input: designSchema.optional(),
 });
+export type CreateCantileverRequest = z.output<typeof createCantileverSchema>;
 export const createRevisionSchema = z.object({
   /** The revision number this save was based on; null for the first revision. */
   baseRevision: z.number().int().positive().nullable(),
   message: z.string().trim().min(1, 'describe what changed').max(500),
   input: designSchema,
 });
+/** What the server's handlers receive (parsed). */
+export type CreateRevisionRequest = z.output<typeof createRevisionSchema>;
+/** What a client sends (before parsing). */
+export type CreateRevisionBody = z.input<typeof createRevisionSchema>;
 export interface RevisionSummaryDto {
   id: number;
   cantileverId: number;
@@ -129,6 +140,8 @@ export const reviewSchema = z.object({
   decision: z.enum(['approve', 'request-changes'], { error: 'must be "approve" or "request-changes"' }),
   comment: z.string().trim().max(4000).default(''),
 });
+export type ReviewRequest = z.output<typeof reviewSchema>;
+export type ReviewBody = z.input<typeof reviewSchema>;
 export interface ReviewDto {
   id: number;
   revisionId: number;
@@ -173,6 +186,7 @@ export const shapesQuerySchema = z.object({
   minDepth: z.coerce.number().nonnegative().optional(),
   maxDepth: z.coerce.number().positive().optional(),
 });
+export type ShapesQuery = z.output<typeof shapesQuerySchema>;
 export interface ShapesDto {
   source: string;
   shapes: ShapeRecord[];

@@ -8,3 +8,5 @@ export const loginSchema = z.object({
   email: z.email('must be an e-mail address'),
   password: z.string().min(1, 'is required').max(200),
 });
+/** What the sign-in form sends. */
+export type LoginBody = z.input<typeof loginSchema>;

@@ -2,11 +2,10 @@
 import { Router } from 'express';
 import { createUserSchema, updateUserSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
-import { idParams, paramId } from '../../lib/params';
+import { idParams } from '../../lib/params';
+import { typedRoute } from '../../lib/route';
 import { currentUser, requireRole } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
-import { listAudit } from '../audit/audit.repository';
-import { createAccount, listAccounts, outbox, retryOutbox, updateAccount } from './admin.service';
+import { auditTrail, createAccount, listAccounts, outbox, retryOutbox, updateAccount } from './admin.service';
 
 export function adminRouter(ctx: AppContext): Router {
   const router = Router();
@@ -15,15 +14,17 @@ export function adminRouter(ctx: AppContext): Router {
   router.get('/admin/users', async (_req, res) => {
     res.json(await listAccounts(ctx));
   });
-  router.post('/admin/users', validate({ body: createUserSchema }), async (req, res) => {
-    res.status(201).json(await createAccount(ctx, currentUser(req), req.body));
-  });
+  router.post(
+    '/admin/users',
+    typedRoute({ body: createUserSchema }, async ({ body }, req, res) => {
+      res.status(201).json(await createAccount(ctx, currentUser(req), body));
+    }),
+  );
   router.patch(
     '/admin/users/:userId',
-    validate({ params: idParams('userId'), body: updateUserSchema }),
-    async (req, res) => {
-      res.json(await updateAccount(ctx, currentUser(req), paramId(req, 'userId'), req.body));
-    },
+    typedRoute({ params: idParams('userId'), body: updateUserSchema }, async ({ params, body }, req, res) => {
+      res.json(await updateAccount(ctx, currentUser(req), params.userId, body));
+    }),
   );
   router.get('/admin/outbox', async (_req, res) => {
     res.json(await outbox(ctx));
@@ -32,7 +33,7 @@ export function adminRouter(ctx: AppContext): Router {
     res.json(await retryOutbox(ctx));
   });
   router.get('/admin/audit', async (_req, res) => {
-    res.json(await listAudit(ctx.db));
+    res.json(await auditTrail(ctx));
   });
   return router;
 }

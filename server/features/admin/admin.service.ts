@@ -1,10 +1,10 @@
 /** Accounts and the outbox, for admins. */
-import type { Role, UserDto } from '../../../shared/schemas/api';
+import type { CreateUserRequest, UpdateUserRequest, UserDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError, badRequest, notFound } from '../../lib/http-error';
 import { hashPassword } from '../../lib/password';
 import { listOutbox, retryNow, toOutboxDto, type OutboxEntryDto } from '../../mail/outbox.repository';
-import { recordAudit } from '../audit/audit.repository';
+import { listAudit, recordAudit } from '../audit/audit.repository';
 import {
   findUserByEmail,
   findUserById,
@@ -21,7 +21,7 @@ export async function listAccounts(ctx: AppContext): Promise<UserDto[]> {
 export async function createAccount(
   ctx: AppContext,
   admin: Express.User,
-  body: { email: string; displayName: string; role: Role; password: string },
+  body: CreateUserRequest,
 ): Promise<UserDto> {
   if (await findUserByEmail(ctx.db, body.email)) {
     throw new HttpError(409, 'email_taken', 'An account with this e-mail already exists.', [
@@ -48,7 +48,7 @@ export async function updateAccount(
   ctx: AppContext,
   admin: Express.User,
   userId: number,
-  body: { displayName?: string; role?: Role; active?: boolean },
+  body: UpdateUserRequest,
 ): Promise<UserDto> {
   const row = await findUserById(ctx.db, userId);
   if (!row) throw notFound('account');
@@ -89,4 +89,8 @@ export async function retryOutbox(ctx: AppContext): Promise<{ queued: number }> 
   const queued = await retryNow(ctx.db);
   ctx.mail.kick();
   return { queued };
+}
+
+export function auditTrail(ctx: AppContext): ReturnType<typeof listAudit> {
+  return listAudit(ctx.db);
 }

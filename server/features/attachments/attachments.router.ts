@@ -7,9 +7,9 @@ import multer from 'multer';
 import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { HttpError, badRequest, notFound } from '../../lib/http-error';
-import { idParams, paramId } from '../../lib/params';
+import { idParams } from '../../lib/params';
+import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
 import { assertMayUpload, attachmentForMember, attachmentsOf, storeAttachment } from './attachments.service';
 
 const INLINE_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
@@ -47,57 +47,58 @@ export function attachmentsRouter(ctx: AppContext): Router {
   const router = Router();
   const params = idParams('cantileverId');
 
-  router.get('/cantilevers/:cantileverId/attachments', validate({ params }), async (req, res) => {
-    res.json(await attachmentsOf(ctx, currentUser(req), paramId(req, 'cantileverId')));
-  });
+  router.get(
+    '/cantilevers/:cantileverId/attachments',
+    typedRoute({ params }, async ({ params }, req, res) => {
+      res.json(await attachmentsOf(ctx, currentUser(req), params.cantileverId));
+    }),
+  );
 
   router.post(
     '/cantilevers/:cantileverId/attachments',
-    validate({ params }),
-    async (req, _res, next) => {
-      await assertMayUpload(ctx, currentUser(req), paramId(req, 'cantileverId'));
+    typedRoute({ params }, async ({ params }, req, _res, next) => {
+      await assertMayUpload(ctx, currentUser(req), params.cantileverId);
       next();
-    },
+    }),
     singleUpload(ctx.config.attachmentMaxBytes),
-    async (req, res) => {
-      res
-        .status(201)
-        .json(await storeAttachment(ctx, currentUser(req), paramId(req, 'cantileverId'), req.file));
-    },
+    typedRoute({ params }, async ({ params }, req, res) => {
+      res.status(201).json(await storeAttachment(ctx, currentUser(req), params.cantileverId, req.file));
+    }),
   );
 
   router.get(
     '/attachments/:attachmentId',
-    validate({
-      params: idParams('attachmentId'),
-      query: z.object({ inline: z.enum(['0', '1']).optional() }),
-    }),
-    async (req, res) => {
-      const { row, path } = await attachmentForMember(ctx, currentUser(req), paramId(req, 'attachmentId'));
-      const info = await stat(path).catch(() => null);
-      if (!info) throw notFound('attachment file');
-      const inline =
-        (res.locals.query as { inline?: string }).inline === '1' && INLINE_TYPES.has(row.mime_type);
-      res.attachment(row.original_name); // sets a type from the name: overwritten with the sniffed one below
-      res.setHeader('Content-Type', row.mime_type);
-      res.setHeader('Content-Length', String(info.size));
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      // Nothing in a stored file may run scripts; Chromium will not show a PDF in a sandboxed document,
-      // and a PDF viewer runs no page scripts of ours, so only the other types get `sandbox`.
-      res.setHeader(
-        'Content-Security-Policy',
-        row.mime_type === 'application/pdf'
-          ? "default-src 'none'; img-src 'self'; object-src 'self'"
-          : "default-src 'none'; img-src 'self'; sandbox",
-      );
-      res.setHeader('Cache-Control', 'private, no-store');
-      if (inline)
+    typedRoute(
+      {
+        params: idParams('attachmentId'),
+        query: z.object({ inline: z.enum(['0', '1']).optional() }),
+      },
+      async ({ params, query }, req, res) => {
+        const { row, path } = await attachmentForMember(ctx, currentUser(req), params.attachmentId);
+        const info = await stat(path).catch(() => null);
+        if (!info) throw notFound('attachment file');
+        const inline = query.inline === '1' && INLINE_TYPES.has(row.mime_type);
+        res.attachment(row.original_name); // sets a type from the name: overwritten with the sniffed one below
+        res.setHeader('Content-Type', row.mime_type);
+        res.setHeader('Content-Length', String(info.size));
+        res.setHeader('X-Content-Type-Options', 'nosniff');
+        // Nothing in a stored file may run scripts; Chromium will not show a PDF in a sandboxed document,
+        // and a PDF viewer runs no page scripts of ours, so only the other types get `sandbox`.
         res.setHeader(
-          'Content-Disposition',
-          (res.getHeader('Content-Disposition') as string).replace(/^attachment/, 'inline'),
+          'Content-Security-Policy',
+          row.mime_type === 'application/pdf'
+            ? "default-src 'none'; img-src 'self'; object-src 'self'"
+            : "default-src 'none'; img-src 'self'; sandbox",
         );
-      await pipeline(createReadStream(path), res);
-    },
+        res.setHeader('Cache-Control', 'private, no-store');
+        if (inline)
+          res.setHeader(
+            'Content-Disposition',
+            (res.getHeader('Content-Disposition') as string).replace(/^attachment/, 'inline'),
+          );
+        await pipeline(createReadStream(path), res);
+      },
+    ),
   );
   return router;
 }

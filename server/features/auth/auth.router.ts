@@ -8,10 +8,9 @@ import type { PassportInstance } from '../../auth/passport';
 import { loginSchema, updateMeSchema, type UserDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError, unauthorized } from '../../lib/http-error';
+import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
-import { recordAudit } from '../audit/audit.repository';
-import { findUserById, toUserDto, updateUser } from '../users/users.repository';
+import { recordFailedSignIn, recordSignIn, updateMe } from './auth.service';
 
 function loginLimiter(ctx: AppContext): RequestHandler {
   return rateLimit({
@@ -34,46 +33,41 @@ function loginLimiter(ctx: AppContext): RequestHandler {
 export function authRouter(ctx: AppContext, passport: PassportInstance): Router {
   const router = Router();
 
-  router.post('/auth/login', loginLimiter(ctx), validate({ body: loginSchema }), (req, res, next) => {
-    const email = String(req.body.email).toLowerCase();
-    passport.authenticate(
-      'local',
-      (err: unknown, user: Express.User | false, info?: { message?: string }) => {
-        if (err) return next(err);
-        if (!user) {
-          recordAudit(ctx.db, {
-            kind: 'sign-in-failed',
-            userId: null,
-            subject: email,
-            detail: `ip ${req.ip ?? ''}`,
-          })
-            .then(() =>
-              next(
-                new HttpError(
-                  401,
-                  'sign_in_failed',
-                  info?.message ?? 'The e-mail or the password is not right.',
+  router.post(
+    '/auth/login',
+    loginLimiter(ctx),
+    typedRoute({ body: loginSchema }, ({ body }, req, res, next) => {
+      const email = body.email.toLowerCase();
+      const ip = req.ip ?? '';
+      passport.authenticate(
+        'local',
+        (err: unknown, user: Express.User | false, info?: { message?: string }) => {
+          if (err) return next(err);
+          if (!user) {
+            recordFailedSignIn(ctx, email, ip)
+              .then(() =>
+                next(
+                  new HttpError(
+                    401,
+                    'sign_in_failed',
+                    info?.message ?? 'The e-mail or the password is not right.',
+                  ),
                 ),
-              ),
-            )
-            .catch(next);
-          return;
-        }
-        // passport regenerates the session id here, so a session fixed before sign-in is worthless.
-        req.logIn(user, (loginErr) => {
-          if (loginErr) return next(loginErr);
-          recordAudit(ctx.db, {
-            kind: 'sign-in',
-            userId: user.id,
-            subject: user.email,
-            detail: `ip ${req.ip ?? ''}`,
-          })
-            .then(() => res.json(user satisfies UserDto))
-            .catch(next);
-        });
-      },
-    )(req, res, next);
-  });
+              )
+              .catch(next);
+            return;
+          }
+          // passport regenerates the session id here, so a session fixed before sign-in is worthless.
+          req.logIn(user, (loginErr) => {
+            if (loginErr) return next(loginErr);
+            recordSignIn(ctx, user, ip)
+              .then(() => res.json(user satisfies UserDto))
+              .catch(next);
+          });
+        },
+      )(req, res, next);
+    }),
+  );
 
   router.post('/auth/logout', (req, res, next) => {
     if (!req.user) {
@@ -95,16 +89,12 @@ export function authRouter(ctx: AppContext, passport: PassportInstance): Router 
     res.json(req.user);
   });
 
-  router.patch('/auth/me', validate({ body: updateMeSchema }), async (req, res) => {
-    const user = currentUser(req);
-    await updateUser(ctx.db, user.id, {
-      ...(req.body.units ? { units: req.body.units } : {}),
-      ...(req.body.displayName ? { display_name: req.body.displayName } : {}),
-    });
-    const row = await findUserById(ctx.db, user.id);
-    if (!row) throw unauthorized();
-    res.json(toUserDto(row));
-  });
+  router.patch(
+    '/auth/me',
+    typedRoute({ body: updateMeSchema }, async ({ body }, req, res) => {
+      res.json(await updateMe(ctx, currentUser(req), body));
+    }),
+  );
 
   return router;
 }

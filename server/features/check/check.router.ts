@@ -2,13 +2,16 @@
 import { Router } from 'express';
 import { checkRequestSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
-import { validate } from '../../middleware/validate';
+import { typedRoute } from '../../lib/route';
 import { evaluateOnServer } from '../revisions/evaluate';
 
 export function checkRouter(ctx: AppContext): Router {
   const router = Router();
-  router.post('/check', validate({ body: checkRequestSchema }), async (req, res) => {
-    res.json(await evaluateOnServer(ctx.db, req.body.input, { stations: true }));
-  });
+  router.post(
+    '/check',
+    typedRoute({ body: checkRequestSchema }, async ({ body }, _req, res) => {
+      res.json(await evaluateOnServer(ctx.db, body.input, { stations: true }));
+    }),
+  );
   return router;
 }

@@ -1,9 +1,9 @@
 /** GET …/plate-schedule.csv for a revision and for a whole project (current revisions). */
 import { Router, type Response } from 'express';
 import type { AppContext } from '../../context';
-import { idParams, paramId } from '../../lib/params';
+import { idParams } from '../../lib/params';
+import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
 import { projectSchedule, revisionSchedule, type CsvFile } from './plate-schedule.service';
 
 function sendCsv(res: Response, file: CsvFile): void {
@@ -15,17 +15,15 @@ export function plateScheduleRouter(ctx: AppContext): Router {
   const router = Router();
   router.get(
     '/revisions/:revisionId/plate-schedule.csv',
-    validate({ params: idParams('revisionId') }),
-    async (req, res) => {
-      sendCsv(res, await revisionSchedule(ctx, currentUser(req), paramId(req, 'revisionId')));
-    },
+    typedRoute({ params: idParams('revisionId') }, async ({ params }, req, res) => {
+      sendCsv(res, await revisionSchedule(ctx, currentUser(req), params.revisionId));
+    }),
   );
   router.get(
     '/projects/:projectId/plate-schedule.csv',
-    validate({ params: idParams('projectId') }),
-    async (req, res) => {
-      sendCsv(res, await projectSchedule(ctx, currentUser(req), paramId(req, 'projectId')));
-    },
+    typedRoute({ params: idParams('projectId') }, async ({ params }, req, res) => {
+      sendCsv(res, await projectSchedule(ctx, currentUser(req), params.projectId));
+    }),
   );
   return router;
 }

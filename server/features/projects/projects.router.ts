@@ -2,9 +2,9 @@
 import { Router } from 'express';
 import { addMemberSchema, createCantileverSchema, createProjectSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
-import { idParams, paramId } from '../../lib/params';
+import { idParams } from '../../lib/params';
+import { typedRoute } from '../../lib/route';
 import { currentUser, requireRole } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
 import {
   addProjectMember,
   createCantilever,
@@ -18,55 +18,58 @@ import {
 
 export function projectsRouter(ctx: AppContext): Router {
   const router = Router();
-  const projectId = idParams('projectId');
+  const projectParams = idParams('projectId');
+  const adminOnly = requireRole(['admin'], 'manage project membership');
 
   router.get('/projects', async (req, res) => {
     res.json(await listMyProjects(ctx, currentUser(req)));
   });
-  router.post('/projects', validate({ body: createProjectSchema }), async (req, res) => {
-    res.status(201).json(await createProject(ctx, currentUser(req), req.body));
-  });
-  router.get('/projects/:projectId', validate({ params: projectId }), async (req, res) => {
-    res.json(await projectDetail(ctx, currentUser(req), paramId(req, 'projectId')));
-  });
-  router.get('/projects/:projectId/cantilevers', validate({ params: projectId }), async (req, res) => {
-    res.json(await projectCantilevers(ctx, currentUser(req), paramId(req, 'projectId')));
-  });
+  router.post(
+    '/projects',
+    typedRoute({ body: createProjectSchema }, async ({ body }, req, res) => {
+      res.status(201).json(await createProject(ctx, currentUser(req), body));
+    }),
+  );
+  router.get(
+    '/projects/:projectId',
+    typedRoute({ params: projectParams }, async ({ params }, req, res) => {
+      res.json(await projectDetail(ctx, currentUser(req), params.projectId));
+    }),
+  );
+  router.get(
+    '/projects/:projectId/cantilevers',
+    typedRoute({ params: projectParams }, async ({ params }, req, res) => {
+      res.json(await projectCantilevers(ctx, currentUser(req), params.projectId));
+    }),
+  );
   router.post(
     '/projects/:projectId/cantilevers',
-    validate({ params: projectId, body: createCantileverSchema }),
-    async (req, res) => {
-      res
-        .status(201)
-        .json(await createCantilever(ctx, currentUser(req), paramId(req, 'projectId'), req.body));
-    },
+    typedRoute(
+      { params: projectParams, body: createCantileverSchema },
+      async ({ params, body }, req, res) => {
+        res.status(201).json(await createCantilever(ctx, currentUser(req), params.projectId, body));
+      },
+    ),
   );
   router.post(
     '/projects/:projectId/members',
-    requireRole(['admin'], 'manage project membership'),
-    validate({ params: projectId, body: addMemberSchema }),
-    async (req, res) => {
-      res
-        .status(201)
-        .json(await addProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), req.body.userId));
-    },
+    adminOnly,
+    typedRoute({ params: projectParams, body: addMemberSchema }, async ({ params, body }, req, res) => {
+      res.status(201).json(await addProjectMember(ctx, currentUser(req), params.projectId, body.userId));
+    }),
   );
   router.delete(
     '/projects/:projectId/members/:userId',
-    requireRole(['admin'], 'manage project membership'),
-    validate({ params: idParams('projectId', 'userId') }),
-    async (req, res) => {
-      res.json(
-        await removeProjectMember(ctx, currentUser(req), paramId(req, 'projectId'), paramId(req, 'userId')),
-      );
-    },
+    adminOnly,
+    typedRoute({ params: idParams('projectId', 'userId') }, async ({ params }, req, res) => {
+      res.json(await removeProjectMember(ctx, currentUser(req), params.projectId, params.userId));
+    }),
   );
   router.get(
     '/cantilevers/:cantileverId',
-    validate({ params: idParams('cantileverId') }),
-    async (req, res) => {
-      res.json(await getCantilever(ctx, currentUser(req), paramId(req, 'cantileverId')));
-    },
+    typedRoute({ params: idParams('cantileverId') }, async ({ params }, req, res) => {
+      res.json(await getCantilever(ctx, currentUser(req), params.cantileverId));
+    }),
   );
   return router;
 }

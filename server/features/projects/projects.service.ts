@@ -1,7 +1,12 @@
 /** Projects, their team and their cantilevers. */
 import type { Knex } from 'knex';
-import type { CantileverDto, ProjectDetailDto, ProjectDto } from '../../../shared/schemas/api';
-import type { DesignInput } from '../../../shared/schemas/design';
+import type {
+  CantileverDto,
+  CreateCantileverRequest,
+  CreateProjectRequest,
+  ProjectDetailDto,
+  ProjectDto,
+} from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { badRequest, forbidden, notFound } from '../../lib/http-error';
 import { recordAudit } from '../audit/audit.repository';
@@ -30,7 +35,7 @@ export function listMyProjects(ctx: AppContext, user: Express.User): Promise<Pro
 export async function createProject(
   ctx: AppContext,
   user: Express.User,
-  body: { name: string; site: string; codeBasis: string; units: 'US' | 'SI' },
+  body: CreateProjectRequest,
 ): Promise<ProjectDetailDto> {
   if (!PROJECT_CREATORS.has(user.role)) throw forbidden(`Your role (${user.role}) may not create projects.`);
   const id = await ctx.db.transaction(async (trx) => {
@@ -68,7 +73,7 @@ export async function createCantilever(
   ctx: AppContext,
   user: Express.User,
   projectId: number,
-  body: { name: string; description: string; input?: DesignInput },
+  body: CreateCantileverRequest,
 ): Promise<CantileverDto> {
   await projectForMember(ctx.db, projectId, user.id);
   if (!DESIGN_ROLES.has(user.role)) throw forbidden(`Your role (${user.role}) may not add cantilevers.`);

@@ -3,9 +3,9 @@ import { Router } from 'express';
 import { createRevisionSchema, reviewSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
-import { idParams, paramId } from '../../lib/params';
+import { idParams } from '../../lib/params';
+import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
 import {
   getRevision,
   listRevisions,
@@ -16,28 +16,32 @@ import {
 
 export function revisionsRouter(ctx: AppContext): Router {
   const router = Router();
+  const cantileverParams = idParams('cantileverId');
+  const revisionParams = idParams('revisionId');
 
   router.get(
     '/cantilevers/:cantileverId/revisions',
-    validate({ params: idParams('cantileverId') }),
-    async (req, res) => {
-      res.json(await listRevisions(ctx, currentUser(req), paramId(req, 'cantileverId')));
-    },
+    typedRoute({ params: cantileverParams }, async ({ params }, req, res) => {
+      res.json(await listRevisions(ctx, currentUser(req), params.cantileverId));
+    }),
   );
 
   router.post(
     '/cantilevers/:cantileverId/revisions',
-    validate({ params: idParams('cantileverId'), body: createRevisionSchema }),
-    async (req, res) => {
-      res
-        .status(201)
-        .json(await saveRevisionForMember(ctx, currentUser(req), paramId(req, 'cantileverId'), req.body));
-    },
+    typedRoute(
+      { params: cantileverParams, body: createRevisionSchema },
+      async ({ params, body }, req, res) => {
+        res.status(201).json(await saveRevisionForMember(ctx, currentUser(req), params.cantileverId, body));
+      },
+    ),
   );
 
-  router.get('/revisions/:revisionId', validate({ params: idParams('revisionId') }), async (req, res) => {
-    res.json(await getRevision(ctx, currentUser(req), paramId(req, 'revisionId')));
-  });
+  router.get(
+    '/revisions/:revisionId',
+    typedRoute({ params: revisionParams }, async ({ params }, req, res) => {
+      res.json(await getRevision(ctx, currentUser(req), params.revisionId));
+    }),
+  );
 
   // A saved revision is a record: changing or deleting one is refused for everybody.
   router.all('/revisions/:revisionId', () => {
@@ -50,18 +54,16 @@ export function revisionsRouter(ctx: AppContext): Router {
 
   router.post(
     '/revisions/:revisionId/submit',
-    validate({ params: idParams('revisionId') }),
-    async (req, res) => {
-      res.json(await submitRevision(ctx, currentUser(req), paramId(req, 'revisionId')));
-    },
+    typedRoute({ params: revisionParams }, async ({ params }, req, res) => {
+      res.json(await submitRevision(ctx, currentUser(req), params.revisionId));
+    }),
   );
 
   router.post(
     '/revisions/:revisionId/reviews',
-    validate({ params: idParams('revisionId'), body: reviewSchema }),
-    async (req, res) => {
-      res.status(201).json(await reviewRevision(ctx, currentUser(req), paramId(req, 'revisionId'), req.body));
-    },
+    typedRoute({ params: revisionParams, body: reviewSchema }, async ({ params, body }, req, res) => {
+      res.status(201).json(await reviewRevision(ctx, currentUser(req), params.revisionId, body));
+    }),
   );
 
   return router;

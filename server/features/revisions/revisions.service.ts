@@ -1,7 +1,12 @@
 /** Saving, reading, submitting and reviewing revisions. */
 import type { Knex } from 'knex';
-import type { RevisionDto, RevisionSummaryDto, StaleSaveBody } from '../../../shared/schemas/api';
-import type { DesignInput } from '../../../shared/schemas/design';
+import type {
+  CreateRevisionRequest,
+  ReviewRequest,
+  RevisionDto,
+  RevisionSummaryDto,
+  StaleSaveBody,
+} from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError, conflict, forbidden, notFound } from '../../lib/http-error';
 import { queueMail } from '../../mail/outbox.repository';
@@ -20,12 +25,6 @@ import {
   reviewStates,
 } from './revisions.repository';
 
-export interface SaveRequest {
-  baseRevision: number | null;
-  message: string;
-  input: DesignInput;
-}
-
 /**
  * Saves a new revision inside one transaction: the base must still be the latest revision (else
  * 409 with the latest), the role must be allowed to change what changed, the engine computes the
@@ -35,7 +34,7 @@ export async function saveRevision(
   db: Knex,
   user: Express.User,
   cantilever: CantileverRow,
-  body: SaveRequest,
+  body: CreateRevisionRequest,
 ): Promise<RevisionDto> {
   const run = async (trx: Knex.Transaction) => {
     const latest = await latestRevision(trx, cantilever.id);
@@ -68,7 +67,7 @@ export async function saveRevisionForMember(
   ctx: AppContext,
   user: Express.User,
   cantileverId: number,
-  body: SaveRequest,
+  body: CreateRevisionRequest,
 ): Promise<RevisionDto> {
   const cantilever = await cantileverForMember(ctx.db, cantileverId, user.id);
   return saveRevision(ctx.db, user, cantilever, body);
@@ -141,7 +140,7 @@ export async function reviewRevision(
   ctx: AppContext,
   user: Express.User,
   revisionId: number,
-  body: { decision: 'approve' | 'request-changes'; comment: string },
+  body: ReviewRequest,
 ): Promise<RevisionDto> {
   const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
   if (user.role !== 'engineer') throw forbidden('Only an engineer may review a revision.');

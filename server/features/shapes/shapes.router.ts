@@ -5,8 +5,8 @@ import { shapesQuerySchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError, badRequest } from '../../lib/http-error';
 import { currentUser, requireRole } from '../../middleware/require-auth';
-import { validate } from '../../middleware/validate';
-import { importShapes, searchShapes, type ShapesQuery } from './shapes.service';
+import { typedRoute } from '../../lib/route';
+import { importShapes, searchShapes } from './shapes.service';
 
 const IMPORT_MAX_BYTES = 5 * 1024 * 1024;
 
@@ -34,9 +34,12 @@ const csvUpload: RequestHandler = (req, res, next) => {
 
 export function shapesRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/shapes', validate({ query: shapesQuerySchema }), async (_req, res) => {
-    res.json(await searchShapes(ctx, res.locals.query as ShapesQuery));
-  });
+  router.get(
+    '/shapes',
+    typedRoute({ query: shapesQuerySchema }, async ({ query }, _req, res) => {
+      res.json(await searchShapes(ctx, query));
+    }),
+  );
   router.post(
     '/shapes/import',
     requireRole(['architect', 'fabricator', 'engineer'], 'import shapes'),

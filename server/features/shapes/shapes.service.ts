@@ -1,18 +1,11 @@
 /** The shapes browser (built-in plus imported) and the CSV import. */
-import type { ShapeImportDto, ShapesDto } from '../../../shared/schemas/api';
+import type { ShapeImportDto, ShapesDto, ShapesQuery } from '../../../shared/schemas/api';
 import { SHAPES, SHAPES_SOURCE, normalizeLabel } from '../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import type { AppContext } from '../../context';
 import { badRequest } from '../../lib/http-error';
 import { listCustomShapes, upsertCustomShapes } from './shapes.repository';
 import { ShapeCsvError, readShapesCsv } from './shape-csv';
-
-export interface ShapesQuery {
-  family?: ShapeRecord['family'];
-  q?: string;
-  minDepth?: number;
-  maxDepth?: number;
-}
 
 function depthOf(s: ShapeRecord): number | undefined {
   return s.d ?? s.Ht ?? s.OD;

@@ -1,12 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { UserDto } from '../../../../shared/schemas/api';
+import type { LoginBody } from '../../../../shared/schemas/auth';
 import { apiPost } from '../../../lib/api-client';
 import { authKeys } from './auth-keys';
-
-export interface LoginBody {
-  email: string;
-  password: string;
-}
 
 export function login(body: LoginBody): Promise<UserDto> {
   return apiPost<UserDto>('/api/auth/login', { ...body });

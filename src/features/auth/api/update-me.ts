@@ -1,12 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { UserDto } from '../../../../shared/schemas/api';
+import type { UpdateMeBody, UserDto } from '../../../../shared/schemas/api';
 import { apiPatch } from '../../../lib/api-client';
 import { authKeys } from './auth-keys';
-
-export interface UpdateMeBody {
-  units?: 'US' | 'SI';
-  displayName?: string;
-}
 
 export function updateMe(body: UpdateMeBody): Promise<UserDto> {
   return apiPatch<UserDto>('/api/auth/me', { ...body });

@@ -4,7 +4,8 @@ import { loginSchema } from '../../../../shared/schemas/auth';
 import { ApiError } from '../../../lib/api-client';
 import { Button } from '../../../components/ui/button';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
-import { useLogin, type LoginBody } from '../api/login';
+import type { LoginBody } from '../../../../shared/schemas/auth';
+import { useLogin } from '../api/login';
 
 /** E-mail and password, with plain errors next to each field and one for a refused sign-in. */
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {

@@ -1,15 +1,13 @@
+import type { z } from 'zod';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
+import { createCantileverSchema } from '../../../../shared/schemas/api';
 import { useCreateCantilever } from '../api/create-cantilever';
 
-const formSchema = z.object({
-  name: z.string().trim().min(1, 'is required').max(120, 'is too long (120 characters at most)'),
-  description: z.string().trim().max(500, 'is too long (500 characters at most)'),
-});
-type FormValues = z.infer<typeof formSchema>;
+/** The server's own schema, without the optional first design (the desk's example is used). */
+const formSchema = createCantileverSchema.pick({ name: true, description: true });
 
 /** A new cantilever; its first design starts from the example on the desk. */
 export function CreateCantileverForm({
@@ -20,7 +18,7 @@ export function CreateCantileverForm({
   onDone: (cantileverId: number) => void;
 }) {
   const create = useCreateCantilever(projectId);
-  const form = useForm<FormValues>({
+  const form = useForm<z.input<typeof formSchema>, unknown, z.output<typeof formSchema>>({
     resolver: zodResolver(formSchema),
     defaultValues: { name: '', description: '' },
   });

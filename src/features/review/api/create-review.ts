@@ -1,14 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '../../../lib/api-client';
-import type { RevisionDto } from '../../../../shared/schemas/api';
+import type { RevisionDto, ReviewBody } from '../../../../shared/schemas/api';
 import { revisionKeys } from '../../revisions/api/revision-keys';
 import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
 import { projectKeys } from '../../projects/api/project-keys';
-
-export interface ReviewBody {
-  decision: 'approve' | 'request-changes';
-  comment: string;
-}
 
 export function createReview(revisionId: number, body: ReviewBody): Promise<RevisionDto> {
   return apiPost<RevisionDto>(`/api/revisions/${revisionId}/reviews`, { ...body });

@@ -1,18 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { RevisionDto, StaleSaveBody } from '../../../../shared/schemas/api';
-import type { DesignDocument } from '../../../../shared/schemas/design';
+import type { CreateRevisionBody, RevisionDto, StaleSaveBody } from '../../../../shared/schemas/api';
 import { ApiError, apiPost } from '../../../lib/api-client';
 import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
 import { projectKeys } from '../../projects/api/project-keys';
 import { revisionKeys } from './revision-keys';
 
-export interface SaveRevisionBody {
-  baseRevision: number | null;
-  message: string;
-  input: DesignDocument;
-}
-
-export function saveRevision(cantileverId: number, body: SaveRevisionBody): Promise<RevisionDto> {
+export function saveRevision(cantileverId: number, body: CreateRevisionBody): Promise<RevisionDto> {
   return apiPost<RevisionDto>(`/api/cantilevers/${cantileverId}/revisions`, { ...body });
 }
 
@@ -26,7 +19,7 @@ export function staleLatest(error: unknown): RevisionDto | null {
 export function useSaveRevision(cantileverId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: SaveRevisionBody) => saveRevision(cantileverId, body),
+    mutationFn: (body: CreateRevisionBody) => saveRevision(cantileverId, body),
     onSuccess: (revision) => {
       queryClient.setQueryData(revisionKeys.detail(revision.id), revision);
       void queryClient.invalidateQueries({ queryKey: revisionKeys.list(cantileverId) });
