@@ -44,7 +44,10 @@ export default tseslint.config(
         {
           patterns: [
             { group: ['**/src/**'], message: 'server/ never imports src/' },
-            { group: ['**/*.repository'], message: 'a router calls services; only services use repositories' },
+            {
+              group: ['**/*.repository'],
+              message: 'a router calls services; only services use repositories',
+            },
           ],
         },
       ],
