@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { Check } from '../../shared/engine/types';
 import { CheckBoard } from '../../src/features/desk/components/check-board';
 import { Verdict } from '../../src/features/desk/components/verdict';
-import { checkWord, passes, sortWorstFirst, verdictOf } from '../../src/features/desk/lib/check-words';
+import { checkWord, passes, sortWorstFirst, verdictOf } from '../../shared/words/check-words';
 
 function check(id: string, ratio: number | null, ok = ratio !== null && ratio <= 1): Check {
   return {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import CompareRoute from '../../src/app/routes/compare';
-import { pathWords } from '../../src/features/compare/utils/path-words';
-import { ratioRows } from '../../src/features/compare/utils/ratio-rows';
+import { pathWords } from '../../shared/words/field-words';
+import { ratioRows } from '../../src/lib/ratio-rows';
 import { exampleDesign } from '../../shared/engine/examples';
 import { CAUTION, type Check } from '../../shared/engine/types';
 import type { DesignDocument } from '../../shared/schemas/design';

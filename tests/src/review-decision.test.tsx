@@ -6,7 +6,7 @@ import { exampleDesign } from '../../shared/engine/examples';
 import { CAUTION } from '../../shared/engine/types';
 import type { DesignDocument } from '../../shared/schemas/design';
 import type { RevisionDto, ReviewDto, UserDto } from '../../shared/schemas/api';
-import { formatDate } from '../../src/features/history/utils/format';
+import { formatDate } from '../../src/lib/format';
 import { makeRevision, renderAt, stubFetch, users, type Call } from './history-fixtures';
 
 const revised: DesignDocument = {

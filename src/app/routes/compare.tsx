@@ -1,9 +1,9 @@
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { paths } from '../../config/paths';
-import { useRevision } from '../../features/revisions/api/get-revision';
-import { errorText } from '../../features/history/utils/error-text';
+import { useRevision } from '../../lib/api/revisions/get-revision';
+import { errorText } from '../../lib/error-text';
 import { CompareView } from '../../features/compare/components/compare-view';
-import { CautionNote } from '../../features/history/components/caution-note';
+import { CautionNote } from '../../components/ui/caution-note';
 
 /** Compare: two revisions of one cantilever (?a= earlier id, ?b= later id). */
 export default function CompareRoute() {

@@ -3,11 +3,12 @@ import { useParams } from 'react-router-dom';
 import { exampleDesign } from '../../../shared/engine/examples';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import { ErrorNote, Loading } from '../../components/ui/status';
-import { useMe } from '../../features/auth/api/get-me';
-import { useCantilever } from '../../features/cantilevers/api/get-cantilever';
+import { useMe } from '../../lib/api/me/get-me';
+import { useCantilever } from '../../lib/api/cantilevers/get-cantilever';
+import { AttachmentsPanel } from '../../features/attachments/components/attachments-panel';
 import { DeskEditor } from '../../features/desk/components/desk-editor';
 import { prepareDocument } from '../../features/desk/lib/prepare-document';
-import { useRevision } from '../../features/revisions/api/get-revision';
+import { useRevision } from '../../lib/api/revisions/get-revision';
 
 export default function DesignDeskRoute() {
   const cantileverId = Number(useParams().cantileverId);
@@ -44,6 +45,7 @@ export default function DesignDeskRoute() {
       initialDoc={initialDoc}
       user={me.data}
       toUserUnits={toUserUnits}
+      files={<AttachmentsPanel cantileverId={cantileverId} />}
     />
   );
 }

@@ -1,10 +1,10 @@
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useTimeline } from '../../features/history/api/get-timeline';
-import { useCantilever } from '../../features/cantilevers/api/get-cantilever';
-import { useMe } from '../../features/auth/api/get-me';
+import { useCantilever } from '../../lib/api/cantilevers/get-cantilever';
+import { useMe } from '../../lib/api/me/get-me';
 import { RevisionTimeline } from '../../features/history/components/revision-timeline';
-import { errorText } from '../../features/history/utils/error-text';
+import { errorText } from '../../lib/error-text';
 
 /** History: the revision timeline of one cantilever. */
 export default function HistoryRoute() {

@@ -3,7 +3,7 @@ import { Button } from '../../components/ui/button';
 import { useOutbox } from '../../features/admin/api/get-outbox';
 import { AdminOnly } from '../../features/admin/components/admin-only';
 import { OutboxTable } from '../../features/admin/components/outbox-table';
-import { errorText } from '../../features/history/utils/error-text';
+import { errorText } from '../../lib/error-text';
 
 function OutboxScreen() {
   const outbox = useOutbox();

@@ -7,7 +7,7 @@ import { Button } from '../../components/ui/button';
 import { Dialog } from '../../components/ui/dialog';
 import { ErrorNote, Loading } from '../../components/ui/status';
 import { ProjectMembersPanel } from '../../features/admin/components/project-members-panel';
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../lib/api/me/get-me';
 import { useProject } from '../../features/projects/api/get-project';
 import { CantileverTable } from '../../features/projects/components/cantilever-table';
 import { CreateCantileverForm } from '../../features/projects/components/create-cantilever-form';

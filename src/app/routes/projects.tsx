@@ -5,7 +5,7 @@ import { paths } from '../../config/paths';
 import { Button } from '../../components/ui/button';
 import { Dialog } from '../../components/ui/dialog';
 import { ErrorNote, Loading } from '../../components/ui/status';
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../lib/api/me/get-me';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { CreateProjectForm } from '../../features/projects/components/create-project-form';
 

@@ -1,8 +1,8 @@
 import { useParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { revisionQueryOptions } from '../../features/revisions/api/get-revision';
-import { useMe } from '../../features/auth/api/get-me';
-import { errorText } from '../../features/history/utils/error-text';
+import { revisionQueryOptions } from '../../lib/api/revisions/get-revision';
+import { useMe } from '../../lib/api/me/get-me';
+import { errorText } from '../../lib/error-text';
 import { ReviewView } from '../../features/review/components/review-view';
 
 /** Review: one revision, for the engineer who decides on it. */

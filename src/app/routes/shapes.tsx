@@ -1,5 +1,5 @@
-import { useMe } from '../../features/auth/api/get-me';
-import { ShapesBrowser } from '../../features/shapes/components/shapes-browser';
+import { useMe } from '../../lib/api/me/get-me';
+import { ShapesBrowser } from '../../components/shapes/shapes-browser';
 import { ShapeImport } from '../../features/shapes/components/shape-import';
 
 export default function ShapesRoute() {

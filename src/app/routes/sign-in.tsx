@@ -1,6 +1,6 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '../../config/paths';
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../lib/api/me/get-me';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { CAUTION_SHORT } from '../../components/layouts/brand';
 import { Brand } from '../../components/layouts/brand';

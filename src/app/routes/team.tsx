@@ -1,9 +1,9 @@
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../lib/api/me/get-me';
 import { useUsers } from '../../features/admin/api/get-users';
 import { AdminOnly } from '../../features/admin/components/admin-only';
 import { AccountsTable } from '../../features/admin/components/accounts-table';
 import { InviteForm } from '../../features/admin/components/invite-form';
-import { errorText } from '../../features/history/utils/error-text';
+import { errorText } from '../../lib/error-text';
 
 function TeamScreen() {
   const users = useUsers();

@@ -1,8 +1,8 @@
 import { LogOut } from 'lucide-react';
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { paths } from '../../config/paths';
-import { useMe } from '../../features/auth/api/get-me';
-import { useLogout } from '../../features/auth/api/logout';
+import { useMe } from '../../lib/api/me/get-me';
+import { useLogout } from '../../lib/api/me/logout';
 import { CAUTION } from '../../../shared/engine/types';
 import { Brand } from './brand';
 

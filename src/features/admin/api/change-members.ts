@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiDelete, apiPost } from '../../../lib/api-client';
-import { projectKeys } from '../../projects/api/project-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 import { adminKeys } from './admin-keys';
 
 /** The members show here and on the project page: refresh both. */

@@ -3,7 +3,7 @@ import { UserCheck, UserX } from 'lucide-react';
 import { ROLES, type Role, type UserDto } from '../../../../shared/schemas/api';
 import { Button } from '../../../components/ui/button';
 import { useUpdateUser, type UpdateUserBody } from '../api/update-user';
-import { errorText } from '../../history/utils/error-text';
+import { errorText } from '../../../lib/error-text';
 
 /** Every account with its role and whether it may sign in; change role, deactivate, reactivate. */
 export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number | undefined }) {

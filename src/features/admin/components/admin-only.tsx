@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Lock } from 'lucide-react';
-import { useMe } from '../../auth/api/get-me';
+import { useMe } from '../../../lib/api/me/get-me';
 
 /** Renders its children for admins only; others read why the page is closed to them. */
 export function AdminOnly({ children }: { children: ReactNode }) {

@@ -2,7 +2,7 @@ import { Fragment, useState } from 'react';
 import { CircleCheck, CircleX, Hourglass, type LucideIcon } from 'lucide-react';
 import type { OutboxDto } from '../../../../shared/schemas/api';
 import { Button } from '../../../components/ui/button';
-import { formatDateTime } from '../../history/utils/format';
+import { formatDateTime } from '../../../lib/format';
 
 const STATUS: Record<OutboxDto['status'], { word: string; Icon: LucideIcon; tone: string }> = {
   pending: { word: 'waiting to send', Icon: Hourglass, tone: 'text-concrete-700' },

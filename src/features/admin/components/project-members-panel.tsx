@@ -1,11 +1,11 @@
 import { useId, useState } from 'react';
 import { UserPlus } from 'lucide-react';
 import { Button } from '../../../components/ui/button';
-import { useMe } from '../../auth/api/get-me';
+import { useMe } from '../../../lib/api/me/get-me';
 import { useUsers } from '../api/get-users';
 import { useProjectMembers } from '../api/get-project-members';
 import { useAddMember, useRemoveMember } from '../api/change-members';
-import { errorText } from '../../history/utils/error-text';
+import { errorText } from '../../../lib/error-text';
 
 /** The project's members, with adding (from the active accounts) and removing, for admins. */
 export function ProjectMembersPanel({ projectId }: { projectId: number }) {

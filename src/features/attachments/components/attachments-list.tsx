@@ -2,7 +2,7 @@ import { Download, Eye } from 'lucide-react';
 import type { AttachmentDto } from '../../../../shared/schemas/api';
 import { attachmentUrl } from '../api/get-attachments';
 import { formatBytes } from '../utils/upload-messages';
-import { formatDate } from '../../history/utils/format';
+import { formatDate } from '../../../lib/format';
 
 const TYPE_WORDS: Record<string, string> = {
   'application/pdf': 'PDF',

@@ -1,7 +1,7 @@
 import { EDIT_RIGHTS } from '../../../../shared/schemas/api';
-import { useMe } from '../../auth/api/get-me';
+import { useMe } from '../../../lib/api/me/get-me';
 import { useAttachments } from '../api/get-attachments';
-import { errorText } from '../../history/utils/error-text';
+import { errorText } from '../../../lib/error-text';
 import { AttachmentsList } from './attachments-list';
 import { UploadControl } from './upload-control';
 

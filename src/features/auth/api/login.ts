@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { UserDto } from '../../../../shared/schemas/api';
 import type { LoginBody } from '../../../../shared/schemas/auth';
 import { apiPost } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
+import { authKeys } from '../../../lib/api/me/auth-keys';
 
 export function login(body: LoginBody): Promise<UserDto> {
   return apiPost<UserDto>('/api/auth/login', { ...body });

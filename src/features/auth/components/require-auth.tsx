@@ -1,7 +1,7 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { Loading, ErrorNote } from '../../../components/ui/status';
-import { useMe } from '../api/get-me';
+import { useMe } from '../../../lib/api/me/get-me';
 
 /** Sends signed-out people to the sign-in page, remembering where they were going. */
 export function RequireAuth() {

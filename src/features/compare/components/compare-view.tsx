@@ -1,11 +1,11 @@
 import type { RevisionDto } from '../../../../shared/schemas/api';
 import { diffDesigns } from '../../../../shared/schemas/diff';
-import { CautionNote } from '../../history/components/caution-note';
+import { CautionNote } from '../../../components/ui/caution-note';
 import { VerdictWord } from '../../../components/ui/verdict-word';
 import { useStations } from '../hooks/use-stations';
-import { ratioRows, ratioSummary } from '../utils/ratio-rows';
-import { ChangedInputsTable } from './changed-inputs-table';
-import { RatioTable } from './ratio-table';
+import { ratioRows, ratioSummary } from '../../../lib/ratio-rows';
+import { ChangedInputsTable } from '../../../components/diff/changed-inputs-table';
+import { RatioTable } from '../../../components/diff/ratio-table';
 import { CompareCurves } from './compare-curves';
 
 /** Passes only when the engine said so and every check has a computed ratio. */

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import type { RevisionDto } from '../../../../shared/schemas/api';
 import type { Stations } from '../../../../shared/engine/types';
-import { revisionKeys } from '../../revisions/api/revision-keys';
+import { revisionKeys } from '../../../lib/api/revisions/revision-keys';
 
 /**
  * The station arrays of a stored revision: the stored ones when the server kept them, otherwise the

@@ -1,6 +1,6 @@
 import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
-import { checkTone, checkWord, sortWorstFirst, type Tone } from '../lib/check-words';
+import { checkTone, checkWord, sortWorstFirst, type Tone } from '../../../../shared/words/check-words';
 
 const BAR: Record<Tone, string> = {
   calm: 'bg-util-calm',

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { FormProvider, useForm, useFormState } from 'react-hook-form';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { UnitSystem } from '../../../../shared/engine/units';
@@ -10,9 +10,9 @@ import {
   type UserDto,
 } from '../../../../shared/schemas/api';
 import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
-import { useUpdateMe } from '../../auth/api/update-me';
-import { ShapePickerDialog } from '../../shapes/components/shape-picker-dialog';
-import { useShapes } from '../../shapes/api/get-shapes';
+import { useUpdateMe } from '../../../lib/api/me/update-me';
+import { ShapePickerDialog } from '../../../components/shapes/shape-picker-dialog';
+import { useShapes } from '../../../lib/api/shapes/get-shapes';
 import { useLiveDesign } from '../hooks/use-live-design';
 import { useUnitsSwitch } from '../hooks/use-units-switch';
 import { useDiffersFromSaved } from '../hooks/use-differs-from-saved';
@@ -34,10 +34,12 @@ export interface DeskEditorProps {
   user: UserDto;
   /** Turns a document from the server into the person's unit system. */
   toUserUnits: (doc: DesignDocument) => DesignDocument;
+  /** The cantilever's files panel (the attachments feature, composed by the route). */
+  files: ReactNode;
 }
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
-export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits }: DeskEditorProps) {
+export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits, files }: DeskEditorProps) {
   const form = useForm<DesignDocument, unknown, DesignInput>({
     resolver: zodResolver(designSchema),
     mode: 'onChange',
@@ -145,7 +147,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
             </form>
             <div className="flex min-w-0 flex-col gap-3">
               <DeskResults live={live} doc={live.doc} schedule={schedule} />
-              <DeskSide cantileverId={cantilever.id} current={base} />
+              <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>
           </div>
         </div>

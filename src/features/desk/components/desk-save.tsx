@@ -5,7 +5,7 @@ import type { RevisionDto } from '../../../../shared/schemas/api';
 import type { DesignDocument, DesignInput } from '../../../../shared/schemas/design';
 import { Button } from '../../../components/ui/button';
 import { ApiError } from '../../../lib/api-client';
-import { staleLatest, useSaveRevision } from '../../revisions/api/save-revision';
+import { staleLatest, useSaveRevision } from '../../../lib/api/revisions/save-revision';
 import { replaceKeepingDirty } from '../hooks/use-units-switch';
 import { ConflictDialog } from './conflict-dialog';
 import { LeaveGuard } from './leave-guard';

@@ -1,14 +1,15 @@
-import { memo } from 'react';
-import { AttachmentsPanel } from '../../attachments/components/attachments-panel';
+import { memo, type ReactNode } from 'react';
 import { RevisionList } from './revision-list';
 
-/** Revisions and files of the cantilever, under the results. */
+/** Revisions and files of the cantilever, under the results; the files panel comes from the route. */
 export const DeskSide = memo(function DeskSide({
   cantileverId,
   current,
+  files,
 }: {
   cantileverId: number;
   current: number | null;
+  files: ReactNode;
 }) {
   return (
     <div className="grid gap-3 xl:grid-cols-2">
@@ -18,7 +19,7 @@ export const DeskSide = memo(function DeskSide({
       </section>
       <section aria-label="Files" className="rounded-md border border-concrete-300 bg-white p-3">
         <h2 className="mb-2 text-sm font-semibold text-concrete-800">Files</h2>
-        <AttachmentsPanel cantileverId={cantileverId} />
+        {files}
       </section>
     </div>
   );

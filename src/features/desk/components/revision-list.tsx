@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { ErrorNote, Loading } from '../../../components/ui/status';
 import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
-import { useRevisions } from '../../revisions/api/get-revisions';
+import { useRevisions } from '../../../lib/api/revisions/get-revisions';
 
 /** The cantilever's revisions on the desk: number, author, message, date, review state. */
 export function RevisionList({ cantileverId, current }: { cantileverId: number; current: number | null }) {

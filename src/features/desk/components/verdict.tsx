@@ -1,6 +1,6 @@
 import { AlertTriangle, CheckCircle2, XCircle } from 'lucide-react';
 import { CAUTION, type Check } from '../../../../shared/engine/types';
-import { verdictOf } from '../lib/check-words';
+import { verdictOf } from '../../../../shared/words/check-words';
 
 /** The overall verdict in words (announced when it changes), and the caution under it, always. */
 export function Verdict({ checks, stale }: { checks: readonly Check[] | null; stale: boolean }) {

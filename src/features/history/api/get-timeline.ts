@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import type { RevisionSummaryDto } from '../../../../shared/schemas/api';
-import { revisionsQueryOptions } from '../../revisions/api/get-revisions';
+import { revisionsQueryOptions } from '../../../lib/api/revisions/get-revisions';
 
 /** Newest first, whatever order the server sends. */
 export function sortNewestFirst(revisions: RevisionSummaryDto[]): RevisionSummaryDto[] {

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '../../../lib/api-client';
 import type { RevisionDto } from '../../../../shared/schemas/api';
-import { revisionKeys } from '../../revisions/api/revision-keys';
-import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
-import { projectKeys } from '../../projects/api/project-keys';
+import { revisionKeys } from '../../../lib/api/revisions/revision-keys';
+import { cantileverKeys } from '../../../lib/api/cantilevers/cantilever-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 
 /** Asks the project's engineers to review a revision (the server e-mails them). */
 export function submitRevision(revisionId: number): Promise<RevisionDto> {

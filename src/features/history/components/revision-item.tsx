@@ -5,8 +5,8 @@ import type { RevisionSummaryDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
 import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { VerdictWord } from '../../../components/ui/verdict-word';
-import { CommentsThread } from './comments-thread';
-import { formatDateTime } from '../utils/format';
+import { CommentsThread } from '../../../components/comments-thread';
+import { formatDateTime } from '../../../lib/format';
 
 interface RevisionItemProps {
   revision: RevisionSummaryDto;

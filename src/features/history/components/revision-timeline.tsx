@@ -5,7 +5,7 @@ import { EDIT_RIGHTS, type RevisionSummaryDto, type UserDto } from '../../../../
 import { paths } from '../../../config/paths';
 import { useSubmitRevision } from '../api/submit-revision';
 import { RevisionItem } from './revision-item';
-import { errorText } from '../utils/error-text';
+import { errorText } from '../../../lib/error-text';
 
 interface RevisionTimelineProps {
   cantileverId: number;

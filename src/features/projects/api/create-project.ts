@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import type { createProjectSchema, ProjectDto } from '../../../../shared/schemas/api';
 import { apiPost } from '../../../lib/api-client';
-import { projectKeys } from './project-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 
 export type CreateProjectBody = z.input<typeof createProjectSchema>;
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ProjectDetailDto } from '../../../../shared/schemas/api';
 import { apiGet } from '../../../lib/api-client';
-import { projectKeys } from './project-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 
 export function getProject(projectId: number, signal?: AbortSignal): Promise<ProjectDetailDto> {
   return apiGet<ProjectDetailDto>(`/api/projects/${projectId}`, signal);

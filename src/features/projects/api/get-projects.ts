@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ProjectDto } from '../../../../shared/schemas/api';
 import { apiGet } from '../../../lib/api-client';
-import { projectKeys } from './project-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 
 export function getProjects(signal?: AbortSignal): Promise<ProjectDto[]> {
   return apiGet<ProjectDto[]>('/api/projects', signal);

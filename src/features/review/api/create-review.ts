@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiPost } from '../../../lib/api-client';
 import type { RevisionDto, ReviewBody } from '../../../../shared/schemas/api';
-import { revisionKeys } from '../../revisions/api/revision-keys';
-import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
-import { projectKeys } from '../../projects/api/project-keys';
+import { revisionKeys } from '../../../lib/api/revisions/revision-keys';
+import { cantileverKeys } from '../../../lib/api/cantilevers/cantilever-keys';
+import { projectKeys } from '../../../lib/api/projects/project-keys';
 
 export function createReview(revisionId: number, body: ReviewBody): Promise<RevisionDto> {
   return apiPost<RevisionDto>(`/api/revisions/${revisionId}/reviews`, { ...body });

@@ -2,12 +2,12 @@ import { Link } from 'react-router-dom';
 import type { RevisionDto } from '../../../../shared/schemas/api';
 import { diffDesigns } from '../../../../shared/schemas/diff';
 import { paths } from '../../../config/paths';
-import { useRevisions } from '../../revisions/api/get-revisions';
-import { useRevision } from '../../revisions/api/get-revision';
-import { errorText } from '../../history/utils/error-text';
-import { ChangedInputsTable } from '../../compare/components/changed-inputs-table';
-import { RatioTable } from '../../compare/components/ratio-table';
-import { ratioRows } from '../../compare/utils/ratio-rows';
+import { useRevisions } from '../../../lib/api/revisions/get-revisions';
+import { useRevision } from '../../../lib/api/revisions/get-revision';
+import { errorText } from '../../../lib/error-text';
+import { ChangedInputsTable } from '../../../components/diff/changed-inputs-table';
+import { RatioTable } from '../../../components/diff/ratio-table';
+import { ratioRows } from '../../../lib/ratio-rows';
 
 /** What changed since the revision this one was based on: inputs and check ratios. */
 export function BaseChanges({ revision }: { revision: RevisionDto }) {

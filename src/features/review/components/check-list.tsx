@@ -1,6 +1,6 @@
 import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
-import { RatioCell } from '../../compare/components/ratio-cell';
+import { RatioCell } from '../../../components/diff/ratio-cell';
 
 /** Worst first; a check that could not be computed counts as the worst. */
 export function worstFirst(checks: Check[]): Check[] {

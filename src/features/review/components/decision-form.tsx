@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { reviewSchema } from '../../../../shared/schemas/api';
 import { Button } from '../../../components/ui/button';
 import { useCreateReview } from '../api/create-review';
-import { errorText } from '../../history/utils/error-text';
+import { errorText } from '../../../lib/error-text';
 
 /** The shared review schema, plus: asking for changes needs words saying which. */
 const decisionSchema = reviewSchema.refine((v) => v.decision !== 'request-changes' || v.comment.length > 0, {

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { BadgeCheck, Lock, MessageSquareWarning } from 'lucide-react';
 import type { RevisionDto, UserDto } from '../../../../shared/schemas/api';
-import { formatDate } from '../../history/utils/format';
+import { formatDate } from '../../../lib/format';
 import { decisionAccess, latestDecision } from '../utils/decision-rules';
 import { DecisionForm } from './decision-form';
 

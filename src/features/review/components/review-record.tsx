@@ -1,5 +1,5 @@
 import type { ReviewDto } from '../../../../shared/schemas/api';
-import { formatDateTime } from '../../history/utils/format';
+import { formatDateTime } from '../../../lib/format';
 
 const WORDS: Record<ReviewDto['state'], string> = {
   submitted: 'submitted for review',

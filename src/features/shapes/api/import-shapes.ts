@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ShapeImportDto } from '../../../../shared/schemas/api';
 import { ApiError } from '../../../lib/api-client';
-import { shapeKeys } from './shape-keys';
+import { shapeKeys } from '../../../lib/api/shapes/shape-keys';
 
 /**
  * Uploads a CSV of shapes (multipart field "file"). XMLHttpRequest rather than fetch, for the upload

@@ -1,4 +1,4 @@
-import type { ShapeFamily, ShapeRecord } from '../../../../shared/engine/shapes/types';
+import type { ShapeFamily, ShapeRecord } from '../../shared/engine/shapes/types';
 
 /** The overall depth of a shape along its strong axis, in: d (W, C), Ht (HSS) or OD (pipe). */
 export function shapeDepth(s: ShapeRecord): number | undefined {

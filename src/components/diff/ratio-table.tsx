@@ -1,5 +1,5 @@
 import { ArrowDown, ArrowUp, Minus, Plus, X, CircleHelp, type LucideIcon } from 'lucide-react';
-import type { RatioRow, RatioTrend } from '../utils/ratio-rows';
+import type { RatioRow, RatioTrend } from '../../lib/ratio-rows';
 import { RatioCell } from './ratio-cell';
 
 const TRENDS: Record<RatioTrend, { Icon: LucideIcon; tone: string }> = {

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiGet } from '../../../lib/api-client';
+import { apiGet } from '../../api-client';
 import type { CommentDto } from '../../../../shared/schemas/api';
 import { commentKeys } from './comment-keys';
 

@@ -1,4 +1,4 @@
-import type { Check } from '../../../../shared/engine/types';
+import type { Check } from '../../shared/engine/types';
 
 export type RatioTrend =
   'worse' | 'better' | 'unchanged' | 'new check' | 'no longer checked' | 'not computed';

@@ -1,4 +1,4 @@
-import { formatRatio } from '../../history/utils/format';
+import { formatRatio } from '../../lib/format';
 
 /** A ratio with its verdict word; colour follows the word, never replaces it. */
 export function RatioCell({ ratio, ok }: { ratio: number | null; ok: boolean | null }) {

@@ -1,4 +1,4 @@
-import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
+import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 
 const PROPS: { key: keyof ShapeRecord; label: string; unit: string }[] = [
   { key: 'W', label: 'Nominal weight', unit: 'lb/ft' },

@@ -1,10 +1,10 @@
 import { useDeferredValue, useMemo, useState } from 'react';
-import type { ShapeFamily } from '../../../../shared/engine/shapes/types';
-import { Button } from '../../../components/ui/button';
-import { inputClass } from '../../../components/ui/field';
-import { ErrorNote, Loading } from '../../../components/ui/status';
-import { useShapes } from '../api/get-shapes';
-import { filterShapes } from '../lib/shape-filter';
+import type { ShapeFamily } from '../../../shared/engine/shapes/types';
+import { Button } from '../ui/button';
+import { inputClass } from '../ui/field';
+import { ErrorNote, Loading } from '../ui/status';
+import { useShapes } from '../../lib/api/shapes/get-shapes';
+import { filterShapes } from '../../lib/shape-filter';
 import { ShapeDetail } from './shape-detail';
 import { ShapesTable } from './shapes-table';
 

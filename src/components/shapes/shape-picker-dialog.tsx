@@ -1,4 +1,4 @@
-import { Dialog } from '../../../components/ui/dialog';
+import { Dialog } from '../ui/dialog';
 import { ShapesBrowser, type ShapeAction } from './shapes-browser';
 
 /** The shapes browser as a picker, opened from the desk. */

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ShapesDto } from '../../../../shared/schemas/api';
-import { apiGet } from '../../../lib/api-client';
+import { apiGet } from '../../api-client';
 import { shapeKeys } from './shape-keys';
 
 /** The whole shapes table (published plus imported): a few hundred rows, filtered in the browser. */

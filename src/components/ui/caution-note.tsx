@@ -1,5 +1,5 @@
 import { TriangleAlert } from 'lucide-react';
-import { CAUTION } from '../../../../shared/engine/types';
+import { CAUTION } from '../../../shared/engine/types';
 
 /** The caution every result view carries. */
 export function CautionNote() {

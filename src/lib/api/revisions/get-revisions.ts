@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { RevisionSummaryDto } from '../../../../shared/schemas/api';
-import { apiGet } from '../../../lib/api-client';
+import { apiGet } from '../../api-client';
 import { revisionKeys } from './revision-keys';
 
 /** A cantilever's revisions, newest first as the server sends them. */

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { RevisionDto } from '../../../../shared/schemas/api';
-import { apiGet } from '../../../lib/api-client';
+import { apiGet } from '../../api-client';
 import { revisionKeys } from './revision-keys';
 
 export function getRevision(revisionId: number, signal?: AbortSignal): Promise<RevisionDto> {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { CantileverDto } from '../../../../shared/schemas/api';
-import { apiGet } from '../../../lib/api-client';
+import { apiGet } from '../../api-client';
 import { cantileverKeys } from './cantilever-keys';
 
 export function getCantilever(cantileverId: number, signal?: AbortSignal): Promise<CantileverDto> {

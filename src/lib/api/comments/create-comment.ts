@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiPost } from '../../../lib/api-client';
+import { apiPost } from '../../api-client';
 import type { CommentDto } from '../../../../shared/schemas/api';
 import { commentKeys } from './comment-keys';
 

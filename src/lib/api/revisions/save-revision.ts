@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CreateRevisionBody, RevisionDto, StaleSaveBody } from '../../../../shared/schemas/api';
-import { ApiError, apiPost } from '../../../lib/api-client';
-import { cantileverKeys } from '../../cantilevers/api/cantilever-keys';
-import { projectKeys } from '../../projects/api/project-keys';
+import { ApiError, apiPost } from '../../api-client';
+import { cantileverKeys } from '../cantilevers/cantilever-keys';
+import { projectKeys } from '../projects/project-keys';
 import { revisionKeys } from './revision-keys';
 
 export function saveRevision(cantileverId: number, body: CreateRevisionBody): Promise<RevisionDto> {

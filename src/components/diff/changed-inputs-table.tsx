@@ -1,5 +1,5 @@
-import type { FieldChange } from '../../../../shared/schemas/diff';
-import { pathWords, valueWords } from '../utils/path-words';
+import type { FieldChange } from '../../../shared/schemas/diff';
+import { pathWords, valueWords } from '../../../shared/words/field-words';
 
 interface ChangedInputsTableProps {
   changes: FieldChange[];

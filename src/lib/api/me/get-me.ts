@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { UserDto } from '../../../../shared/schemas/api';
-import { ApiError, apiGet } from '../../../lib/api-client';
+import { ApiError, apiGet } from '../../api-client';
 import { authKeys } from './auth-keys';
 
 /** The signed-in person, or null when nobody is signed in (401). */

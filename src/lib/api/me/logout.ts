@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiPost } from '../../../lib/api-client';
+import { apiPost } from '../../api-client';
 import { authKeys } from './auth-keys';
 
 export function logout(): Promise<void> {

@@ -2,7 +2,7 @@
  * How the check board words and orders checks. A check with ratio null was not computed: it is
  * never shown as a pass, and it sorts with the worst.
  */
-import type { Check } from '../../../../shared/engine/types';
+import type { Check } from '../engine/types';
 
 export type CheckWord = 'ample' | 'adequate' | 'near limit' | 'exceeds' | 'not computed' | 'fails';
 export type Tone = 'calm' | 'steady' | 'near' | 'over';

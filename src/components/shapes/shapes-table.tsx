@@ -7,8 +7,8 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useState } from 'react';
-import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
-import { shapeDepth } from '../lib/shape-filter';
+import type { ShapeRecord } from '../../../shared/engine/shapes/types';
+import { shapeDepth } from '../../lib/shape-filter';
 
 const col = createColumnHelper<ShapeRecord>();
 const num = (v: number | undefined) => (v === undefined ? '—' : String(v));

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { UpdateMeBody, UserDto } from '../../../../shared/schemas/api';
-import { apiPatch } from '../../../lib/api-client';
+import { apiPatch } from '../../api-client';
 import { authKeys } from './auth-keys';
 
 export function updateMe(body: UpdateMeBody): Promise<UserDto> {

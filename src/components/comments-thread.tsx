@@ -1,11 +1,11 @@
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { commentSchema } from '../../../../shared/schemas/api';
-import { useComments } from '../api/get-comments';
-import { useCreateComment } from '../api/create-comment';
-import { formatDateTime } from '../utils/format';
-import { errorText } from '../utils/error-text';
+import { commentSchema } from '../../shared/schemas/api';
+import { useComments } from '../lib/api/comments/get-comments';
+import { useCreateComment } from '../lib/api/comments/create-comment';
+import { formatDateTime } from '../lib/format';
+import { errorText } from '../lib/error-text';
 
 interface CommentFields {
   body: string;

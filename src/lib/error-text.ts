@@ -1,4 +1,4 @@
-import { ApiError } from '../../../lib/api-client';
+import { ApiError } from './api-client';
 
 /** An error in words for the person using the screen. */
 export function errorText(error: unknown): string {
