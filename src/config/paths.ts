@@ -8,6 +8,10 @@ export const paths = {
   compare: (cantileverId: number | string, a?: number | string, b?: number | string) =>
     `/cantilevers/${cantileverId}/compare${a && b ? `?a=${a}&b=${b}` : ''}`,
   review: (revisionId: number | string) => `/revisions/${revisionId}/review`,
+  /** Any revision, read-only, in the desk's layout. */
+  revision: (revisionId: number | string) => `/revisions/${revisionId}`,
+  /** The reach study of a cantilever (a sweep of two inputs). */
+  study: (cantileverId: number | string) => `/cantilevers/${cantileverId}/study`,
   shapes: '/shapes',
   team: '/admin/team',
   outbox: '/admin/outbox',
@@ -22,6 +26,8 @@ export const routePatterns = {
   history: '/cantilevers/:cantileverId/history',
   compare: '/cantilevers/:cantileverId/compare',
   review: '/revisions/:revisionId/review',
+  revision: '/revisions/:revisionId',
+  study: '/cantilevers/:cantileverId/study',
   shapes: '/shapes',
   team: '/admin/team',
   outbox: '/admin/outbox',

@@ -1,0 +1,41 @@
+/**
+ * Accessibility audit of the page as it stands, with axe-core (WCAG 2.0-2.2 A and AA rules). Browser
+ * tests call it on every route and open dialog; any serious or critical violation fails the test
+ * with the rule, the impact and the first offending elements named.
+ */
+import AxeBuilder from '@axe-core/playwright';
+import type { Page } from 'playwright-core';
+
+export interface A11yProblem {
+  rule: string;
+  impact: string;
+  help: string;
+  targets: string[];
+}
+
+const TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
+
+/** Serious and critical violations on the page (or inside `include`, a CSS selector). */
+export async function seriousA11yProblems(page: Page, include?: string): Promise<A11yProblem[]> {
+  let builder = new AxeBuilder({ page }).withTags(TAGS);
+  if (include) builder = builder.include(include);
+  const { violations } = await builder.analyze();
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => ({
+      rule: v.id,
+      impact: v.impact ?? 'unknown',
+      help: v.help,
+      targets: v.nodes.slice(0, 5).map((n) => n.target.join(' ')),
+    }));
+}
+
+/** Throws with a readable list when the page has a serious or critical violation. */
+export async function assertAccessible(page: Page, label: string, include?: string): Promise<void> {
+  const problems = await seriousA11yProblems(page, include);
+  if (problems.length === 0) return;
+  const lines = problems.map((p) => `  ${p.impact} ${p.rule}: ${p.help}\n    ${p.targets.join('\n    ')}`);
+  throw new Error(
+    `${label}: ${problems.length} serious or critical accessibility problem(s)\n${lines.join('\n')}`,
+  );
+}
