@@ -7,4 +7,4 @@ afterEach(() => cleanup());
 
 // findBy* and waitFor give up after 1 s by default; a shared 2-core machine under load renders a
 // page with the real engine slower than that. A longer wait changes no assertion.
-configure({ asyncUtilTimeout: 5000 });
+configure({ asyncUtilTimeout: 15000 });

@@ -34,14 +34,14 @@ function spawn(args: string[]) {
   const r = spawnSync(process.execPath, ['server/cli/bin.js', ...args], {
     cwd: ROOT,
     encoding: 'utf8',
-    timeout: 55000,
+    timeout: 110000,
   });
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
 // One smoke test through the real bin.js (Node, the tsx loader, process.exitCode, the real
 // standard streams); everything else calls main() in this process, which is much faster.
-describe('reachline CLI (spawned through bin.js)', { timeout: 60000 }, () => {
+describe('reachline CLI (spawned through bin.js)', { timeout: 120000 }, () => {
   it('check <file>: the result on stdout, the caution on stderr, exit 0 when every check passes', () => {
     const r = spawn(['check', memberFile]);
     const result = JSON.parse(r.out);
