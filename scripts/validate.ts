@@ -1,81 +1,131 @@
 /**
- * The one test command (`npm test`): typecheck, lint, unit, client, API and browser tests.
- * Every step runs even when an earlier one fails, so one run shows everything that is wrong.
- * Ends with the plain line "N passed, N failed" that CI reads.
+ * The one test command (`npm test`). First it finds a Chromium for the browser tests (installing
+ * Debian's when it may: scripts/lib/chromium.ts). Then, side by side: typecheck, lint, the
+ * formatting check and the client build, while the vitest runs below go one after the other
+ * (each in its own vitest process, with its own environment). Every step runs even when an
+ * earlier one fails, so one run shows everything that is wrong. The last line is exactly
+ * "N passed, N failed", which CI reads: each vitest test counts, and each other step counts as one.
  */
-import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { mkdirSync, rmSync } from 'node:fs';
+import { realHost, resolveChromium } from './lib/chromium';
+import { report, runNode, type Finished } from './lib/processes';
+import { countReport, type Tally } from './lib/vitest-report';
 
-interface Tally {
-  passed: number;
-  failed: number;
-  skipped: number;
+interface VitestRun {
+  /** Names the run in the log and its JSON report (tests/output/vitest-<label>.json). */
+  label: string;
+  /** vitest projects (vitest.config.ts) run together in one vitest process. */
+  projects: string[];
+  /** Extra environment for this run only. */
+  env?: Record<string, string>;
+  /** Starts only once the client build has finished (the browser tests serve dist/). */
+  needsBuild?: boolean;
 }
 
+/**
+ * The vitest runs, in order. To run a suite again under other settings, add a row, e.g.
+ * `{ label: 'api-postgres', projects: ['api'], env: { DATABASE_URL: 'postgres://…' } }`.
+ */
+const VITEST_RUNS: VitestRun[] = [
+  { label: 'unit-client-api', projects: ['unit', 'client', 'api'] },
+  { label: 'e2e', projects: ['e2e'], needsBuild: true },
+];
+
+/** The other steps, run side by side; each passes or fails as a whole. */
+const CACHE = 'node_modules/.cache/reachline';
+const CHECKS: { label: string; args: string[] }[] = [
+  {
+    label: 'typecheck',
+    // Incremental: tsc re-checks only what changed since the last run and what depends on it.
+    args: [
+      'node_modules/typescript/bin/tsc',
+      '--noEmit',
+      '-p',
+      'tsconfig.json',
+      '--incremental',
+      '--tsBuildInfoFile',
+      `${CACHE}/tsc.tsbuildinfo`,
+    ],
+  },
+  { label: 'lint', args: ['node_modules/eslint/bin/eslint.js', '.', '--max-warnings=0'] },
+  {
+    label: 'format',
+    args: [
+      'node_modules/prettier/bin/prettier.cjs',
+      '--check',
+      '.',
+      '--cache',
+      '--cache-strategy',
+      'content',
+    ],
+  },
+];
+const BUILD = { label: 'build', args: ['--import', 'tsx', 'scripts/build.ts', '--if-stale'] };
+
+const OUT_DIR = 'tests/output';
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
-const outDir = 'tests/output';
-mkdirSync(outDir, { recursive: true });
 
-function run(label: string, cmd: string, args: string[]): boolean {
-  console.log(`\n=== ${label}: ${cmd} ${args.join(' ')}`);
+function finish(): never {
+  const skipped = total.skipped ? `, ${total.skipped} skipped` : '';
+  console.log(`\n${total.passed} passed, ${total.failed} failed${skipped}`);
+  process.exit(total.failed > 0 ? 1 : 0);
+}
+
+/** A step whose output is held back and printed in one block when it ends (steps run side by side). */
+async function sideStep(label: string, args: string[]): Promise<Finished> {
   const started = Date.now();
-  const r = spawnSync(cmd, args, { stdio: 'inherit', env: process.env });
-  console.log(
-    `=== ${label}: ${r.status === 0 ? 'ok' : `failed (exit ${r.status})`} in ${((Date.now() - started) / 1000).toFixed(1)} s`,
-  );
-  return r.status === 0;
-}
-
-function step(label: string, cmd: string, args: string[]): void {
-  if (run(label, cmd, args)) total.passed += 1;
+  console.log(`=== ${label}: started`);
+  const r = await runNode(args, { buffer: true });
+  if (r.output.trim()) console.log(`--- ${label} output:\n${r.output.trimEnd()}`);
+  report(label, r, started);
+  if (r.ok) total.passed += 1;
   else total.failed += 1;
+  return r;
 }
 
-function vitest(project: string): void {
-  const report = `${outDir}/vitest-${project}.json`;
-  rmSync(report, { force: true });
-  const ok = run(`tests (${project})`, 'npx', [
-    'vitest',
-    'run',
-    '--project',
-    project,
-    '--reporter=default',
-    '--reporter=json',
-    `--outputFile=${report}`,
-  ]);
-  if (!existsSync(report)) {
-    total.failed += 1; // the runner itself failed before reporting
-    return;
-  }
-  const json = JSON.parse(readFileSync(report, 'utf8')) as {
-    numPassedTests: number;
-    numFailedTests: number;
-    numPendingTests: number;
-    numTodoTests: number;
-    numFailedTestSuites: number;
-    numTotalTests: number;
-  };
-  total.passed += json.numPassedTests;
-  total.failed +=
-    json.numFailedTests +
-    (json.numFailedTestSuites > 0 && json.numFailedTests === 0 ? json.numFailedTestSuites : 0);
-  total.skipped += json.numPendingTests + json.numTodoTests;
-  if (json.numTotalTests === 0) {
-    console.log(`=== ${project}: no tests ran`);
+async function vitestRun(run: VitestRun, chromium: string): Promise<void> {
+  const file = `${OUT_DIR}/vitest-${run.label}.json`;
+  rmSync(file, { force: true });
+  const args = ['node_modules/vitest/vitest.mjs', 'run', ...run.projects.flatMap((p) => ['--project', p])];
+  args.push('--reporter=default', '--reporter=json', `--outputFile=${file}`);
+  console.log(`\n=== tests (${run.label}): vitest ${args.slice(1).join(' ')}`);
+  const started = Date.now();
+  const r = await runNode(args, { env: { ...process.env, CHROMIUM_PATH: chromium, ...run.env } });
+  report(`tests (${run.label})`, r, started);
+  const tally = countReport(file, r.ok);
+  if (tally.note) console.log(`=== tests (${run.label}): ${tally.note}`);
+  total.passed += tally.passed;
+  total.failed += tally.failed;
+  total.skipped += tally.skipped;
+}
+
+async function main(): Promise<void> {
+  mkdirSync(OUT_DIR, { recursive: true });
+  mkdirSync(CACHE, { recursive: true });
+  const chromium = resolveChromium(realHost);
+  if ('problem' in chromium) {
+    console.log(chromium.problem);
     total.failed += 1;
-  } else if (!ok && json.numFailedTests === 0 && json.numFailedTestSuites === 0) {
-    total.failed += 1; // e.g. an unhandled error outside any test
+    finish();
   }
+  console.log(`Chromium for the browser tests: ${chromium.path}`);
+
+  const checks = Promise.all(CHECKS.map((c) => sideStep(c.label, c.args)));
+  const build = sideStep(BUILD.label, BUILD.args);
+  for (const run of VITEST_RUNS) {
+    if (run.needsBuild && !(await build).ok) {
+      console.log(`=== tests (${run.label}): not run, the client build failed`);
+      total.failed += 1;
+      continue;
+    }
+    await vitestRun(run, chromium.path);
+  }
+  await Promise.all([checks, build]);
+  finish();
 }
 
-step('typecheck', 'npx', ['tsc', '--noEmit', '-p', 'tsconfig.json']);
-step('lint', 'npx', ['eslint', '.', '--max-warnings=0']);
-vitest('unit');
-vitest('client');
-vitest('api');
-step('build', 'npx', ['vite', 'build']);
-vitest('e2e');
-
-const skipped = total.skipped ? `, ${total.skipped} skipped` : '';
-console.log(`\n${total.passed} passed, ${total.failed} failed${skipped}`);
-process.exit(total.failed > 0 ? 1 : 0);
+main().catch((err: unknown) => {
+  console.error(err);
+  total.failed += 1;
+  finish();
+});

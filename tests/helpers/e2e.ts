@@ -1,13 +1,15 @@
 /**
  * Browser-test harness: the real server (real SQLite file, real fake-SMTP, the built client from
  * dist/) on a random loopback port, seeded with the demo, and headless Debian Chromium driven by
- * playwright-core. One harness per test file; close() removes every temporary file.
+ * playwright-core (one browser for the run, from e2e-global-setup.ts; a fresh context per
+ * session). One harness per test file; close() removes every temporary file.
  */
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
-import { launchChromium } from './chromium';
+import { inject } from 'vitest';
+import { connectChromium } from './chromium';
 import { startServer } from '../../server/start';
 
 export const DEMO_PASSWORD = 'reachline-demo';
@@ -38,15 +40,17 @@ export async function startE2E(): Promise<E2E> {
     dataDir: dir,
     // Browser tests sign the same accounts in many times; the limit itself is tested in tests/server.
     loginRateLimit: 500,
+    // A low scrypt cost for the seeded accounts, as in the API tests: every sign-in verifies a hash.
+    passwordCost: 1024,
   });
+  const chromium = await connectChromium(inject('chromiumWsEndpoint'));
   const contexts: BrowserContext[] = [];
   const errors: string[] = [];
 
   async function newSession() {
-    const profile = mkdtempSync(join(dir, 'profile-'));
-    const context = await launchChromium(profile, server.url);
+    const context = await chromium.newContext(server.url);
     contexts.push(context);
-    const page = context.pages()[0] ?? (await context.newPage());
+    const page = await context.newPage();
     page.on('pageerror', (err) => errors.push(`pageerror: ${err.message}`));
     return { context, page };
   }
@@ -64,6 +68,7 @@ export async function startE2E(): Promise<E2E> {
 
   async function close() {
     for (const c of contexts) await c.close().catch(() => undefined);
+    await chromium.browser.close();
     await server.close();
     rmSync(dir, { recursive: true, force: true });
     if (errors.length > 0) throw new Error(`uncaught errors in the page:\n${errors.join('\n')}`);

@@ -1,18 +1,19 @@
 /**
- * Regression tests for the defects found by the independent audit of the engine (each fails on the
- * engine as it was before the fix). Sources are named beside each value; arithmetic is shown.
+ * Regression tests for edge cases the checks once got wrong: rods beside the section, f'c above
+ * 10,000 psi, a station outside the clauses, a zero web, a quantity exactly at its limit (each fails
+ * on the engine as it was before the fix). Sources are named beside each value; arithmetic is shown.
  */
 import { describe, expect, it } from 'vitest';
-import { checkConnection } from '../../../shared/engine/connection/check-connection';
-import { pulloutStrength } from '../../../shared/engine/connection/pullout-blowout';
-import { flexureCheck } from '../../../shared/engine/checks/flexure-check';
-import { shearCheck } from '../../../shared/engine/checks/shear-check';
-import type { CheckContext } from '../../../shared/engine/checks/check-context';
-import type { Response } from '../../../shared/engine/member/analysis';
-import { analyseMember } from '../../../shared/engine/member/analysis';
-import { builtUpSection } from '../../../shared/engine/sections/tapered-section';
-import { connection, expectWithin, LRFD_US, W12X26_ROOT } from '../connection/connection-fixtures';
-import { toInternal } from '../../../shared/engine/units';
+import { checkConnection } from '../../../../shared/engine/connection/check-connection';
+import { pulloutStrength } from '../../../../shared/engine/connection/pullout-blowout';
+import { flexureCheck } from '../../../../shared/engine/checks/flexure-check';
+import { shearCheck } from '../../../../shared/engine/checks/shear-check';
+import type { CheckContext } from '../../../../shared/engine/checks/check-context';
+import type { Response } from '../../../../shared/engine/member/analysis';
+import { analyseMember } from '../../../../shared/engine/member/analysis';
+import { builtUpSection } from '../../../../shared/engine/sections/tapered-section';
+import { connection, expectWithin, LRFD_US, W12X26_ROOT } from '../../connection/connection-fixtures';
+import { toInternal } from '../../../../shared/engine/units';
 
 describe('plate.thickness: rods beside the section, not beyond the tension flange', () => {
   // W12X26 footprint: d 12.2, bf 6.49, tf 0.380 in (AISC Shapes Database v15.0 [pub]).

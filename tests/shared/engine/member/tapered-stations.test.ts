@@ -4,11 +4,11 @@
  * where an independent form exists (parallel-axis Ix, the user-note form of rts).
  */
 import { describe, expect, it } from 'vitest';
-import { flexuralStrength } from '../../../shared/engine/checks/flexural-strength';
-import { shearStrength } from '../../../shared/engine/checks/shear-strength';
-import { taperedRolledSection } from '../../../shared/engine/sections/tapered-section';
-import { findShape } from '../../../shared/engine/shapes/table';
-import { check, memberDoc, rel, run } from '../engine/design-helpers';
+import { flexuralStrength } from '../../../../shared/engine/checks/flexural-strength';
+import { shearStrength } from '../../../../shared/engine/checks/shear-strength';
+import { taperedRolledSection } from '../../../../shared/engine/sections/tapered-section';
+import { findShape } from '../../../../shared/engine/shapes/table';
+import { check, memberDoc, rel, run } from '../design-helpers';
 
 const E = 29000;
 const Fy = 50;

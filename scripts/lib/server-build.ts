@@ -1,0 +1,62 @@
+/**
+ * The server as `npm start` runs it: scripts/serve.ts and everything it imports bundled into
+ * node_modules/.cache/reachline/server/ by Vite's SSR build, then run by plain Node. Run from
+ * source through tsx, the start-up spent most of its time loading mathjs's ~1,000 modules through
+ * the loader hooks (about 7 s of CPU); bundled, mathjs is tree-shaken to what the engine uses and
+ * the other dependencies load natively. Dependencies other than mathjs stay external (imported from
+ * node_modules at run time). Rebuilt only when its inputs change (scripts/lib/stamp.ts).
+ */
+import { join } from 'node:path';
+import { inputsHash, staleReason, writeStamp } from './stamp';
+
+export const SERVER_INPUTS = [
+  'server',
+  'shared',
+  'migrations',
+  'data/shapes.json',
+  'scripts/serve.ts',
+  'scripts/lib/database.ts',
+  'scripts/lib/timing.ts',
+  'scripts/lib/server-build.ts',
+  'tsconfig.json',
+  'package.json',
+  'package-lock.json',
+];
+export const SERVER_ENTRY = 'scripts/serve.ts';
+
+export function serverOutDir(root: string): string {
+  return join(root, 'node_modules', '.cache', 'reachline', 'server');
+}
+
+/** The server build step: what it is about to do, and the work (returns what it did). */
+export function serverBuildStep(
+  root: string,
+  outDir = serverOutDir(root),
+): { doing: string; run: () => Promise<string> } {
+  const hash = inputsHash(root, SERVER_INPUTS);
+  const reason = staleReason(outDir, hash);
+  if (!reason) return { doing: 'checking the server bundle', run: async () => 'up to date, not rebuilt' };
+  return {
+    doing: `${reason}: bundling the server`,
+    run: async () => {
+      const { build } = await import('vite');
+      await build({
+        configFile: false,
+        root,
+        logLevel: 'warn',
+        publicDir: false,
+        build: {
+          ssr: SERVER_ENTRY,
+          outDir,
+          emptyOutDir: true,
+          target: 'node20',
+          minify: false,
+          rollupOptions: { output: { entryFileNames: 'serve.js' } },
+        },
+        ssr: { target: 'node', noExternal: ['mathjs'] },
+      });
+      writeStamp(outDir, hash);
+      return 'done';
+    },
+  };
+}
