@@ -146,7 +146,8 @@ describe('design desk', () => {
     await expect.poll(tip, { timeout: 10_000 }).toMatch(/mm$/);
     const feet = Number.parseFloat(lengthUS);
     const metres = Number.parseFloat(await field('Length (root to tip)').inputValue());
-    expect(metres / 0.3048).toBeCloseTo(feet, 3);
+    // Converted inputs are written to 4 significant figures (relative change at most 5e-4).
+    expect(metres / 0.3048 / feet).toBeCloseTo(1, 3);
     const inches = Number.parseFloat(tipUS);
     const mm = Number.parseFloat(await tip());
     expect(mm / 25.4 / inches).toBeCloseTo(1, 2);

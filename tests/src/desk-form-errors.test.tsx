@@ -99,7 +99,7 @@ describe('desk fields: errors in plain words next to the field', () => {
     await act(async () => {
       fireEvent.change(screen.getByRole('combobox', { name: 'Length: unit' }), { target: { value: 'm' } });
     });
-    expect(screen.getByRole('textbox', { name: 'Length' })).toHaveValue('2.7432 m');
+    expect(screen.getByRole('textbox', { name: 'Length' })).toHaveValue('2.743 m');
     await act(async () => {
       fireEvent.change(screen.getByRole('combobox', { name: 'Length: unit' }), { target: { value: 'in' } });
     });

@@ -1,16 +1,17 @@
 import { useFormContext } from 'react-hook-form';
-import { parseQuantity, convert } from '../../../../shared/engine/units';
+import { parseQuantity, convert, type UnitSystem } from '../../../../shared/engine/units';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Button } from '../../../components/ui/button';
 import { customaryUnit } from '../lib/field-units';
-import { LOAD_PRESETS, type LoadPreset } from '../lib/load-presets';
+import { LOAD_PRESETS, presetValueText, type LoadPreset } from '../lib/load-presets';
 import { plainNumber, rewriteQuantity } from '../lib/quantity-text';
 import { CheckField, Group, SelectField } from './plain-fields';
 import { LoadList } from './load-list';
 
 /** Loads: self-weight, loads by case (area, line, point), presets with their source, the method. */
 export function LoadsGroup({ disabled }: { disabled: boolean }) {
-  const { getValues, setValue } = useFormContext<DesignDocument>();
+  const { getValues, setValue, watch } = useFormContext<DesignDocument>();
+  const system: UnitSystem = watch('units') === 'SI' ? 'SI' : 'US';
 
   function addPreset(preset: LoadPreset) {
     const system = getValues('units') === 'SI' ? 'SI' : 'US';
@@ -57,12 +58,18 @@ export function LoadsGroup({ disabled }: { disabled: boolean }) {
           {LOAD_PRESETS.map((p) => (
             <li key={p.id} className="flex items-start justify-between gap-2 text-xs">
               <span>
-                <span className="font-medium">{p.label}</span>{' '}
+                <span className="font-medium">
+                  {p.label}, {presetValueText(p, system)}
+                </span>{' '}
                 <span className="text-concrete-500">({p.case})</span>
                 <br />
                 <span className="text-concrete-500">{p.source}</span>
               </span>
-              <Button size="sm" onClick={() => addPreset(p)} aria-label={`Add preset: ${p.label}`}>
+              <Button
+                size="sm"
+                onClick={() => addPreset(p)}
+                aria-label={`Add preset: ${p.label}, ${presetValueText(p, system)}`}
+              >
                 Add
               </Button>
             </li>

@@ -3,10 +3,14 @@
  * team remembers rather than read from the code text say so ("from memory"); dead loads of finishes
  * are example values from common practice, with no code source.
  */
+import type { UnitSystem } from '../../../../shared/engine/units';
 import type { LoadCase } from '../../../../shared/schemas/member';
+import { customaryUnit } from './field-units';
+import { rewriteQuantity } from './quantity-text';
 
 export interface LoadPreset {
   id: string;
+  /** What the load is, without its value (the value is shown in the desk's unit system). */
   label: string;
   kind: 'area' | 'point-at-tip';
   case: LoadCase;
@@ -19,7 +23,7 @@ export interface LoadPreset {
 export const LOAD_PRESETS: readonly LoadPreset[] = [
   {
     id: 'deck-live',
-    label: 'Residential deck live load, 60 psf',
+    label: 'Residential deck live load',
     kind: 'area',
     case: 'L',
     value: '60 psf',
@@ -27,7 +31,7 @@ export const LOAD_PRESETS: readonly LoadPreset[] = [
   },
   {
     id: 'guard-line',
-    label: 'Guard rail along the tip, 50 lbf/ft × spacing',
+    label: 'Guard rail along the tip',
     kind: 'point-at-tip',
     case: 'L',
     value: '50 lbf/ft',
@@ -37,7 +41,7 @@ export const LOAD_PRESETS: readonly LoadPreset[] = [
   },
   {
     id: 'guard-point',
-    label: 'Guard rail concentrated, 200 lbf at the tip',
+    label: 'Guard rail concentrated at the tip',
     kind: 'point-at-tip',
     case: 'L',
     value: '200 lbf',
@@ -45,7 +49,7 @@ export const LOAD_PRESETS: readonly LoadPreset[] = [
   },
   {
     id: 'wood-deck',
-    label: 'Wood decking and joists, 10 psf',
+    label: 'Wood decking and joists',
     kind: 'area',
     case: 'D',
     value: '10 psf',
@@ -53,10 +57,30 @@ export const LOAD_PRESETS: readonly LoadPreset[] = [
   },
   {
     id: 'tile-deck',
-    label: 'Tile on mortar bed over sheathing, 25 psf',
+    label: 'Tile on mortar bed over sheathing',
     kind: 'area',
     case: 'D',
     value: '25 psf',
     source: 'Example value, common practice, no source',
   },
 ];
+
+/** A preset's value written in the desk's unit system: "60 psf" or "2.873 kPa", "50 lbf/ft × spacing". */
+export function presetValueText(preset: LoadPreset, system: UnitSystem): string {
+  if (preset.kind === 'area') {
+    return (
+      rewriteQuantity(preset.value, 'areaLoad', customaryUnit('loads.area.0.value', system) ?? 'psf') ??
+      preset.value
+    );
+  }
+  if (preset.perLength) {
+    const line = rewriteQuantity(
+      preset.value,
+      'lineLoad',
+      customaryUnit('loads.line.0.value', system) ?? 'lbf/ft',
+    );
+    return `${line ?? preset.value} × spacing, at the tip`;
+  }
+  const point = rewriteQuantity(preset.value, 'force', customaryUnit('loads.point.0.value', system) ?? 'lbf');
+  return `${point ?? preset.value} at the tip`;
+}

@@ -1,8 +1,12 @@
 /** Rewriting a quantity string in another unit without changing the physical value beyond display precision. */
 import { convert, DIMENSIONS, parseQuantity, type Dimension } from '../../../../shared/engine/units';
 
-/** Significant digits kept when a value is rewritten in another unit (relative change below 5e-5). */
-export const SIGNIFICANT_DIGITS = 5;
+/**
+ * Significant digits kept when a value is rewritten in another unit: 4, as the trade reads inputs
+ * (2.743 m, 344.7 MPa), a relative change of at most 5e-4, inside the 0.1 % within which
+ * shared/schemas/diff.ts counts two quantities as the same input.
+ */
+export const SIGNIFICANT_DIGITS = 4;
 
 export function roundSignificant(value: number, digits = SIGNIFICANT_DIGITS): number {
   if (value === 0 || !Number.isFinite(value)) return value;
