@@ -185,6 +185,8 @@ export const shapesQuerySchema = z.object({
   q: z.string().trim().max(40).optional(),
   minDepth: z.coerce.number().nonnegative().optional(),
   maxDepth: z.coerce.number().positive().optional(),
+  /** Adds this project's imported shapes (members only). */
+  projectId: z.coerce.number().int().positive().optional(),
 });
 export type ShapesQuery = z.output<typeof shapesQuerySchema>;
 export interface ShapesDto {
@@ -207,4 +209,8 @@ export interface OutboxDto {
   sentAt: string | null;
 }
 
-export const checkRequestSchema = z.object({ input: designSchema });
+export const checkRequestSchema = z.object({
+  input: designSchema,
+  /** Adds this project's imported shapes (members only). */
+  projectId: z.number().int().positive().optional(),
+});
