@@ -19,6 +19,10 @@ function mib(bytes: number): string {
   return (bytes / 1024 / 1024).toFixed(bytes % (1024 * 1024) === 0 ? 0 : 2);
 }
 
+function hasControlCharacter(name: string): boolean {
+  return [...name].some((ch) => ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f);
+}
+
 export function singleFileUpload({ maxBytes, fields = 4 }: UploadLimits): RequestHandler {
   const upload = multer({
     storage: multer.memoryStorage(),
@@ -27,7 +31,20 @@ export function singleFileUpload({ maxBytes, fields = 4 }: UploadLimits): Reques
   }).single('file');
   return (req, res, next) => {
     upload(req, res, (err: unknown) => {
-      if (!err) return next();
+      if (!err) {
+        // A control character (NUL, CR, LF…) in a file name could break a header or a log line later.
+        if (req.file && hasControlCharacter(req.file.originalname)) {
+          console.warn(
+            `multipart upload refused on ${req.method} ${req.path}: control character in the file name`,
+          );
+          return next(
+            badRequest('The upload is not valid: the file name has a control character.', [
+              { path: 'file', message: 'has a control character in its name' },
+            ]),
+          );
+        }
+        return next();
+      }
       if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
         return next(
           new HttpError(413, 'too_large', `The file is larger than the limit of ${mib(maxBytes)} MiB.`, [
