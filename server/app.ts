@@ -9,7 +9,7 @@ import type { Knex } from 'knex';
 import { createPassport } from './auth/passport';
 import { GuardedSessionStore } from './auth/session-store';
 import type { AppContext, MailKick } from './context';
-import type { Config } from './env';
+import { LOCAL_HOSTS, type Config } from './env';
 import { adminRouter } from './features/admin/admin.router';
 import { attachmentsRouter } from './features/attachments/attachments.router';
 import { authRouter } from './features/auth/auth.router';
@@ -22,6 +22,8 @@ import { shapesRouter } from './features/shapes/shapes.router';
 import { decoyHash } from './lib/password';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { requireAuth } from './middleware/require-auth';
+import { hostCheck } from './middleware/host-check';
+import { passwordChangeGate } from './middleware/password-change';
 import { sameOrigin } from './middleware/same-origin';
 import { serveClient } from './static-client';
 
@@ -44,7 +46,11 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   const ctx: AppContext = { config, db: deps.db, mail: deps.mail };
   const app = express() as ReachlineApp;
   app.disable('x-powered-by');
-  if (config.trustProxy) app.set('trust proxy', 1);
+  // Only the configured proxies' X-Forwarded-For is believed (a hop count or their addresses).
+  if (config.trustProxy !== false) app.set('trust proxy', config.trustProxy === true ? 1 : config.trustProxy);
+  const allowedHosts = config.allowedHosts ?? LOCAL_HOSTS;
+  const https = config.appOrigin?.startsWith('https://') ?? false;
+  app.use(hostCheck(allowedHosts));
 
   app.use(
     helmet({
@@ -67,7 +73,7 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
         },
       },
       // Plain http on a local machine is normal; https deployments set HSTS at their proxy.
-      strictTransportSecurity: config.nodeEnv === 'production' && config.trustProxy,
+      strictTransportSecurity: https,
     }),
   );
 
@@ -76,7 +82,15 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   const passport = createPassport(deps.db, () => (decoy ??= decoyHash(config.passwordCost)));
 
   const api = express.Router();
-  api.use(sameOrigin);
+  api.use(sameOrigin({ appOrigin: config.appOrigin, allowedHosts }));
+  if (https) {
+    // APP_ORIGIN is https: people only reach the app through TLS (at a proxy, maybe with no
+    // X-Forwarded-Proto we may trust), so the session cookie is always marked Secure.
+    api.use((req, _res, next) => {
+      Object.defineProperty(req, 'secure', { value: true, configurable: true });
+      next();
+    });
+  }
   api.use(express.json({ limit: '1mb' }));
   api.use(
     session({
@@ -85,8 +99,8 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
       store,
       resave: false,
       saveUninitialized: false,
-      proxy: config.trustProxy,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: 12 * 60 * 60 * 1000 },
+      // Without `proxy`, express-session asks req.secure, which honours "trust proxy" (and the override above).
+      cookie: { httpOnly: true, sameSite: 'lax', secure: https ? true : 'auto', maxAge: 12 * 60 * 60 * 1000 },
     }),
   );
   api.use(passport.session());
@@ -98,6 +112,7 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
     res.json({ ok: true });
   });
   api.use(authGate);
+  api.use(passwordChangeGate);
   api.use(authRouter(ctx, passport));
   api.use(projectsRouter(ctx));
   api.use(commentsRouter(ctx));

@@ -24,8 +24,10 @@ export interface Config {
   attachmentMaxBytes: number;
   /** The built client (vite build output). */
   distDir: string;
-  /** Sign-in attempts allowed per IP and e-mail in the window. */
+  /** Failed sign-ins allowed per account (from any address) in the window. */
   loginRateLimit: number;
+  /** Failed sign-ins allowed per client address (for any account) in the window; default 3 x loginRateLimit. */
+  loginAddressRateLimit?: number;
   loginRateWindowMs: number;
   /** scrypt cost parameter N for new password hashes (a power of two). Tests use a low one. */
   passwordCost: number;
@@ -33,11 +35,26 @@ export interface Config {
   mailRetryBaseMs: number;
   mailMaxAttempts: number;
   mailPollMs: number;
-  /** Trust X-Forwarded-* from one proxy (cookies become secure behind https). */
-  trustProxy: boolean;
+  /**
+   * Which proxies' X-Forwarded-For / -Proto to believe (Express's "trust proxy"): false (none, the
+   * default), a hop count, or a list of addresses and subnets. Never trust it from anyone else:
+   * the client address the sign-in limits count comes from it.
+   */
+  trustProxy: boolean | number | string;
   /** Seed the demo project into an empty database at start-up. */
   seedDemo: boolean;
+  /** The public origin (https://reachline.example.com): the same-origin check compares with it; https makes the cookie Secure. */
+  appOrigin?: string | null;
+  /**
+   * Host header values served (a name matches any port; name:port only that port); anything else
+   * answers 421 before any route. Default: APP_ORIGIN's host, or the local addresses.
+   */
+  allowedHosts?: string[];
+  /** ADMIN_EMAIL / ADMIN_PASSWORD: an admin created at start-up when the database has no admin. */
+  firstAdmin?: { email: string; password: string; displayName: string } | null;
 }
+
+export const LOCAL_HOSTS = ['localhost', '127.0.0.1', '[::1]'];
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -65,11 +82,56 @@ const envSchema = z.object({
     .positive()
     .default(10 * 1024 * 1024),
   LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
-  TRUST_PROXY: z.enum(['0', '1', 'true', 'false']).default('0'),
-  SEED_DEMO: z.enum(['0', '1', 'true', 'false']).default('1'),
+  LOGIN_ADDRESS_RATE_LIMIT: z.coerce.number().int().positive().optional(),
+  TRUST_PROXY: z
+    .string()
+    .trim()
+    .default('0')
+    .refine(
+      (v) =>
+        v
+          .split(',')
+          .every((p) => /^(true|false|\d+|loopback|linklocal|uniquelocal|[0-9a-f:./]+)$/i.test(p.trim())),
+      {
+        message: 'must be 0, a hop count, or a comma-separated list of proxy addresses or subnets',
+      },
+    ),
+  // Absent: seed an empty database in development only; production seeds only with SEED_DEMO=1.
+  SEED_DEMO: z.enum(['0', '1', 'true', 'false']).optional(),
+  APP_ORIGIN: z
+    .url('must be an origin such as https://reachline.example.com')
+    .refine((v) => /^https?:\/\/[^/]+\/?$/i.test(v), {
+      message: 'must be an origin only (scheme, host, port), no path',
+    })
+    .optional(),
+  ALLOWED_HOSTS: z.string().trim().optional(),
+  ADMIN_EMAIL: z.email('must be an e-mail address').optional(),
+  ADMIN_PASSWORD: z.string().min(1).max(200).optional(),
+  ADMIN_NAME: z.string().trim().min(1).max(80).optional(),
 });
 
+function trustProxyValue(text: string): boolean | number | string {
+  if (text === '0' || text.toLowerCase() === 'false' || text === '') return false;
+  if (text.toLowerCase() === 'true') return 1;
+  if (/^\d+$/.test(text)) return Number(text);
+  return text;
+}
+
+function seedDemoValue(text: string | undefined, nodeEnv: Config['nodeEnv']): boolean {
+  if (text === undefined) return nodeEnv === 'development';
+  return text === '1' || text === 'true';
+}
+
 export class ConfigError extends Error {}
+
+function allowedHostsValue(list: string | undefined, origin: string | undefined): string[] {
+  const hosts = (list ?? '')
+    .split(',')
+    .map((h) => h.trim().toLowerCase())
+    .filter(Boolean);
+  if (origin) hosts.push(new URL(origin).host.toLowerCase());
+  return hosts.length > 0 ? [...new Set(hosts)] : LOCAL_HOSTS;
+}
 
 /** Reads the environment; throws ConfigError naming each bad variable. */
 export function parseEnv(
@@ -102,8 +164,15 @@ export function parseEnv(
     mailRetryBaseMs: 5_000,
     mailMaxAttempts: 8,
     mailPollMs: 2_000,
-    trustProxy: e.TRUST_PROXY === '1' || e.TRUST_PROXY === 'true',
-    seedDemo: e.SEED_DEMO === '1' || e.SEED_DEMO === 'true',
+    loginAddressRateLimit: e.LOGIN_ADDRESS_RATE_LIMIT ?? e.LOGIN_RATE_LIMIT * 3,
+    trustProxy: trustProxyValue(e.TRUST_PROXY),
+    seedDemo: seedDemoValue(e.SEED_DEMO, e.NODE_ENV),
+    appOrigin: e.APP_ORIGIN ? new URL(e.APP_ORIGIN).origin : null,
+    allowedHosts: allowedHostsValue(e.ALLOWED_HOSTS, e.APP_ORIGIN),
+    firstAdmin:
+      e.ADMIN_EMAIL && e.ADMIN_PASSWORD
+        ? { email: e.ADMIN_EMAIL, password: e.ADMIN_PASSWORD, displayName: e.ADMIN_NAME ?? 'Administrator' }
+        : null,
   };
 }
 

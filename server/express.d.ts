@@ -10,6 +10,7 @@ declare global {
       role: Role;
       units: 'US' | 'SI';
       active: boolean;
+      mustChangePassword?: boolean;
     }
   }
 }

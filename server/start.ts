@@ -10,8 +10,8 @@ import { mkdirSync } from 'node:fs';
 import { createApp } from './app';
 import { createDb } from './db/knex';
 import { migrateLatest } from './db/migrate';
-import { seedDemoIfEmpty } from './db/seed';
-import { loadConfig, type Config } from './env';
+import { FirstAdminError, createFirstAdmin, seedDemoIfEmpty, warnAboutDemoInProduction } from './db/seed';
+import { ConfigError, loadConfig, type Config } from './env';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { MailWorker } from './mail/mail-worker';
 
@@ -40,7 +40,22 @@ export async function startServer(overrides: Partial<Config> = {}): Promise<Runn
   };
   try {
     await migrateLatest(db);
+    warnAboutDemoInProduction(config);
     if (config.seedDemo) await seedDemoIfEmpty(db, config.passwordCost);
+    if (config.firstAdmin) {
+      try {
+        const id = await createFirstAdmin(db, config.firstAdmin, {
+          passwordCost: config.passwordCost,
+          mustChange: true,
+        });
+        if (id !== null)
+          console.log(`Created the admin account ${config.firstAdmin.email} (from ADMIN_EMAIL).`);
+      } catch (err) {
+        if (err instanceof FirstAdminError)
+          throw new ConfigError(`ADMIN_PASSWORD / ADMIN_EMAIL: ${err.message}`);
+        throw err;
+      }
+    }
     if (!config.smtpUrl) fakeSmtp = await startFakeSmtp(db);
     worker = new MailWorker(db, {
       smtpUrl: config.smtpUrl ?? fakeSmtp!.url,

@@ -1,6 +1,10 @@
 /**
  * One Passport instance per app (the default export is a process-wide singleton, and two apps in
  * one test run would share strategies and serializers).
+ *
+ * The session holds the account id and its session version; a password change raises the
+ * version, so every session signed in before it ends. A disabled account is told exactly what a
+ * wrong password is told: the answer never confirms a password.
  */
 import type { Knex } from 'knex';
 import { Passport } from 'passport';
@@ -14,6 +18,18 @@ export interface SignInFailure {
 
 export type PassportInstance = InstanceType<typeof Passport>;
 
+export const SIGN_IN_FAILED = 'The e-mail or the password is not right.';
+
+/** What the session stores: { id, v } (older sessions hold the bare id, version 0). */
+function sessionKey(value: unknown): { id: number; v: number } | null {
+  if (typeof value === 'number') return { id: value, v: 0 };
+  if (value && typeof value === 'object') {
+    const { id, v } = value as { id?: unknown; v?: unknown };
+    if (typeof id === 'number' && typeof v === 'number') return { id, v };
+  }
+  return null;
+}
+
 export function createPassport(db: Knex, decoy: () => Promise<string>): PassportInstance {
   const passport = new Passport();
   passport.use(
@@ -22,16 +38,23 @@ export function createPassport(db: Knex, decoy: () => Promise<string>): Passport
         const row = await findUserByEmail(db, email);
         // Compare against a decoy hash when the account is unknown, so timing reveals nothing.
         const ok = await verifyPassword(password, row ? row.password_hash : await decoy());
-        if (!row || !ok) return done(null, false, { message: 'The e-mail or the password is not right.' });
-        if (!row.active) return done(null, false, { message: 'This account is disabled; ask an admin.' });
+        if (!row || !ok || !row.active) return done(null, false, { message: SIGN_IN_FAILED });
         return done(null, toUserDto(row));
       })().catch((err: unknown) => done(err));
     }),
   );
-  passport.serializeUser((user, done) => done(null, user.id));
-  passport.deserializeUser((id: unknown, done) => {
-    findUserById(db, Number(id))
-      .then((row) => done(null, row && row.active ? toUserDto(row) : false))
+  passport.serializeUser((user, done) => {
+    findUserById(db, user.id)
+      .then((row) =>
+        row ? done(null, { id: row.id, v: row.session_version }) : done(new Error('no such account')),
+      )
+      .catch((err: unknown) => done(err));
+  });
+  passport.deserializeUser((value: unknown, done) => {
+    const key = sessionKey(value);
+    if (!key) return done(null, false);
+    findUserById(db, key.id)
+      .then((row) => done(null, row && row.active && row.session_version === key.v ? toUserDto(row) : false))
       .catch((err: unknown) => done(err));
   });
   return passport;

@@ -29,7 +29,8 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   }
   let json: unknown;
   try {
-    json = JSON.parse(text);
+    // Editors on some systems save UTF-8 with a byte-order mark; JSON.parse refuses it.
+    json = JSON.parse(text.replace(/^\uFEFF/, ''));
   } catch (e) {
     return invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
   }

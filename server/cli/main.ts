@@ -2,6 +2,7 @@
  * The `reachline` command line (bin.js runs it through tsx). Commands: check, shapes, --help.
  * Returns the exit code: 0 all checks pass, 1 a check fails, 2 invalid input or usage.
  */
+import { adminCreateCommand } from './admin-command';
 import { parseArgs } from './args';
 import { checkCommand, type CliIo } from './check-command';
 import { shapesCommand } from './shapes-command';
@@ -11,12 +12,15 @@ export const HELP = `reachline: check a steel cantilever deck design from the co
 Usage:
   reachline check <design.json | ->  [--stations]
   reachline shapes [--json] [--family W|HSS|PIPE|C]
+  reachline admin create --email <e-mail> [--name <display name>]  < password
   reachline --help
 
 Commands:
   check <file>     Validate a design document (JSON, see the engine contract) and print the
                    result document as JSON on standard output. Use - to read standard input.
   shapes           List the shapes table shipped with Reachline and its source.
+  admin create     Create an admin account in the configured database (DATABASE_URL); the
+                   password is read from standard input (one line) and must be hard to guess.
 
 Options:
   --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
@@ -70,6 +74,15 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
     if (a.unknown.length || a.positionals.length)
       return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
     return shapesCommand(a.flags.has('--json'), a.values.get('--family'), io);
+  }
+  if (command === 'admin') {
+    const [sub, ...more] = rest;
+    const a = parseArgs(more, ['--help', '-h'], ['--email', '--name']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (sub !== 'create') return usage(io, 'admin needs the subcommand create');
+    if (a.unknown.length || a.positionals.length)
+      return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
+    return adminCreateCommand(a.values.get('--email'), a.values.get('--name'), io);
   }
   return usage(io, `unknown command "${command}"`);
 }

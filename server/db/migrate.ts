@@ -7,6 +7,7 @@ import * as accounts from '../../migrations/20261202010000_accounts';
 import * as projects from '../../migrations/20261202010100_projects';
 import * as revisions from '../../migrations/20261202010200_revisions';
 import * as filesMailShapes from '../../migrations/20261202010300_files_mail_shapes';
+import * as security from '../../migrations/20261203020000_security';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -18,6 +19,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202010100_projects': projects,
   '20261202010200_revisions': revisions,
   '20261202010300_files_mail_shapes': filesMailShapes,
+  '20261203020000_security': security,
 };
 
 const migrationSource: Knex.MigrationSource<string> = {

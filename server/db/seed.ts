@@ -1,7 +1,8 @@
 /**
  * The demo: four accounts (password `reachline-demo`), one project with all four as members, and
  * two cantilevers, each with revision 1 computed by the engine. Only ever written into an empty
- * database (no users yet), so it never touches real data.
+ * database (no users yet), so it never touches real data, and only when asked: `npm start` in
+ * development asks; with NODE_ENV=production only SEED_DEMO=1 does (server/env.ts).
  */
 import type { Knex } from 'knex';
 import { evaluateDesign } from '../../shared/engine/design';
@@ -11,8 +12,8 @@ import { toFieldIssues } from '../../shared/schemas/quantity';
 import { insertCantilever } from '../features/cantilevers/cantilevers.repository';
 import { addMember, insertProject } from '../features/projects/projects.repository';
 import { insertRevision } from '../features/revisions/revisions.repository';
-import { insertUser } from '../features/users/users.repository';
-import { hashPassword } from '../lib/password';
+import { findUserByEmail, insertUser } from '../features/users/users.repository';
+import { hashPassword, passwordProblem } from '../lib/password';
 import { ENTRY_CANOPY_DESIGN, EAST_DECK_DESIGN } from './demo-designs';
 
 export const DEMO_PASSWORD = 'reachline-demo';
@@ -89,4 +90,42 @@ export async function seedDemoIfEmpty(db: Knex, passwordCost: number): Promise<b
   if (!(await isEmpty(db))) return false;
   await seedDemo(db, passwordCost);
   return true;
+}
+
+/** The demo's accounts share a public password: say so loudly when it is seeded in production. */
+export function warnAboutDemoInProduction(config: { nodeEnv: string; seedDemo: boolean }): void {
+  if (config.nodeEnv === 'production' && config.seedDemo) {
+    console.warn(
+      `WARNING: SEED_DEMO is set with NODE_ENV=production: an empty database gets the demo accounts, whose password (${DEMO_PASSWORD}) is public. Disable or delete them before real use.`,
+    );
+  }
+}
+
+export class FirstAdminError extends Error {}
+
+/**
+ * Creates an admin account when the database has none (ADMIN_EMAIL / ADMIN_PASSWORD, or
+ * `reachline admin create`). The password must pass the strength rule; the account must change
+ * it at its first sign-in when it came from the environment, where it may linger.
+ * Returns the new account's id, or null when an admin exists already.
+ */
+export async function createFirstAdmin(
+  db: Knex,
+  admin: { email: string; password: string; displayName: string },
+  options: { passwordCost: number; mustChange: boolean; evenIfAdminExists?: boolean },
+): Promise<number | null> {
+  const problem = passwordProblem(admin.password, [admin.email, admin.displayName]);
+  if (problem) throw new FirstAdminError(`password: ${problem}`);
+  if (!options.evenIfAdminExists && (await db('users').where({ role: 'admin', active: true }).first()))
+    return null;
+  if (await findUserByEmail(db, admin.email))
+    throw new FirstAdminError(`email: an account with ${admin.email} exists already`);
+  const id = await insertUser(db, {
+    email: admin.email,
+    displayName: admin.displayName,
+    role: 'admin',
+    passwordHash: await hashPassword(admin.password, options.passwordCost),
+  });
+  if (options.mustChange) await db('users').where({ id }).update({ must_change_password: true });
+  return id;
 }

@@ -35,7 +35,10 @@ export interface UserDto {
   role: Role;
   units: 'US' | 'SI';
   active: boolean;
+  /** Set by an admin's reset: nothing but changing the password works until it is changed (always sent). */
+  mustChangePassword?: boolean;
 }
+export { changePasswordSchema, type ChangePasswordBody, type ChangePasswordRequest } from './auth';
 export const createUserSchema = z.object({
   email: z.email('must be an e-mail address'),
   displayName: z.string().trim().min(1, 'is required').max(80),
@@ -47,6 +50,8 @@ export const updateUserSchema = z.object({
   displayName: z.string().trim().min(1).max(80).optional(),
   role: z.enum(ROLES).optional(),
   active: z.boolean().optional(),
+  /** An admin's reset: the person must change it at the next sign-in. */
+  password: z.string().min(10, 'must be at least 10 characters').max(200).optional(),
 });
 export type UpdateUserRequest = z.output<typeof updateUserSchema>;
 
@@ -185,6 +190,8 @@ export const shapesQuerySchema = z.object({
   q: z.string().trim().max(40).optional(),
   minDepth: z.coerce.number().nonnegative().optional(),
   maxDepth: z.coerce.number().positive().optional(),
+  /** Adds this project's imported shapes (members only). */
+  projectId: z.coerce.number().int().positive().optional(),
 });
 export type ShapesQuery = z.output<typeof shapesQuerySchema>;
 export interface ShapesDto {
@@ -207,4 +214,8 @@ export interface OutboxDto {
   sentAt: string | null;
 }
 
-export const checkRequestSchema = z.object({ input: designSchema });
+export const checkRequestSchema = z.object({
+  input: designSchema,
+  /** Adds this project's imported shapes (members only). */
+  projectId: z.number().int().positive().optional(),
+});

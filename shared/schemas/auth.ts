@@ -10,3 +10,11 @@ export const loginSchema = z.object({
 });
 /** What the sign-in form sends. */
 export type LoginBody = z.input<typeof loginSchema>;
+
+/** Changing one's own password (the strength rule is checked on the server). */
+export const changePasswordSchema = z.object({
+  currentPassword: z.string().min(1, 'is required').max(200),
+  newPassword: z.string().min(10, 'must be at least 10 characters').max(200),
+});
+export type ChangePasswordRequest = z.output<typeof changePasswordSchema>;
+export type ChangePasswordBody = z.input<typeof changePasswordSchema>;

@@ -15,6 +15,7 @@ const HistoryRoute = lazy(() => import('./routes/history'));
 const CompareRoute = lazy(() => import('./routes/compare'));
 const ReviewRoute = lazy(() => import('./routes/review'));
 const TeamRoute = lazy(() => import('./routes/team'));
+const AccountRoute = lazy(() => import('./routes/account'));
 const OutboxRoute = lazy(() => import('./routes/outbox'));
 const NotFoundRoute = lazy(() => import('./routes/not-found'));
 
@@ -45,6 +46,7 @@ export function createAppRouter() {
             { path: routePatterns.compare, element: page(CompareRoute) },
             { path: routePatterns.review, element: page(ReviewRoute) },
             { path: routePatterns.shapes, element: page(ShapesRoute) },
+            { path: routePatterns.account, element: page(AccountRoute) },
             { path: routePatterns.team, element: page(TeamRoute) },
             { path: routePatterns.outbox, element: page(OutboxRoute) },
             { path: '*', element: page(NotFoundRoute) },

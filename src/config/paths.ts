@@ -13,6 +13,7 @@ export const paths = {
   /** The reach study of a cantilever (a sweep of two inputs). */
   study: (cantileverId: number | string) => `/cantilevers/${cantileverId}/study`,
   shapes: '/shapes',
+  account: '/account',
   team: '/admin/team',
   outbox: '/admin/outbox',
 } as const;
@@ -29,6 +30,7 @@ export const routePatterns = {
   revision: '/revisions/:revisionId',
   study: '/cantilevers/:cantileverId/study',
   shapes: '/shapes',
+  account: '/account',
   team: '/admin/team',
   outbox: '/admin/outbox',
 } as const;

@@ -21,6 +21,7 @@ describe('sign-in', () => {
       role: 'architect',
       units: 'US',
       active: true,
+      mustChangePassword: false,
     });
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/reachline\.sid=/);
@@ -56,13 +57,17 @@ describe('sign-in', () => {
     expect(res.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['email', 'password']);
   });
 
-  it('refuses a disabled account', async () => {
+  it('refuses a disabled account with the answer a wrong password gets (the password is not confirmed)', async () => {
     await env.db('users').where({ id: env.ids.engineer2 }).update({ active: false });
     const res = await request(env.app)
       .post('/api/auth/login')
       .send({ email: TEAM.engineer2.email, password: PASSWORD });
+    const wrong = await request(env.app)
+      .post('/api/auth/login')
+      .send({ email: TEAM.engineer2.email, password: 'not the password' });
     expect(res.status).toBe(401);
-    expect(res.body.error.message).toMatch(/disabled/);
+    expect(res.body).toEqual(wrong.body);
+    expect(res.body.error.message).toBe('The e-mail or the password is not right.');
     await env.db('users').where({ id: env.ids.engineer2 }).update({ active: true });
   });
 
@@ -144,7 +149,7 @@ describe('sign-in rate limit', () => {
   });
   afterAll(async () => env.close());
 
-  it('answers 429 after the configured number of attempts for one IP and e-mail', async () => {
+  it('answers 429 after the configured number of failures for one account, even to the right password', async () => {
     for (let i = 0; i < 3; i += 1) {
       await request(env.app)
         .post('/api/auth/login')
@@ -156,7 +161,7 @@ describe('sign-in rate limit', () => {
       .send({ email: TEAM.engineer.email, password: PASSWORD });
     expect(limited.status).toBe(429);
     expect(limited.body.error.code).toBe('too_many_attempts');
-    // Another e-mail from the same IP is counted separately.
+    // Another account from the same address is counted separately (the address limit is 3 x 3).
     await request(env.app)
       .post('/api/auth/login')
       .send({ email: TEAM.architect.email, password: PASSWORD })

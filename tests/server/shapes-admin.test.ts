@@ -47,6 +47,7 @@ describe('shapes', () => {
     const agent = await env.login('engineer');
     const res = await agent
       .post('/api/shapes/import')
+      .field('projectId', String(env.projectId))
       .attach('file', Buffer.from(CUSTOM_CSV), 'mine.csv')
       .expect(201);
     expect(res.body.imported).toBe(2);
@@ -59,7 +60,7 @@ describe('shapes', () => {
       { row: 5, label: 'RL8X10', reason: 'a W shape needs d' },
       { row: 6, label: 'RLX', reason: expect.stringMatching(/^family: must be W, HSS, PIPE or C/) },
     ]);
-    const found = await agent.get('/api/shapes?q=RL').expect(200);
+    const found = await agent.get(`/api/shapes?q=RL&projectId=${env.projectId}`).expect(200);
     expect(found.body.shapes.map((s: { label: string; custom?: boolean }) => [s.label, s.custom])).toEqual([
       ['RL-TUBE-7X5', true],
       ['RL14X22', true],
@@ -71,6 +72,7 @@ describe('shapes', () => {
     const agent = await env.login('architect');
     const res = await agent
       .post('/api/shapes/import')
+      .field('projectId', String(env.projectId))
       .attach('file', Buffer.from(PUBLISHED_LAYOUT_CSV), 'published.csv')
       .expect(201);
     expect(res.body.imported).toBe(1);
@@ -81,19 +83,30 @@ describe('shapes', () => {
     ]);
   });
 
-  it('uses an imported shape in the engine, and refuses an import by an admin or without a file', async () => {
+  it('uses a project shape in that project only, and refuses an import by an admin into a project or without a file', async () => {
     const agent = await env.login('architect');
     const input = baseDesign();
     input.member.section = { shape: 'RL14X22' };
-    const res = await agent.post('/api/check').send({ input }).expect(200);
+    const res = await agent.post('/api/check').send({ input, projectId: env.projectId }).expect(200);
     expect(res.body.member.section.label).toMatch(/RL14X22/);
+    const elsewhere = await agent.post('/api/check').send({ input });
+    expect(elsewhere.status).toBe(400);
+    expect(elsewhere.body.error.issues[0].path).toBe('input.member.section.shape');
     const admin = await env.login('admin');
-    await admin.post('/api/shapes/import').attach('file', Buffer.from(CUSTOM_CSV), 'x.csv').expect(403);
-    const none = await agent.post('/api/shapes/import').field('x', '1');
+    await admin
+      .post('/api/shapes/import')
+      .field('projectId', String(env.projectId))
+      .attach('file', Buffer.from(CUSTOM_CSV), 'x.csv')
+      .expect(403);
+    const noProject = await agent.post('/api/shapes/import').attach('file', Buffer.from(CUSTOM_CSV), 'x.csv');
+    expect(noProject.status).toBe(403);
+    expect(noProject.body.error.issues[0].path).toBe('projectId');
+    const none = await agent.post('/api/shapes/import').field('projectId', String(env.projectId));
     expect(none.status).toBe(400);
     expect(none.body.error.issues[0].path).toBe('file');
     const noHeader = await agent
       .post('/api/shapes/import')
+      .field('projectId', String(env.projectId))
       .attach('file', Buffer.from('a,b\n1,2\n'), 'x.csv');
     expect(noHeader.status).toBe(400);
     expect(noHeader.body.error.issues[0]).toMatchObject({

@@ -3,6 +3,7 @@ import type { CreateUserRequest, UpdateUserRequest, UserDto } from '../../../sha
 import type { AppContext } from '../../context';
 import { HttpError, badRequest, notFound } from '../../lib/http-error';
 import { hashPassword } from '../../lib/password';
+import { assertStrongPassword } from '../auth/auth.service';
 import { listOutbox, retryNow, toOutboxDto, type OutboxEntryDto } from '../../mail/outbox.repository';
 import { listAudit, recordAudit } from '../audit/audit.repository';
 import {
@@ -10,6 +11,7 @@ import {
   findUserById,
   insertUser,
   listUsers,
+  setPassword,
   toUserDto,
   updateUser,
 } from '../users/users.repository';
@@ -28,6 +30,7 @@ export async function createAccount(
       { path: 'email', message: 'is already used by another account' },
     ]);
   }
+  assertStrongPassword(body.password, [body.email, body.displayName], 'password');
   const id = await insertUser(ctx.db, {
     email: body.email,
     displayName: body.displayName,
@@ -57,6 +60,17 @@ export async function updateAccount(
     throw badRequest('You may not disable your own account or take away your own admin role.', [
       { path: body.active === false ? 'active' : 'role', message: 'cannot be changed on your own account' },
     ]);
+  }
+  if (body.password !== undefined) {
+    assertStrongPassword(body.password, [row.email, row.display_name], 'password');
+    // The person must choose their own at the next sign-in; their sessions end now.
+    await setPassword(
+      ctx.db,
+      userId,
+      await hashPassword(body.password, ctx.config.passwordCost),
+      userId !== admin.id,
+    );
+    await recordAudit(ctx.db, { kind: 'password-reset', userId: admin.id, subject: row.email });
   }
   await updateUser(ctx.db, userId, {
     ...(body.displayName !== undefined ? { display_name: body.displayName } : {}),

@@ -2,46 +2,17 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { pipeline } from 'node:stream/promises';
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../../context';
-import { HttpError, badRequest, notFound } from '../../lib/http-error';
+import { notFound } from '../../lib/http-error';
 import { idParams } from '../../lib/params';
 import { typedRoute } from '../../lib/route';
+import { singleFileUpload } from '../../middleware/multipart';
 import { currentUser } from '../../middleware/require-auth';
 import { assertMayUpload, attachmentForMember, attachmentsOf, storeAttachment } from './attachments.service';
 
 const INLINE_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
-
-/** multer with its errors turned into the API's error shape (413 for size, 400 naming `file`). */
-function singleUpload(maxBytes: number): RequestHandler {
-  const upload = multer({
-    storage: multer.memoryStorage(),
-    limits: { fileSize: maxBytes, files: 1, fields: 10 },
-  }).single('file');
-  return (req, res, next) => {
-    upload(req, res, (err: unknown) => {
-      if (!err) return next();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') {
-          const mib = (maxBytes / 1024 / 1024).toFixed(maxBytes % (1024 * 1024) === 0 ? 0 : 2);
-          return next(
-            new HttpError(413, 'too_large', `The file is larger than the limit of ${mib} MiB.`, [
-              { path: 'file', message: `must be at most ${maxBytes} bytes` },
-            ]),
-          );
-        }
-        return next(
-          badRequest(`The upload is not valid: ${err.message}.`, [
-            { path: err.field ?? 'file', message: err.message },
-          ]),
-        );
-      }
-      next(err);
-    });
-  };
-}
 
 export function attachmentsRouter(ctx: AppContext): Router {
   const router = Router();
@@ -60,7 +31,7 @@ export function attachmentsRouter(ctx: AppContext): Router {
       await assertMayUpload(ctx, currentUser(req), params.cantileverId);
       next();
     }),
-    singleUpload(ctx.config.attachmentMaxBytes),
+    singleFileUpload({ maxBytes: ctx.config.attachmentMaxBytes, fields: 2 }),
     typedRoute({ params }, async ({ params }, req, res) => {
       res.status(201).json(await storeAttachment(ctx, currentUser(req), params.cantileverId, req.file));
     }),

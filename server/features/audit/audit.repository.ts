@@ -13,7 +13,9 @@ export type AuditKind =
   | 'account-disabled'
   | 'account-enabled'
   | 'member-added'
-  | 'member-removed';
+  | 'member-removed'
+  | 'password-changed'
+  | 'password-reset';
 
 export interface AuditRow {
   id: number;

@@ -1,71 +1,43 @@
 /**
- * Sign-in, sign-out and the signed-in person's own settings. The login route is rate limited per
- * IP and e-mail; every attempt leaves an audit row.
+ * Sign-in, sign-out, the signed-in person's own settings and password. Failed sign-ins are
+ * limited per account and per client address (counted in the database); every attempt leaves an
+ * audit row. The client address is the socket's unless TRUST_PROXY names the proxies in front.
  */
-import { Router, type RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { Router } from 'express';
 import type { PassportInstance } from '../../auth/passport';
-import { loginSchema, updateMeSchema, type UserDto } from '../../../shared/schemas/api';
+import { changePasswordSchema, loginSchema, updateMeSchema, type UserDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError, unauthorized } from '../../lib/http-error';
 import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { recordFailedSignIn, recordSignIn, updateMe } from './auth.service';
-
-function loginLimiter(ctx: AppContext): RequestHandler {
-  return rateLimit({
-    windowMs: ctx.config.loginRateWindowMs,
-    limit: ctx.config.loginRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => {
-      const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
-      return `${ipKeyGenerator(req.ip ?? 'unknown')}|${email}`;
-    },
-    handler: (_req, _res, next) => {
-      next(
-        new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts; wait 15 minutes and try again.'),
-      );
-    },
-  });
-}
+import { assertMaySignIn, changeOwnPassword, noteFailedSignIn, noteSignIn, updateMe } from './auth.service';
+import { SIGN_IN_FAILED } from '../../auth/passport';
 
 export function authRouter(ctx: AppContext, passport: PassportInstance): Router {
   const router = Router();
 
   router.post(
     '/auth/login',
-    loginLimiter(ctx),
-    typedRoute({ body: loginSchema }, ({ body }, req, res, next) => {
+    typedRoute({ body: loginSchema }, async ({ body }, req, res, next) => {
       const email = body.email.toLowerCase();
-      const ip = req.ip ?? '';
-      passport.authenticate(
-        'local',
-        (err: unknown, user: Express.User | false, info?: { message?: string }) => {
-          if (err) return next(err);
-          if (!user) {
-            recordFailedSignIn(ctx, email, ip)
-              .then(() =>
-                next(
-                  new HttpError(
-                    401,
-                    'sign_in_failed',
-                    info?.message ?? 'The e-mail or the password is not right.',
-                  ),
-                ),
-              )
-              .catch(next);
-            return;
-          }
-          // passport regenerates the session id here, so a session fixed before sign-in is worthless.
-          req.logIn(user, (loginErr) => {
-            if (loginErr) return next(loginErr);
-            recordSignIn(ctx, user, ip)
-              .then(() => res.json(user satisfies UserDto))
-              .catch(next);
-          });
-        },
-      )(req, res, next);
+      const ip = req.ip ?? 'unknown';
+      await assertMaySignIn(ctx, email, ip);
+      passport.authenticate('local', (err: unknown, user: Express.User | false) => {
+        if (err) return next(err);
+        if (!user) {
+          noteFailedSignIn(ctx, email, ip)
+            .then(() => next(new HttpError(401, 'sign_in_failed', SIGN_IN_FAILED)))
+            .catch(next);
+          return;
+        }
+        // passport regenerates the session id here, so a session fixed before sign-in is worthless.
+        req.logIn(user, (loginErr) => {
+          if (loginErr) return next(loginErr);
+          noteSignIn(ctx, user, ip)
+            .then(() => res.json(user satisfies UserDto))
+            .catch(next);
+        });
+      })(req, res, next);
     }),
   );
 
@@ -93,6 +65,20 @@ export function authRouter(ctx: AppContext, passport: PassportInstance): Router 
     '/auth/me',
     typedRoute({ body: updateMeSchema }, async ({ body }, req, res) => {
       res.json(await updateMe(ctx, currentUser(req), body));
+    }),
+  );
+
+  // Every session of the account ends; this one is signed in again under the new session version.
+  router.post(
+    '/auth/password',
+    typedRoute({ body: changePasswordSchema }, async ({ body }, req, res, next) => {
+      const user = currentUser(req);
+      await changeOwnPassword(ctx, user, body);
+      const fresh = { ...user, mustChangePassword: false };
+      req.logIn(fresh, (err) => {
+        if (err) return next(err);
+        res.json(fresh satisfies UserDto);
+      });
     }),
   );
 

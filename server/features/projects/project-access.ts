@@ -29,6 +29,8 @@ export interface RevisionRow {
   engine_version: string;
   base_revision_id: number | null;
   ok: number | boolean;
+  /** The catalog sections the result was computed with (JSON); null before they were kept. */
+  sections_json?: string | null;
   created_at: string;
 }
 

@@ -116,6 +116,10 @@ export async function addProjectMember(
   if (!project) throw notFound('project');
   const account = await findUserById(ctx.db, userId);
   if (!account) throw badRequest('No such account.', [{ path: 'userId', message: 'no account has this id' }]);
+  if (!account.active)
+    throw badRequest('This account is disabled; enable it on the Team screen first.', [
+      { path: 'userId', message: 'is a disabled account' },
+    ]);
   await addMember(ctx.db, projectId, userId);
   await recordAudit(ctx.db, {
     kind: 'member-added',

@@ -1,24 +1,47 @@
 /**
- * Runs the shared engine on the server with the built-in and the imported shapes. A semantic
- * problem the schema cannot see (an unknown shape, a load past the tip) answers 400 with the
- * engine's field issues, prefixed with the request field that held the document.
+ * Runs the shared engine on the server with the built-in shapes and the imported shapes the
+ * project sees (its own and the organisation's). A semantic problem the schema cannot see (an
+ * unknown shape, a load past the tip) answers 400 with the engine's field issues, prefixed with the
+ * request field that held the document.
+ *
+ * The catalog sections the engine looked up are returned with the result, so a revision stores
+ * the properties it was computed with; `pinned` sections (those of the base revision) win over the
+ * current table, so a later import can never change a re-run or the next save of a design.
  */
 import type { Knex } from 'knex';
 import { evaluateDesign } from '../../../shared/engine/design';
-import { lookupWith } from '../../../shared/engine/shapes/table';
+import { lookupWith, normalizeLabel } from '../../../shared/engine/shapes/table';
+import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { DesignInputError, type DesignResult } from '../../../shared/engine/types';
 import type { DesignInput } from '../../../shared/schemas/design';
 import { badRequest } from '../../lib/http-error';
-import { listCustomShapes } from '../shapes/shapes.repository';
+import { listShapesInScope } from '../shapes/shapes.repository';
 
-export async function evaluateOnServer(
+export interface EvaluateOptions {
+  stations: boolean;
+  field?: string;
+  /** The project whose imported shapes apply; null or absent: the organisation's only. */
+  projectId?: number | null;
+  /** Sections stored with the base revision; they win over the current table. */
+  pinned?: readonly ShapeRecord[];
+}
+
+export async function evaluateWithSections(
   db: Knex | Knex.Transaction,
   input: DesignInput,
-  options: { stations: boolean; field?: string },
-): Promise<DesignResult> {
-  const shapes = lookupWith(await listCustomShapes(db));
+  options: EvaluateOptions,
+): Promise<{ result: DesignResult; sections: ShapeRecord[] }> {
+  const pinnedCustom = (options.pinned ?? []).filter((s) => s.custom);
+  const base = lookupWith([...(await listShapesInScope(db, options.projectId ?? null)), ...pinnedCustom]);
+  const used = new Map<string, ShapeRecord>();
+  const shapes = (label: string) => {
+    const found = base(label);
+    if (found) used.set(normalizeLabel(label), found);
+    return found;
+  };
   try {
-    return evaluateDesign(input, { stations: options.stations, shapes });
+    const result = evaluateDesign(input, { stations: options.stations, shapes });
+    return { result, sections: [...used.values()] };
   } catch (err) {
     if (err instanceof DesignInputError) {
       const prefix = options.field ?? 'input';
@@ -27,4 +50,18 @@ export async function evaluateOnServer(
     }
     throw err;
   }
+}
+
+export async function evaluateOnServer(
+  db: Knex | Knex.Transaction,
+  input: DesignInput,
+  options: EvaluateOptions,
+): Promise<DesignResult> {
+  return (await evaluateWithSections(db, input, options)).result;
+}
+
+/** The sections a stored revision was computed with (none for revisions saved before they were kept). */
+export function storedSections(sectionsJson: string | null | undefined): ShapeRecord[] {
+  if (!sectionsJson) return [];
+  return JSON.parse(sectionsJson) as ShapeRecord[];
 }

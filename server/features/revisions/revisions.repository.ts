@@ -116,6 +116,8 @@ export async function insertRevision(
     input: unknown;
     result: DesignResult;
     baseRevisionId: number | null;
+    /** The catalog sections the result was computed with. */
+    sections?: readonly unknown[];
   },
 ): Promise<number> {
   const [row] = await db('revisions')
@@ -129,6 +131,7 @@ export async function insertRevision(
       engine_version: r.result.engineVersion,
       base_revision_id: r.baseRevisionId,
       ok: r.result.ok,
+      sections_json: r.sections ? JSON.stringify(r.sections) : null,
       created_at: nowIso(),
     })
     .returning('id');

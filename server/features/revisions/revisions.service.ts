@@ -15,7 +15,7 @@ import { cantileverForMember, revisionForMember, type CantileverRow } from '../p
 import { findProject, memberEmailsWithRole } from '../projects/projects.repository';
 import { findUserById } from '../users/users.repository';
 import { assertMayChange } from './edit-rights';
-import { evaluateOnServer } from './evaluate';
+import { evaluateWithSections, storedSections } from './evaluate';
 import {
   getRevisionDto,
   insertReview,
@@ -47,8 +47,13 @@ export async function saveRevision(
       throw new HttpError(409, 'stale_base', message, [], extra);
     }
     assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input);
-    const result = await evaluateOnServer(trx, body.input, { stations: true });
+    const { result, sections } = await evaluateWithSections(trx, body.input, {
+      stations: true,
+      projectId: cantilever.project_id,
+      pinned: storedSections(latest?.sections_json),
+    });
     const id = await insertRevision(trx, {
+      sections,
       cantileverId: cantilever.id,
       number: (latest?.number ?? 0) + 1,
       authorId: user.id,

@@ -10,6 +10,8 @@ import type { ShapeFamily, ShapeRecord } from '../../../shared/engine/shapes/typ
 
 export interface ParsedShapes {
   shapes: ShapeRecord[];
+  /** The file row (1 = the header) of each accepted shape, parallel to `shapes`. */
+  rows: number[];
   rejected: { row: number; label: string | null; reason: string }[];
 }
 
@@ -137,7 +139,7 @@ export function readShapesCsv(text: string): ParsedShapes {
   if (missing.length > 0)
     throw new ShapeCsvError(`the header is missing the column(s) ${missing.join(', ')}`);
 
-  const result: ParsedShapes = { shapes: [], rejected: [] };
+  const result: ParsedShapes = { shapes: [], rows: [], rejected: [] };
   const seen = new Set<string>();
   rows.slice(1).forEach((cells, i) => {
     const rowNumber = i + 2;
@@ -175,6 +177,7 @@ export function readShapesCsv(text: string): ParsedShapes {
     if (seen.has(key)) return reject('this label appears twice in the file');
     seen.add(key);
     result.shapes.push({ ...shape, label: shape.label.toUpperCase().replace(/\s+/g, ''), custom: true });
+    result.rows.push(rowNumber);
   });
   return result;
 }

@@ -11,6 +11,9 @@ export interface UserRow {
   role: Role;
   units: 'US' | 'SI';
   active: number | boolean;
+  must_change_password: number | boolean;
+  /** Raised whenever the password changes; sessions signed in under an older value end. */
+  session_version: number;
   created_at: string;
 }
 
@@ -22,6 +25,7 @@ export function toUserDto(row: UserRow): UserDto {
     role: row.role,
     units: row.units,
     active: toBool(row.active),
+    mustChangePassword: toBool(row.must_change_password ?? false),
   };
 }
 
@@ -64,8 +68,38 @@ export async function insertUser(
 export async function updateUser(
   db: Knex,
   id: number,
-  patch: Partial<Pick<UserRow, 'display_name' | 'role' | 'units' | 'active' | 'password_hash'>>,
+  patch: Partial<
+    Pick<
+      UserRow,
+      | 'display_name'
+      | 'role'
+      | 'units'
+      | 'active'
+      | 'password_hash'
+      | 'must_change_password'
+      | 'session_version'
+    >
+  >,
 ): Promise<void> {
   if (Object.keys(patch).length === 0) return;
   await db('users').where({ id }).update(patch);
+}
+
+/**
+ * Sets a new password hash and ends every session signed in with the old one (the session
+ * version goes up); `mustChange` marks an admin's reset.
+ */
+export async function setPassword(
+  db: Knex | Knex.Transaction,
+  id: number,
+  passwordHash: string,
+  mustChange: boolean,
+): Promise<void> {
+  await db('users')
+    .where({ id })
+    .update({
+      password_hash: passwordHash,
+      must_change_password: mustChange,
+      session_version: db.raw('session_version + 1'),
+    });
 }

@@ -47,12 +47,12 @@ export function AppLayout() {
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           {user ? (
-            <span data-testid="who">
+            <NavLink to={paths.account} data-testid="who" title="Your account" className="hover:underline">
               {user.displayName}{' '}
               <span className="rounded bg-concrete-700 px-1.5 py-0.5 text-xs text-concrete-200">
                 {user.role}
               </span>
-            </span>
+            </NavLink>
           ) : null}
           <button
             type="button"

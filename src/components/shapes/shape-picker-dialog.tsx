@@ -7,15 +7,17 @@ export function ShapePickerDialog({
   onClose,
   actions,
   initial,
+  projectId,
 }: {
   open: boolean;
   onClose: () => void;
   actions: ShapeAction[];
   initial?: string | null;
+  projectId?: number;
 }) {
   return (
     <Dialog open={open} title="Pick a shape" onClose={onClose} wide>
-      <ShapesBrowser actions={actions} initial={initial ?? null} />
+      <ShapesBrowser actions={actions} initial={initial ?? null} projectId={projectId} />
     </Dialog>
   );
 }

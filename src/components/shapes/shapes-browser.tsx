@@ -22,11 +22,14 @@ function depthValue(text: string): number | null {
 export function ShapesBrowser({
   actions = [],
   initial = null,
+  projectId,
 }: {
   actions?: ShapeAction[];
   initial?: string | null;
+  /** Whose imported shapes to include (a project's own and the organisation's). */
+  projectId?: number;
 }) {
-  const shapes = useShapes();
+  const shapes = useShapes(projectId);
   const [q, setQ] = useState('');
   const [family, setFamily] = useState<ShapeFamily | ''>('');
   const [minDepth, setMin] = useState('');

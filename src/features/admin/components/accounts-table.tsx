@@ -5,7 +5,19 @@ import { Button } from '../../../components/ui/button';
 import { useUpdateUser, type UpdateUserBody } from '../api/update-user';
 import { errorText } from '../../../lib/error-text';
 
-/** Every account with its role and whether it may sign in; change role, deactivate, reactivate. */
+const TEMP_ALPHABET = 'abcdefghjkmnpqrstuvwxyz23456789';
+
+/** A random temporary password (four groups of four, about 79 bits) for an admin's reset. */
+export function temporaryPassword(): string {
+  const bytes = crypto.getRandomValues(new Uint8Array(16));
+  const chars = [...bytes].map((b) => TEMP_ALPHABET[b % TEMP_ALPHABET.length]).join('');
+  return chars.match(/.{4}/g)!.join('-');
+}
+
+/**
+ * Every account with its role and whether it may sign in; change role, deactivate, reactivate,
+ * reset a password (a temporary one shown once; the person must change it at the next sign-in).
+ */
 export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number | undefined }) {
   const update = useUpdateUser();
   const [status, setStatus] = useState('');
@@ -91,7 +103,25 @@ export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number 
                   </span>
                 )}
               </td>
-              <td className="py-1">
+              <td className="flex gap-1 py-1">
+                {user.id !== meId && (
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    disabled={update.isPending}
+                    aria-label={`Reset the password of ${user.displayName}`}
+                    onClick={() => {
+                      const password = temporaryPassword();
+                      change(
+                        user,
+                        { password },
+                        `Temporary password for ${user.displayName}: ${password} (shown once; they must choose a new one when they sign in).`,
+                      );
+                    }}
+                  >
+                    Reset password
+                  </Button>
+                )}
                 {user.id !== meId && (
                   <Button
                     size="sm"

@@ -56,7 +56,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const base = baseRevision?.number ?? null;
   const [units, setUnits] = useState<UnitSystem>(initialDoc.units === 'SI' ? 'SI' : 'US');
   const [picker, setPicker] = useState<'member' | 'footprint' | null>(null);
-  const shapes = useShapes();
+  const shapes = useShapes(cantilever.projectId);
   const custom = useMemo(() => shapes.data?.shapes.filter((s) => s.custom) ?? NO_SHAPES, [shapes.data]);
   const { live, busy, submit } = useLiveDesign(custom);
   const switchUnits = useUnitsSwitch(form);
@@ -152,6 +152,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
           </div>
         </div>
         <ShapePickerDialog
+          projectId={cantilever.projectId}
           open={picker !== null}
           onClose={() => setPicker(null)}
           actions={actions}

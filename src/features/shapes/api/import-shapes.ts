@@ -7,7 +7,11 @@ import { shapeKeys } from '../../../lib/api/shapes/shape-keys';
  * Uploads a CSV of shapes (multipart field "file"). XMLHttpRequest rather than fetch, for the upload
  * progress; errors become the same ApiError as every other request.
  */
-export function importShapes(file: File, onProgress?: (fraction: number) => void): Promise<ShapeImportDto> {
+export function importShapes(
+  file: File,
+  projectId: number | null,
+  onProgress?: (fraction: number) => void,
+): Promise<ShapeImportDto> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', '/api/shapes/import');
@@ -47,6 +51,8 @@ export function importShapes(file: File, onProgress?: (fraction: number) => void
       );
     };
     const form = new FormData();
+    // The text field goes first so the server knows the scope before the file arrives.
+    if (projectId !== null) form.append('projectId', String(projectId));
     form.append('file', file);
     xhr.send(form);
   });
@@ -55,7 +61,8 @@ export function importShapes(file: File, onProgress?: (fraction: number) => void
 export function useImportShapes(onProgress: (fraction: number) => void) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (file: File) => importShapes(file, onProgress),
+    mutationFn: ({ file, projectId }: { file: File; projectId: number | null }) =>
+      importShapes(file, projectId, onProgress),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: shapeKeys.all }),
   });
 }

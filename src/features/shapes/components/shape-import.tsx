@@ -1,10 +1,15 @@
 import { Upload } from 'lucide-react';
 import { useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { ApiError } from '../../../lib/api-client';
 import { useImportShapes } from '../api/import-shapes';
 
-/** Import the published shapes database CSV or a custom CSV; shows progress, the count and every rejected row. */
-export function ShapeImport() {
+/**
+ * Import the published shapes database CSV or a custom CSV into one project (or, for an admin, the
+ * organisation); shows progress, the count, every rejected row, and a label already in use with
+ * the request for a new name.
+ */
+export function ShapeImport({ projectId, scopeName }: { projectId: number | null; scopeName: string }) {
   const [progress, setProgress] = useState(0);
   const input = useRef<HTMLInputElement>(null);
   const upload = useImportShapes(setProgress);
@@ -13,11 +18,11 @@ export function ShapeImport() {
   return (
     <section aria-labelledby="import-title" className="rounded-md border border-concrete-300 bg-white p-3">
       <h2 id="import-title" className="text-sm font-semibold">
-        Import shapes from a CSV file
+        Import shapes into {scopeName}
       </h2>
       <p className="text-xs text-concrete-600">
         The published shapes database file, or your own CSV with a label, a family (W, HSS, PIPE, C) and the
-        property columns.
+        property columns. A label already used here is refused: give the shape a new name in the file.
       </p>
       <form
         className="mt-2 flex flex-wrap items-center gap-2"
@@ -25,7 +30,7 @@ export function ShapeImport() {
           e.preventDefault();
           if (file) {
             setProgress(0);
-            upload.mutate(file);
+            upload.mutate({ file, projectId });
           }
         }}
       >
@@ -51,9 +56,16 @@ export function ShapeImport() {
         </div>
       ) : null}
       {upload.isError ? (
-        <p role="alert" className="mt-2 text-sm text-util-over">
-          The import failed: {upload.error.message}
-        </p>
+        <div role="alert" className="mt-2 text-sm text-util-over">
+          <p>The import failed: {upload.error.message}</p>
+          {upload.error instanceof ApiError && upload.error.issues.length > 0 ? (
+            <ul className="mt-1 list-disc pl-5 text-xs" aria-label="What to change">
+              {upload.error.issues.map((issue, i) => (
+                <li key={i}>{issue.message}</li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
       ) : null}
       {upload.data ? (
         <div className="mt-2 text-sm" role="status" data-testid="import-result">

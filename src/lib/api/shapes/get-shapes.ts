@@ -3,19 +3,22 @@ import type { ShapesDto } from '../../../../shared/schemas/api';
 import { apiGet } from '../../api-client';
 import { shapeKeys } from './shape-keys';
 
-/** The whole shapes table (published plus imported): a few hundred rows, filtered in the browser. */
-export function getShapes(signal?: AbortSignal): Promise<ShapesDto> {
-  return apiGet<ShapesDto>('/api/shapes', signal);
+/**
+ * The whole shapes table one project sees (published, the organisation's imports and the
+ * project's own): a few hundred rows, filtered in the browser. No project: the organisation's.
+ */
+export function getShapes(projectId?: number, signal?: AbortSignal): Promise<ShapesDto> {
+  return apiGet<ShapesDto>(projectId ? `/api/shapes?projectId=${projectId}` : '/api/shapes', signal);
 }
 
-export function shapesQueryOptions() {
+export function shapesQueryOptions(projectId?: number) {
   return queryOptions({
-    queryKey: shapeKeys.list(),
-    queryFn: ({ signal }) => getShapes(signal),
+    queryKey: shapeKeys.list(projectId),
+    queryFn: ({ signal }) => getShapes(projectId, signal),
     staleTime: 5 * 60_000,
   });
 }
 
-export function useShapes() {
-  return useQuery(shapesQueryOptions());
+export function useShapes(projectId?: number) {
+  return useQuery(shapesQueryOptions(projectId));
 }
