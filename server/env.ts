@@ -96,7 +96,7 @@ const envSchema = z.object({
         message: 'must be 0, a hop count, or a comma-separated list of proxy addresses or subnets',
       },
     ),
-  // Absent: seed an empty database in development only; production seeds only with SEED_DEMO=1.
+  // Absent: seed an empty database outside production (development, tests); production seeds only with SEED_DEMO=1.
   SEED_DEMO: z.enum(['0', '1', 'true', 'false']).optional(),
   APP_ORIGIN: z
     .url('must be an origin such as https://reachline.example.com')
@@ -118,7 +118,7 @@ function trustProxyValue(text: string): boolean | number | string {
 }
 
 function seedDemoValue(text: string | undefined, nodeEnv: Config['nodeEnv']): boolean {
-  if (text === undefined) return nodeEnv === 'development';
+  if (text === undefined) return nodeEnv !== 'production';
   return text === '1' || text === 'true';
 }
 

@@ -85,7 +85,7 @@ describe('the bundled server', { timeout: 120000 }, () => {
       }, 50);
     });
     expect(out).toMatch(
-      /^Database: migrating .*reachline\.sqlite… applied 4 migration\(s\), seeded the demo/m,
+      /^Database: migrating .*reachline\.sqlite… applied \d+ migration\(s\), seeded the demo/m,
     );
     const health = await fetch(`${url}/api/health`);
     expect(health.status).toBe(200);

@@ -57,15 +57,12 @@ describe('Host allow-list and same-origin check', () => {
 
   it('refuses a state-changing request whose Origin is another site', async () => {
     const admin = await env.login('admin');
-    const res = await admin
-      .post('/api/admin/users')
-      .set('Origin', 'http://attacker.example')
-      .send({
-        email: 'evil2@example.test',
-        displayName: 'Evil',
-        role: 'admin',
-        password: 'sneaky new password 42',
-      });
+    const res = await admin.post('/api/admin/users').set('Origin', 'http://attacker.example').send({
+      email: 'evil2@example.test',
+      displayName: 'Evil',
+      role: 'admin',
+      password: 'sneaky new password 42',
+    });
     expect(res.status).toBe(403);
   });
 
@@ -163,10 +160,10 @@ describe('sign-in limits', () => {
 });
 
 describe('demo seeding and the first admin', () => {
-  it('seeds the demo in development only, unless SEED_DEMO says otherwise', () => {
+  it('seeds the demo outside production, unless SEED_DEMO says otherwise', () => {
     expect(parseEnv({ NODE_ENV: 'development' }).seedDemo).toBe(true);
     expect(parseEnv({ NODE_ENV: 'production' }).seedDemo).toBe(false);
-    expect(parseEnv({ NODE_ENV: 'test' }).seedDemo).toBe(false);
+    expect(parseEnv({ NODE_ENV: 'test' }).seedDemo).toBe(true);
     expect(parseEnv({ NODE_ENV: 'production', SEED_DEMO: '1' }).seedDemo).toBe(true);
     expect(parseEnv({ NODE_ENV: 'development', SEED_DEMO: '0' }).seedDemo).toBe(false);
     expect(parseEnv({ TRUST_PROXY: '2' }).trustProxy).toBe(2);
