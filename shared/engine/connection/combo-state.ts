@@ -10,6 +10,8 @@ import { requiredThickness, type ThicknessParts } from './plate-thickness';
 
 export interface ComboState {
   combination: string;
+  /** The sense of the root moment: under "up" the other row of rods is the tension row. */
+  direction: 'down' | 'up';
   /** Compression on the plate (negative: a pull), moment, and shear on the plate, kip and kip·in. */
   P: number;
   M: number;
@@ -48,6 +50,7 @@ export function analyseCombination(
   const T = bearing.T ?? 0;
   return {
     combination: d.combination,
+    direction: d.direction ?? (d.M < 0 ? 'up' : 'down'),
     P,
     M,
     shear,

@@ -90,6 +90,16 @@ function respond(model: MemberModel, c: CaseLoads): Response {
 
 const EMPTY = new Float64Array(0);
 
+/** The moment of a combination at any x (kip·in, hogging positive), from the cases' closed forms. */
+export function momentOfCombination(model: MemberModel, factors: Factors, x: number): number {
+  let m = 0;
+  for (const c of model.cases) {
+    const f = factors[c.case];
+    if (f) m += f * momentAt(c.loads, model.L, x);
+  }
+  return m;
+}
+
 /**
  * The response to a combination of the cases present (absent cases contribute nothing).
  * @param full also sum rotation and deflection at every node (for the station arrays); the checks
