@@ -64,7 +64,15 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       { path: 'loads', message: 'there is no load to check: turn on self-weight or add a load' },
     ]);
   }
-  const model = analyseMember(section, L, E, caseLoads, options.intervals ?? DEFAULT_INTERVALS);
+  const lateral = readLateralSupport(member);
+  const model = analyseMember(
+    section,
+    L,
+    E,
+    caseLoads,
+    options.intervals ?? DEFAULT_INTERVALS,
+    lateral.braces,
+  );
   const present = new Set(caseLoads.map((c) => c.case));
   const seismic = input.loads.seismic;
   const list =
@@ -76,7 +84,6 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   }));
   const Lb = member.unbracedLength ? toInternal(member.unbracedLength, 'length') : L;
   const signed = combos.some((c) => c.factors.W !== undefined || (c.factors.D ?? 0) < 0);
-  const lateral = readLateralSupport(member);
   const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos, signed, lateral };
 
   const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight));

@@ -41,6 +41,21 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
       message: `must not exceed the member length (${member.length}), got "${member.unbracedLength}"`,
     });
   }
+  const ls = member.lateralSupport;
+  if (ls && member.unbracedLength) {
+    problems.push({
+      path: 'member.unbracedLength',
+      message: 'give the braces in member.lateralSupport.braces instead of unbracedLength, not both',
+    });
+  }
+  (ls?.braces ?? []).forEach((b, i) => {
+    if (toInternal(b, 'length') >= L * (1 - 1e-9)) {
+      problems.push({
+        path: `member.lateralSupport.braces[${i}]`,
+        message: `must lie between the root and the tip (length ${member.length}), got "${b}"`,
+      });
+    }
+  });
   if (!(Fy >= 20 && Fy <= 100)) {
     problems.push({
       path: 'member.steel.Fy',

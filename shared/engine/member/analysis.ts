@@ -42,8 +42,10 @@ export function analyseMember(
   E: number,
   caseLoads: CaseLoads[],
   intervals = DEFAULT_INTERVALS,
+  /** Further positions that must be nodes (bottom-flange braces: a segment ends on a node). */
+  extraNodes: readonly number[] = [],
 ): MemberModel {
-  const points = caseLoads.flatMap((c) => c.points.map((p) => p.a));
+  const points = [...caseLoads.flatMap((c) => c.points.map((p) => p.a)), ...extraNodes];
   // A prismatic member under uniform and point loads is integrated exactly on any grid.
   const grid = buildGrid(L, intervals, points);
   const { x, mid } = grid;
