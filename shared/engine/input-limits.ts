@@ -56,6 +56,19 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
       });
     }
   });
+  const conn = input.connection;
+  if (conn?.post && conn.arrangement !== 'post-base') {
+    problems.push({
+      path: 'connection.post',
+      message: 'applies to a post base only (arrangement "post-base")',
+    });
+  } else if (conn?.post && !conn.footprint) {
+    problems.push({
+      path: 'connection.footprint',
+      message:
+        'name the post\'s section (e.g. { "shape": "HSS8X8X1/2" }) to check the post of height connection.post.height',
+    });
+  }
   if (!(Fy >= 20 && Fy <= 100)) {
     problems.push({
       path: 'member.steel.Fy',

@@ -68,6 +68,7 @@ export function buildConnectionResult(
     direction: s.direction,
     tensionRow: tensionRowWords(geo.arrangement, s.direction),
     directionsChecked: [...new Set(states.map((x) => x.direction))],
+    plateMoment: quantity(s.M, 'moment', units),
     bearingLength: len(b.Y ?? 0),
     bearingPressure: quantity(b.fp ?? 0, 'stress', units),
     anchorTensionPerRod: quantity(s.rodTension, 'force', units),
