@@ -24,7 +24,8 @@ Commands:
                    connection), run each as a full design and print JSON: "passing" ordered
                    by steel weight, lightest first, each with its governing check and ratio,
                    then "failing" with the check that fails. For a tapered W design each W
-                   gets the shallowest tip depth that passes ("tipDepth"). Exit 0 when at
+                   gets the shallowest tip depth that passes ("tipDepth", absent when only
+                   the full depth passes). Exit 0 when at
                    least one shape passes, 1 when none does, 2 for invalid input.
   shapes           List the shapes table shipped with Reachline and its source.
   admin create     Create an admin account in the configured database (DATABASE_URL); the

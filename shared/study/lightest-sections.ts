@@ -25,7 +25,7 @@ export interface PassingShape {
   shape: string;
   steelWeight: Quantity;
   governing: { id: string; ratio: number | null };
-  /** Tapered documents only (W shapes): the shallowest tip depth that passes. */
+  /** Tapered documents only (W shapes): the shallowest tip depth that passes; absent when only the full depth passes. */
   tipDepth?: Quantity;
 }
 
@@ -78,7 +78,9 @@ export function rankSections(base: DesignInput, options: LightestOptions = {}): 
         shape: shape.label,
         steelWeight: outcome.result.member.steelWeight,
         governing: { id: g.id, ratio: g.ratio },
-        ...(tapered && shape.family === 'W' ? { tipDepth: outcome.result.member.section.tipDepth } : {}),
+        ...(outcome.result.member.section.kind === 'tapered-rolled'
+          ? { tipDepth: outcome.result.member.section.tipDepth }
+          : {}),
       });
     } else if (outcome.kind === 'result') {
       failing.push({
