@@ -5,12 +5,14 @@
 import { adminCreateCommand } from './admin-command';
 import { parseArgs } from './args';
 import { checkCommand, type CliIo } from './check-command';
+import { reportCommand } from './report-command';
 import { shapesCommand } from './shapes-command';
 
 export const HELP = `reachline: check a steel cantilever deck design from the command line
 
 Usage:
   reachline check <design.json | ->  [--stations]
+  reachline report <design.json | -> -o <out.pdf>
   reachline shapes [--json] [--family W|HSS|PIPE|C]
   reachline admin create --email <e-mail> [--name <display name>]  < password
   reachline --help
@@ -18,6 +20,9 @@ Usage:
 Commands:
   check <file>     Validate a design document (JSON, see the engine contract) and print the
                    result document as JSON on standard output. Use - to read standard input.
+  report <file>    Run the engine on a design document and write a preliminary calculation
+                   package (PDF: inputs, loads, diagrams, every check, the plate sketch and the
+                   schedule row), stamped PRELIMINARY, NOT FOR CONSTRUCTION on every page.
   shapes           List the shapes table shipped with Reachline and its source.
   admin create     Create an admin account in the configured database (DATABASE_URL); the
                    password is read from standard input (one line) and must be hard to guess.
@@ -25,6 +30,7 @@ Commands:
 Options:
   --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
                    along the member, per load case and per combination, in the result's units.
+  -o, --output <f> (report) where to write the PDF.
   --json           (shapes) print the whole table as one JSON object: the source and every shape
                    with its properties under the published database's column names.
   --family <name>  (shapes) only one family: W, HSS, PIPE or C.
@@ -67,6 +73,15 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
     if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
     if (a.positionals.length !== 1) return usage(io, 'check needs one design file (or - for standard input)');
     return checkCommand(a.positionals[0], a.flags.has('--stations'), io);
+  }
+  if (command === 'report') {
+    const a = parseArgs(rest, ['--help', '-h'], ['-o', '--output']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
+    const out = a.values.get('-o') ?? a.values.get('--output');
+    if (a.positionals.length !== 1 || !out)
+      return usage(io, 'report needs one design file (or - for standard input) and -o <out.pdf>');
+    return reportCommand(a.positionals[0], out, io);
   }
   if (command === 'shapes') {
     const a = parseArgs(rest, ['--json', '--help', '-h'], ['--family']);
