@@ -154,3 +154,39 @@ export async function insertReview(
     created_at: nowIso(),
   });
 }
+
+export interface ApprovedRevision {
+  revision: RevisionRow;
+  approvedBy: string;
+  approvedAt: string;
+}
+
+/**
+ * The latest approved revision of each cantilever. An approved revision stays approved (no review
+ * may follow an approval), so an 'approved' review row is enough.
+ */
+export async function latestApprovedRevisions(
+  db: Db,
+  cantileverIds: readonly number[],
+): Promise<Map<number, ApprovedRevision>> {
+  const out = new Map<number, ApprovedRevision>();
+  if (cantileverIds.length === 0) return out;
+  const rows = (await db('reviews as v')
+    .join('revisions as r', 'r.id', 'v.revision_id')
+    .join('users as u', 'u.id', 'v.reviewer_id')
+    .where('v.state', 'approved')
+    .whereIn('r.cantilever_id', [...cantileverIds])
+    .orderBy('r.number')
+    .select('r.*', 'u.display_name as approver_name', 'v.created_at as approved_at')) as (RevisionRow & {
+    approver_name: string;
+    approved_at: string;
+  })[];
+  for (const { approver_name, approved_at, ...revision } of rows) {
+    out.set(revision.cantilever_id, {
+      revision,
+      approvedBy: approver_name,
+      approvedAt: toIso(approved_at),
+    });
+  }
+  return out;
+}
