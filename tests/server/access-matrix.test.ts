@@ -175,6 +175,19 @@ const POLICY: Record<string, Policy> = {
     expect: anyMember,
     target: (e) => ({ path: `/api/cantilevers/${e.cantileverId}` }),
   },
+  // The number of beams (plate schedule quantity): design roles of the project.
+  'PATCH /cantilevers/:cantileverId': {
+    expect: members(...DESIGN),
+    target: (e) => ({ path: `/api/cantilevers/${e.cantileverId}`, body: { quantity: 2 } }),
+  },
+  'GET /cantilevers/:cantileverId/plate-schedule.csv': {
+    expect: anyMember,
+    target: (e) => ({ path: `/api/cantilevers/${e.cantileverId}/plate-schedule.csv` }),
+  },
+  'GET /revisions/:revisionId/package.pdf': {
+    expect: anyMember,
+    target: (e) => ({ path: `/api/revisions/${e.revisionId}/package.pdf` }),
+  },
   'GET /revisions/:revisionId/comments': {
     expect: anyMember,
     target: (e) => ({ path: `/api/revisions/${e.revisionId}/comments` }),
