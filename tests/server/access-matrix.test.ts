@@ -373,7 +373,8 @@ describe('route x role x membership', () => {
     expect({ missing, stale }).toEqual({ missing: [], stale: [] });
   });
 
-  it('answers every cell as the policy says', async () => {
+  // About 370 requests, some creating revisions: minutes on a loaded 2-core machine.
+  it('answers every cell as the policy says', { timeout: 300_000 }, async () => {
     const mismatches: string[] = [];
     let cells = 0;
     for (const route of routes) {
