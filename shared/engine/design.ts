@@ -17,6 +17,8 @@ import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
 import { allowableCombinations, serviceCombinations, strengthCombinations } from './member/combinations';
 import { firstFrequency } from './member/frequency';
+import { rootStiffness } from './connection/root-stiffness';
+import type { LoadCase } from '../schemas/member';
 import { caseSummaries, combinationSummaries, directionOf, stationArrays } from './member-summary';
 import { resolveSection } from './sections/resolve-section';
 import type { MemberSection } from './sections/section-types';
@@ -86,22 +88,54 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   const signed = combos.some((c) => c.factors.W !== undefined || (c.factors.D ?? 0) < 0);
   const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos, signed, lateral };
 
-  const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight));
-  const tipByCase = Object.fromEntries(model.cases.map((c) => [c.case, c.response.tip]));
-  const checks: Check[] = [
-    ...flexureChecks(ctx),
-    shearCheck(ctx),
-    ...deflectionChecks({
-      tipByCase,
-      service: serviceCombinations(present),
-      L,
-      limits: input.deflectionLimits,
-      units,
-    }),
-  ];
+  // A flexible root (connection.flexibleRoot, default true with a connection): the root rotates by
+  // (M + V x offset) x flexibility (connection/root-stiffness.ts); cases stay the member's own bending.
+  const flexible = input.connection ? (input.connection.flexibleRoot ?? true) : false;
+  const spring =
+    flexible && input.connection ? rootStiffness(input.connection, rootFootprint(section), shapes, E) : null;
+  const root = spring?.ok ? spring : undefined;
+  const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight), root);
+  const memberTip = Object.fromEntries(model.cases.map((c) => [c.case, c.response.tip]));
+  const rotationByCase: Partial<Record<LoadCase, number>> = {};
+  for (const c of model.cases) {
+    rotationByCase[c.case] = root ? (c.response.M[0] + c.response.V[0] * root.offset) * root.flexibility : 0;
+  }
+  const tipByCase = Object.fromEntries(
+    model.cases.map((c) => [c.case, c.response.tip + (rotationByCase[c.case] ?? 0) * L]),
+  );
+  const service = serviceCombinations(present);
+  const deflection = deflectionChecks({ tipByCase, service, L, limits: input.deflectionLimits, units });
   const fMin = input.frequencyMin ? toInternal(input.frequencyMin, 'frequency') : undefined;
   const vibration = vibrationCheck(frequency, fMin, units);
-  if (vibration) checks.push(vibration);
+  const serviceRows = vibration ? [...deflection, vibration] : deflection;
+  if (spring && !spring.ok) {
+    // The root's rotation could not be computed: the serviceability rows are not passed.
+    for (const row of serviceRows) {
+      row.ratio = null;
+      row.ok = false;
+      row.note = `not computed: the root rotation of the connection could not be modelled (${spring.reason}); fix the connection or set connection.flexibleRoot to false`;
+    }
+  }
+  const checks: Check[] = [...flexureChecks(ctx), shearCheck(ctx), ...serviceRows];
+  let parts: { member: number; connection: number; rotation: number } | null = null;
+  if (root) {
+    const total = deflection.find((c) => c.id === 'member.deflection.total');
+    const governing = service.find((s) => s.name === total?.combination);
+    if (governing) {
+      parts = { member: 0, connection: 0, rotation: 0 };
+      for (const [c, f] of Object.entries(governing.factors) as [LoadCase, number][]) {
+        parts.member += f * (memberTip[c] ?? 0);
+        parts.rotation += f * (rotationByCase[c] ?? 0);
+      }
+      parts.connection = parts.rotation * L;
+    }
+    for (const row of deflection) {
+      row.note = `${row.note ?? ''}; includes the root's rotation with the connection (flexibleRoot)`.replace(
+        /^; /,
+        '',
+      );
+    }
+  }
 
   let connection: DesignResult['connection'] = null;
   if (input.connection) {
@@ -145,6 +179,17 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     connection,
     checks,
   };
+  if (parts) {
+    result.member.tipDeflectionParts = {
+      member: quantity(parts.member, 'smallLength', units),
+      connection: quantity(parts.connection, 'smallLength', units),
+    };
+    if (connection) connection.rootRotation = { value: parts.rotation, unit: 'rad' };
+  }
+  if (connection && root) {
+    const S = quantity(root.S, 'moment', units);
+    connection.rootStiffness = { value: S.value, unit: `${S.unit}/rad` };
+  }
   if (options.stations) result.stations = stationArrays(model, section, combos, units);
   assertFinite(result);
   return result;

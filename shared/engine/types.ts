@@ -87,6 +87,8 @@ export interface MemberResult {
   cases: Partial<Record<LoadCase, EffectSummary>>;
   combinations: CombinationSummary[];
   frequency: Quantity;
+  /** Under the service combination that governs member.deflection.total: the member's bending and the root's rotation x length. */
+  tipDeflectionParts?: { member: Quantity; connection: Quantity };
 }
 
 export interface ConnectionResult {
