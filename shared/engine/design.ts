@@ -8,6 +8,7 @@ import { checkConnection } from './connection/check-connection';
 import { deflectionChecks } from './checks/deflection-check';
 import { flexureChecks } from './checks/flexure-check';
 import { readLateralSupport } from './checks/lateral-support';
+import { flangeWebWeldCheck } from './checks/flange-web-weld';
 import { shearCheck } from './checks/shear-check';
 import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
@@ -117,6 +118,10 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     }
   }
   const checks: Check[] = [...flexureChecks(ctx), shearCheck(ctx), ...serviceRows];
+  // With welds asked for (connection.weld), a built-up or cut tapered I also gets its flange-to-web
+  // welds designed; older documents keep their list of checks.
+  const flangeWeb = input.connection?.weld ? flangeWebWeldCheck(ctx, input.connection.weld.electrode) : null;
+  if (flangeWeb) checks.push(flangeWeb);
   let parts: { member: number; connection: number; rotation: number } | null = null;
   if (root) {
     const total = deflection.find((c) => c.id === 'member.deflection.total');
@@ -217,5 +222,5 @@ function massLoads(
 
 function rootFootprint(section: MemberSection): RootFootprint {
   const r = section.root;
-  return { label: section.label, family: section.family, d: r.d, bf: r.bf, tf: r.tf };
+  return { label: section.label, family: section.family, d: r.d, bf: r.bf, tf: r.tf, tw: r.tw };
 }

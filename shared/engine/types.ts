@@ -138,6 +138,8 @@ export interface RootFootprint {
   /** Width along B. */
   bf: number;
   tf: number;
+  /** Web thickness (or wall), in, when known. */
+  tw?: number;
 }
 
 /** A problem in a document that the schema alone cannot see (an unknown shape, a point load past the tip). */

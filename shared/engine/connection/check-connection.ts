@@ -9,7 +9,7 @@ import type { Check, ConnectionResult, Method, RootDemand, RootFootprint } from 
 import type { ShapeLookup } from '../shapes/types';
 import type { UnitSystem } from '../units';
 import { availableBearingStress, confinementFactor } from './bearing';
-import { governing, toCheck, type CheckSpec, type Evaluation } from './check-row';
+import { governing, notComputed, toCheck, type CheckSpec, type Evaluation } from './check-row';
 import { analyseCombination } from './combo-state';
 import { readGeometry } from './connection-geometry';
 import { buildConnectionResult } from './connection-result';
@@ -24,6 +24,7 @@ import { PULLOUT, evaluatePullout, pulloutCapacity } from './check-pullout';
 import { SIDE_FACE_BLOWOUT, blowoutCapacity, evaluateSideFaceBlowout } from './check-side-face-blowout';
 import { STEEL_TENSION, evaluateSteelTension, steelTensionCapacity } from './check-steel-tension';
 import { POST_COMBINED, evaluatePost, postStrength } from './check-post';
+import { WELD_STRENGTH, evaluateWeld } from './check-weld';
 import { toInternal } from '../units';
 
 export interface ConnectionContext {
@@ -126,6 +127,21 @@ export function checkConnection(
     const rows = states.map((s) => ({ combination: s.combination, ev: evaluatePost(s.P, s.M, strength) }));
     const worst = governing(rows);
     if (worst) checks.push(toCheck(POST_COMBINED, worst.combination, worst.ev, units));
+  }
+  if (input.weld) {
+    const weld = {
+      size: toInternal(input.weld.size, 'length'),
+      electrode: input.weld.electrode ?? 'E70',
+      plateThickness: geo.t,
+    };
+    const rows = states.map((s) => ({
+      combination: s.combination,
+      ev: footprint
+        ? evaluateWeld(s.P, s.M, s.shear, footprint, weld, method, units)
+        : notComputed('forcePerLength', 'the section at the plate is unknown, so its weld cannot be checked'),
+    }));
+    const worst = governing(rows);
+    if (worst) checks.push(toCheck(WELD_STRENGTH, worst.combination, worst.ev, units));
   }
   const result = buildConnectionResult(states, geo, fpMax, sqrtA2A1, units);
   return { result, checks };
