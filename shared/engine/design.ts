@@ -13,7 +13,7 @@ import { shearCheck } from './checks/shear-check';
 import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
 import { assertFinite } from './finite-guard';
-import { inputProblems } from './input-limits';
+import { inputProblems, MAX_TAPER_SLOPE } from './input-limits';
 import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
 import { allowableCombinations, serviceCombinations, strengthCombinations } from './member/combinations';
@@ -59,6 +59,13 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   const Fy = member.steel?.Fy ? toInternal(member.steel.Fy, 'stress') : (section?.defaultFy ?? 50);
   const E = member.steel?.E ? toInternal(member.steel.E, 'stress') : E_STEEL;
   const problems = [...(Array.isArray(resolved) ? resolved : []), ...inputProblems(input, L, Fy, E)];
+  if (section && !section.prismatic && (section.root.d - section.tip.d) / L > MAX_TAPER_SLOPE * (1 + 1e-9)) {
+    // METHOD.md: beyond about 1:4 the plane-section assumption of the local-section checks weakens.
+    problems.push({
+      path: member.section.plates ? 'member.section.plates.tipDepth' : 'member.section.tipDepth',
+      message: `makes the taper steeper than 1:4 (the depth falls ${(section.root.d - section.tip.d).toFixed(2)} in over ${L.toFixed(0)} in); use a deeper tip or a longer member`,
+    });
+  }
   if (problems.length || !section) throw new DesignInputError(problems);
 
   const caseLoads = gatherCaseLoads(input.loads, section, L, toInternal(member.spacing, 'length'));
@@ -108,7 +115,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   const deflection = deflectionChecks({ tipByCase, service, L, limits: input.deflectionLimits, units });
   const fMin = input.frequencyMin ? toInternal(input.frequencyMin, 'frequency') : undefined;
   const vibration = vibrationCheck(frequency, fMin, units);
-  const serviceRows = vibration ? [...deflection, vibration] : deflection;
+  const serviceRows = [...deflection, vibration];
   if (spring && !spring.ok) {
     // The root's rotation could not be computed: the serviceability rows are not passed.
     for (const row of serviceRows) {
@@ -153,6 +160,27 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     }));
     const out = checkConnection(input.connection, demands, rootFootprint(section), { units, method, shapes });
     connection = out.result;
+    if (method === 'ASD') {
+      // ACI 318 ch. 17 is strength design: for an ASD design the rods and the concrete are checked on
+      // the ASCE 7 strength combinations with phi (a fixed divisor of phi Rn is not conservative for
+      // every combination, e.g. D + 0.75L + 0.75S against 1.2D + 1.6S + L when S = L and D is light).
+      const strength = strengthCombinations(present, seismic).map((c) => {
+        const r = combine(model, c.factors, false);
+        return { combination: c.name, M: r.M[0], V: r.V[0], H: 0, direction: directionOf(r) };
+      });
+      const lrfd = checkConnection(input.connection, strength, rootFootprint(section), {
+        units,
+        method: 'LRFD',
+        shapes,
+      });
+      const byId = new Map(lrfd.checks.map((c) => [c.id, c]));
+      out.checks = out.checks.map((c) => {
+        const s = byId.get(c.id);
+        if (!c.id.startsWith('anchors.') || c.id === 'anchors.layout' || !s) return c;
+        const why = 'ACI 318 is strength design: checked on the ASCE 7 strength combinations (LRFD)';
+        return { ...s, note: s.note ? `${s.note} ${why}.` : `${why}.` };
+      });
+    }
     checks.push(...out.checks);
   }
 
