@@ -223,7 +223,8 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     const S = quantity(root.S, 'moment', units);
     connection.rootStiffness = { value: S.value, unit: `${S.unit}/rad` };
   }
-  if (options.stations) result.stations = stationArrays(model, section, combos, units);
+  if (options.stations)
+    result.stations = stationArrays(model, section, combos, units, root ? rotationByCase : {});
   assertFinite(result);
   return result;
 }
