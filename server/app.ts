@@ -15,6 +15,7 @@ import { attachmentsRouter } from './features/attachments/attachments.router';
 import { authRouter } from './features/auth/auth.router';
 import { checkRouter } from './features/check/check.router';
 import { commentsRouter } from './features/comments/comments.router';
+import { packageRouter } from './features/package/package.router';
 import { plateScheduleRouter } from './features/plate-schedule/plate-schedule.router';
 import { projectsRouter } from './features/projects/projects.router';
 import { revisionsRouter } from './features/revisions/revisions.router';
@@ -26,10 +27,13 @@ import { hostCheck } from './middleware/host-check';
 import { passwordChangeGate } from './middleware/password-change';
 import { sameOrigin } from './middleware/same-origin';
 import { serveClient } from './static-client';
+import { createStorage, type Storage } from './storage/storage';
 
 export interface AppDeps {
   db: Knex;
   mail: MailKick;
+  /** Default: the storage the configuration names (createStorage). */
+  storage?: Storage;
 }
 
 export type ReachlineApp = Express & { closeApp(): void };
@@ -43,7 +47,8 @@ const authGate: RequestHandler = (req, res, next) => {
 };
 
 export function createApp(config: Config, deps: AppDeps): ReachlineApp {
-  const ctx: AppContext = { config, db: deps.db, mail: deps.mail };
+  const storage = deps.storage ?? createStorage(config);
+  const ctx: AppContext = { config, db: deps.db, mail: deps.mail, storage };
   const app = express() as ReachlineApp;
   app.disable('x-powered-by');
   // Only the configured proxies' X-Forwarded-For is believed (a hop count or their addresses).
@@ -117,6 +122,7 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   api.use(projectsRouter(ctx));
   api.use(commentsRouter(ctx));
   api.use(plateScheduleRouter(ctx));
+  api.use(packageRouter(ctx));
   api.use(revisionsRouter(ctx));
   api.use(attachmentsRouter(ctx));
   api.use(shapesRouter(ctx));

@@ -59,7 +59,9 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   return result.ok ? 0 : 1;
 }
 
+/** One line per problem, whatever the message holds (a file's own text may carry line breaks). */
 function invalid(io: CliIo, issues: readonly FieldIssue[]): number {
-  for (const i of issues) io.err(`${i.path}: ${i.message}\n`);
+  const oneLine = (t: string) => t.replace(/\s*[\r\n]+\s*/g, ' ');
+  for (const i of issues) io.err(`${oneLine(i.path || '(document)')}: ${oneLine(i.message)}\n`);
   return 2;
 }

@@ -6,6 +6,7 @@ import { adminCreateCommand } from './admin-command';
 import { parseArgs } from './args';
 import { checkCommand, type CliIo } from './check-command';
 import { lightestCommand } from './lightest-command';
+import { reportCommand } from './report-command';
 import { shapesCommand } from './shapes-command';
 
 export const HELP = `reachline: check a steel cantilever deck design from the command line
@@ -13,6 +14,7 @@ export const HELP = `reachline: check a steel cantilever deck design from the co
 Usage:
   reachline check <design.json | ->  [--stations]
   reachline lightest <design.json | ->  [--families W,HSS,PIPE,C]
+  reachline report <design.json | -> -o <out.pdf>
   reachline shapes [--json] [--family W|HSS|PIPE|C]
   reachline admin create --email <e-mail> [--name <display name>]  < password
   reachline --help
@@ -27,6 +29,9 @@ Commands:
                    gets the shallowest tip depth that passes ("tipDepth", absent when only
                    the full depth passes). Exit 0 when at
                    least one shape passes, 1 when none does, 2 for invalid input.
+  report <file>    Run the engine on a design document and write a preliminary calculation
+                   package (PDF: inputs, loads, diagrams, every check, the plate sketch and the
+                   schedule row), stamped PRELIMINARY, NOT FOR CONSTRUCTION on every page.
   shapes           List the shapes table shipped with Reachline and its source.
   admin create     Create an admin account in the configured database (DATABASE_URL); the
                    password is read from standard input (one line) and must be hard to guess.
@@ -35,6 +40,7 @@ Options:
   --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
                    along the member, per load case and per combination, in the result's units.
   --families <list>  (lightest) families to try, comma-separated; default W,HSS,PIPE,C.
+  -o, --output <f> (report) where to write the PDF.
   --json           (shapes) print the whole table as one JSON object: the source and every shape
                    with its properties under the published database's column names.
   --family <name>  (shapes) only one family: W, HSS, PIPE or C.
@@ -85,6 +91,15 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
     if (a.positionals.length !== 1)
       return usage(io, 'lightest needs one design file (or - for standard input)');
     return lightestCommand(a.positionals[0], a.values.get('--families'), io);
+  }
+  if (command === 'report') {
+    const a = parseArgs(rest, ['--help', '-h'], ['-o', '--output']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
+    const out = a.values.get('-o') ?? a.values.get('--output');
+    if (a.positionals.length !== 1 || !out)
+      return usage(io, 'report needs one design file (or - for standard input) and -o <out.pdf>');
+    return reportCommand(a.positionals[0], out, io);
   }
   if (command === 'shapes') {
     const a = parseArgs(rest, ['--json', '--help', '-h'], ['--family']);

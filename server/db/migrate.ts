@@ -8,6 +8,8 @@ import * as projects from '../../migrations/20261202010100_projects';
 import * as revisions from '../../migrations/20261202010200_revisions';
 import * as filesMailShapes from '../../migrations/20261202010300_files_mail_shapes';
 import * as security from '../../migrations/20261203020000_security';
+import * as outboxClaim from '../../migrations/20261203030000_outbox_claim';
+import * as cantileverQuantity from '../../migrations/20261203040000_cantilever_quantity';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -20,6 +22,8 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202010200_revisions': revisions,
   '20261202010300_files_mail_shapes': filesMailShapes,
   '20261203020000_security': security,
+  '20261203030000_outbox_claim': outboxClaim,
+  '20261203040000_cantilever_quantity': cantileverQuantity,
 };
 
 const migrationSource: Knex.MigrationSource<string> = {

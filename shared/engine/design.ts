@@ -6,7 +6,8 @@
 import type { DesignInput } from '../schemas/design';
 import { checkConnection } from './connection/check-connection';
 import { deflectionChecks } from './checks/deflection-check';
-import { flexureCheck } from './checks/flexure-check';
+import { flexureChecks } from './checks/flexure-check';
+import { readLateralSupport } from './checks/lateral-support';
 import { shearCheck } from './checks/shear-check';
 import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
@@ -14,9 +15,9 @@ import { assertFinite } from './finite-guard';
 import { inputProblems } from './input-limits';
 import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
-import { allowableCombinations, strengthCombinations } from './member/combinations';
+import { allowableCombinations, serviceCombinations, strengthCombinations } from './member/combinations';
 import { firstFrequency } from './member/frequency';
-import { caseSummaries, combinationSummaries, stationArrays } from './member-summary';
+import { caseSummaries, combinationSummaries, directionOf, stationArrays } from './member-summary';
 import { resolveSection } from './sections/resolve-section';
 import type { MemberSection } from './sections/section-types';
 import { E_STEEL, STEEL_DENSITY } from './sections/steel-grades';
@@ -63,25 +64,36 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       { path: 'loads', message: 'there is no load to check: turn on self-weight or add a load' },
     ]);
   }
-  const model = analyseMember(section, L, E, caseLoads, options.intervals ?? DEFAULT_INTERVALS);
-  const present = new Set(caseLoads.map((c) => c.case));
-  const combos = (method === 'LRFD' ? strengthCombinations(present) : allowableCombinations(present)).map(
-    (c) => ({
-      name: c.name,
-      response: combine(model, c.factors, options.stations === true),
-    }),
+  const lateral = readLateralSupport(member);
+  const model = analyseMember(
+    section,
+    L,
+    E,
+    caseLoads,
+    options.intervals ?? DEFAULT_INTERVALS,
+    lateral.braces,
   );
+  const present = new Set(caseLoads.map((c) => c.case));
+  const seismic = input.loads.seismic;
+  const list =
+    method === 'LRFD' ? strengthCombinations(present, seismic) : allowableCombinations(present, seismic);
+  const combos = list.map((c) => ({
+    name: c.name,
+    factors: c.factors,
+    response: combine(model, c.factors, options.stations === true),
+  }));
   const Lb = member.unbracedLength ? toInternal(member.unbracedLength, 'length') : L;
-  const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos };
+  const signed = combos.some((c) => c.factors.W !== undefined || (c.factors.D ?? 0) < 0);
+  const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos, signed, lateral };
 
   const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight));
   const tipByCase = Object.fromEntries(model.cases.map((c) => [c.case, c.response.tip]));
   const checks: Check[] = [
-    flexureCheck(ctx),
+    ...flexureChecks(ctx),
     shearCheck(ctx),
     ...deflectionChecks({
       tipByCase,
-      service: allowableCombinations(present),
+      service: serviceCombinations(present),
       L,
       limits: input.deflectionLimits,
       units,
@@ -98,6 +110,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       M: c.response.M[0],
       V: c.response.V[0],
       H: 0,
+      direction: directionOf(c.response),
     }));
     const out = checkConnection(input.connection, demands, rootFootprint(section), { units, method, shapes });
     connection = out.result;

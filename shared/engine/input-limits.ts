@@ -41,6 +41,34 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
       message: `must not exceed the member length (${member.length}), got "${member.unbracedLength}"`,
     });
   }
+  const ls = member.lateralSupport;
+  if (ls && member.unbracedLength) {
+    problems.push({
+      path: 'member.unbracedLength',
+      message: 'give the braces in member.lateralSupport.braces instead of unbracedLength, not both',
+    });
+  }
+  (ls?.braces ?? []).forEach((b, i) => {
+    if (toInternal(b, 'length') >= L * (1 - 1e-9)) {
+      problems.push({
+        path: `member.lateralSupport.braces[${i}]`,
+        message: `must lie between the root and the tip (length ${member.length}), got "${b}"`,
+      });
+    }
+  });
+  const conn = input.connection;
+  if (conn?.post && conn.arrangement !== 'post-base') {
+    problems.push({
+      path: 'connection.post',
+      message: 'applies to a post base only (arrangement "post-base")',
+    });
+  } else if (conn?.post && !conn.footprint) {
+    problems.push({
+      path: 'connection.footprint',
+      message:
+        'name the post\'s section (e.g. { "shape": "HSS8X8X1/2" }) to check the post of height connection.post.height',
+    });
+  }
   if (!(Fy >= 20 && Fy <= 100)) {
     problems.push({
       path: 'member.steel.Fy',

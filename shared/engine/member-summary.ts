@@ -9,10 +9,11 @@ import type { MemberSection } from './sections/section-types';
 import type { EffectSummary, Stations, StationSeries } from './types';
 import { displayFactor, quantity, RESULT_UNITS, type UnitSystem } from './units';
 
+/** Root moment and shear as magnitudes (the direction says which way); tip deflection signed, down +. */
 function summary(r: Response, units: UnitSystem): EffectSummary {
   return {
-    rootMoment: quantity(r.M[0], 'moment', units),
-    rootShear: quantity(r.V[0], 'force', units),
+    rootMoment: quantity(Math.abs(r.M[0]), 'moment', units),
+    rootShear: quantity(Math.abs(r.V[0]), 'force', units),
     tipDeflection: quantity(r.tip, 'smallLength', units),
   };
 }
@@ -27,7 +28,16 @@ export function caseSummaries(
 }
 
 export function combinationSummaries(combos: readonly CombinationResponse[], units: UnitSystem) {
-  return combos.map((c) => ({ name: c.name, ...summary(c.response, units) }));
+  return combos.map((c) => ({
+    name: c.name,
+    direction: directionOf(c.response),
+    ...summary(c.response, units),
+  }));
+}
+
+/** "up" when the root moment is sagging (net load lifts the tip), else "down". */
+export function directionOf(r: Response): 'down' | 'up' {
+  return r.M[0] < 0 ? 'up' : 'down';
 }
 
 function series(name: string, r: Response, units: UnitSystem): StationSeries {

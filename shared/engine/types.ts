@@ -36,6 +36,8 @@ export interface Check {
   at?: Quantity;
   /** Plain words when something is off, and a suggestion. */
   note?: string;
+  /** member.flexure(.uplift): the effective length of the governing unbraced segment. */
+  effectiveLength?: Quantity;
 }
 
 /** Root demand and tip deflection for one case or one combination. */
@@ -47,6 +49,8 @@ export interface EffectSummary {
 
 export interface CombinationSummary extends EffectSummary {
   name: string;
+  /** The sense of the root moment: "up" when net load lifts the tip (top flange in compression). */
+  direction: 'down' | 'up';
 }
 
 /** Station arrays for the charts and `reachline check --stations` (display units). */
@@ -119,6 +123,8 @@ export interface RootDemand {
   V: number;
   /** Horizontal force at the root, kip (zero under gravity loads alone). */
   H: number;
+  /** The sense of the root moment (the rows of rods swap roles under "up"). */
+  direction?: 'down' | 'up';
 }
 
 /** The member's section at the root, as the default footprint on the plate (internal units, in). */

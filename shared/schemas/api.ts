@@ -98,8 +98,26 @@ export interface CantileverDto {
   reviewState: ReviewState | null;
   ok: boolean | null;
   updatedAt: string;
+  /** How many identical beams this cantilever stands for (the plate schedule's quantity). */
+  quantity: number;
+  /** The latest approved revision, which the shop builds from; null when none is approved. */
+  latestApproved: {
+    revisionId: number;
+    number: number;
+    approvedBy: string;
+    approvedAt: string;
+  } | null;
 }
+const quantitySchema = z
+  .number({ error: 'must be a whole number of beams' })
+  .int('must be a whole number of beams')
+  .min(1, 'must be at least 1')
+  .max(999, 'is too large (999 at most)');
+export const updateCantileverSchema = z.object({ quantity: quantitySchema });
+export type UpdateCantileverRequest = z.output<typeof updateCantileverSchema>;
 export const createCantileverSchema = z.object({
+  /** Number of identical beams; default 1. */
+  quantity: quantitySchema.default(1),
   name: z.string().trim().min(1, 'is required').max(120, 'is too long (120 characters at most)'),
   description: z.string().trim().max(500, 'is too long (500 characters at most)').default(''),
   /** Optional first design; saved as revision 1 with the message "First design". */

@@ -15,6 +15,8 @@ const cantilever: CantileverDto = {
   reviewState: 'draft',
   ok: false,
   updatedAt: '2026-11-03T10:00:00.000Z',
+  quantity: 1,
+  latestApproved: null,
 };
 
 function summary(id: number, number: number, extra: Partial<RevisionSummaryDto>): RevisionSummaryDto {

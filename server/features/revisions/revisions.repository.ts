@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import type { ReviewDto, ReviewState, RevisionDto, RevisionSummaryDto } from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
-import { nowIso, toBool, toIso } from '../../db/knex';
+import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
 import type { RevisionRow } from '../projects/project-access';
 
 type Db = Knex | Knex.Transaction;
@@ -99,6 +99,15 @@ export async function getRevisionDto(db: Db, revisionId: number): Promise<Revisi
   };
 }
 
+/**
+ * Locks the cantilever row until the transaction ends (SELECT … FOR UPDATE on PostgreSQL), so
+ * saves and reviews of one cantilever on several instances go one at a time. SQLite's single
+ * writer already serialises them.
+ */
+export async function lockCantilever(trx: Knex.Transaction, cantileverId: number): Promise<void> {
+  if (isPostgres(trx)) await trx('cantilevers').where({ id: cantileverId }).forUpdate().first('id');
+}
+
 export async function latestRevision(db: Db, cantileverId: number): Promise<RevisionRow | undefined> {
   return db<RevisionRow>('revisions')
     .where({ cantilever_id: cantileverId })
@@ -153,4 +162,40 @@ export async function insertReview(
     comment: r.comment,
     created_at: nowIso(),
   });
+}
+
+export interface ApprovedRevision {
+  revision: RevisionRow;
+  approvedBy: string;
+  approvedAt: string;
+}
+
+/**
+ * The latest approved revision of each cantilever. An approved revision stays approved (no review
+ * may follow an approval), so an 'approved' review row is enough.
+ */
+export async function latestApprovedRevisions(
+  db: Db,
+  cantileverIds: readonly number[],
+): Promise<Map<number, ApprovedRevision>> {
+  const out = new Map<number, ApprovedRevision>();
+  if (cantileverIds.length === 0) return out;
+  const rows = (await db('reviews as v')
+    .join('revisions as r', 'r.id', 'v.revision_id')
+    .join('users as u', 'u.id', 'v.reviewer_id')
+    .where('v.state', 'approved')
+    .whereIn('r.cantilever_id', [...cantileverIds])
+    .orderBy('r.number')
+    .select('r.*', 'u.display_name as approver_name', 'v.created_at as approved_at')) as (RevisionRow & {
+    approver_name: string;
+    approved_at: string;
+  })[];
+  for (const { approver_name, approved_at, ...revision } of rows) {
+    out.set(revision.cantilever_id, {
+      revision,
+      approvedBy: approver_name,
+      approvedAt: toIso(approved_at),
+    });
+  }
+  return out;
 }

@@ -23,6 +23,8 @@ import { PLATE_THICKNESS, evaluatePlateThickness } from './check-plate-thickness
 import { PULLOUT, evaluatePullout, pulloutCapacity } from './check-pullout';
 import { SIDE_FACE_BLOWOUT, blowoutCapacity, evaluateSideFaceBlowout } from './check-side-face-blowout';
 import { STEEL_TENSION, evaluateSteelTension, steelTensionCapacity } from './check-steel-tension';
+import { POST_COMBINED, evaluatePost, postStrength } from './check-post';
+import { toInternal } from '../units';
 
 export interface ConnectionContext {
   units: UnitSystem;
@@ -80,7 +82,10 @@ export function checkConnection(
   const blowout = blowoutCapacity(geo, method);
   const rodShear = rodShearCapacity(geo, method);
 
-  const states = demands.map((d) => analyseCombination(d, geo, footprint, fpMax, method));
+  // A post base with its own post section: the beam's support face is the post's face, so the plate
+  // gets M + V x (post depth / 2) (ENGINE-CONTRACT Version 2). Without a footprint it gets M.
+  const offset = geo.arrangement === 'post-base' && input.footprint && footprint ? footprint.d / 2 : 0;
+  const states = demands.map((d) => analyseCombination(d, geo, footprint, fpMax, method, offset));
   // One evaluation per check (in PER_COMBINATION order) per combination; blowout may be absent.
   const table = states.map((s) => {
     const shear = evaluateAnchorShear(s, rodShear, geo, method);
@@ -110,5 +115,18 @@ export function checkConnection(
     const worst = governing(rows);
     if (worst) checks.push(toCheck(PER_COMBINATION[i], worst.combination, worst.ev, units));
   }
-  return { result: buildConnectionResult(states, geo, fpMax, sqrtA2A1, units), checks };
+  if (input.post && geo.arrangement === 'post-base' && input.footprint) {
+    const shape = ctx.shapes(input.footprint.shape);
+    const strength = shape
+      ? postStrength(shape, toInternal(input.post.height, 'length'), method)
+      : ({
+          ok: false,
+          reason: `the post section "${input.footprint.shape}" is not in the shapes table`,
+        } as const);
+    const rows = states.map((s) => ({ combination: s.combination, ev: evaluatePost(s.P, s.M, strength) }));
+    const worst = governing(rows);
+    if (worst) checks.push(toCheck(POST_COMBINED, worst.combination, worst.ev, units));
+  }
+  const result = buildConnectionResult(states, geo, fpMax, sqrtA2A1, units);
+  return { result, checks };
 }

@@ -37,6 +37,19 @@ function dropNonFinite(result: ConnectionResult): void {
   }
 }
 
+/**
+ * Which row of rods the moment pulls. Hogging (gravity) lifts the back of a post-base plate and the
+ * top of a face plate; uplift reverses both. Plate and rows are symmetric about the plate centre, so
+ * the same equations hold with the rows' roles swapped.
+ */
+export function tensionRowWords(
+  arrangement: ConnectionGeometry['arrangement'],
+  direction: 'down' | 'up',
+): string {
+  if (arrangement === 'face-plate') return direction === 'up' ? 'bottom row' : 'top row';
+  return direction === 'up' ? 'row on the tip side' : 'row away from the tip';
+}
+
 export function buildConnectionResult(
   states: readonly ComboState[],
   geo: ConnectionGeometry,
@@ -52,6 +65,10 @@ export function buildConnectionResult(
   const result: ConnectionResult = {
     arrangement: geo.arrangement,
     combination: s.combination,
+    direction: s.direction,
+    tensionRow: tensionRowWords(geo.arrangement, s.direction),
+    directionsChecked: [...new Set(states.map((x) => x.direction))],
+    plateMoment: quantity(s.M, 'moment', units),
     bearingLength: len(b.Y ?? 0),
     bearingPressure: quantity(b.fp ?? 0, 'stress', units),
     anchorTensionPerRod: quantity(s.rodTension, 'force', units),
