@@ -75,19 +75,31 @@ export function dimensionWord(dimension: Dimension): string {
 
 export type ParseResult = { ok: true; value: number; unit: Unit } | { ok: false; message: string };
 
-const cache = new Map<string, ParseResult>();
+// One map per dimension, keyed by the text itself: a "dimension|text" key would be a new string to
+// build and hash on every call, and this runs for every quantity of every design (the reach study).
+const cache = new Map<Dimension, Map<string, ParseResult>>();
+let cached = 0;
 
 /**
  * Parses a quantity string and converts it to the internal unit of `dimension`.
  * A plain number, a unit of the wrong dimension or a non-finite value is refused.
  */
 export function parseQuantity(text: string, dimension: Dimension): ParseResult {
-  const key = `${dimension}|${text}`;
-  const hit = cache.get(key);
+  let byText = cache.get(dimension);
+  const hit = byText?.get(text);
   if (hit) return hit;
   const result = parseUncached(text, dimension);
-  if (cache.size > 5000) cache.clear();
-  cache.set(key, result);
+  if (cached > 5000) {
+    cache.clear();
+    cached = 0;
+    byText = undefined;
+  }
+  if (!byText) {
+    byText = new Map();
+    cache.set(dimension, byText);
+  }
+  byText.set(text, result);
+  cached += 1;
   return result;
 }
 

@@ -77,11 +77,7 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
               {new Date(c.updatedAt).toLocaleString()}
             </td>
             <td className="py-2">
-              <Link
-                to={paths.study(c.id)}
-                className="text-xs text-oxide-700 underline"
-                aria-label={`Reach study of ${c.name}`}
-              >
+              <Link to={paths.study(c.id)} className="text-xs text-oxide-700 underline">
                 Reach study
               </Link>
             </td>

@@ -50,7 +50,10 @@ function ticks(spec: AxisSpec, values: (number | string)[]): { at: number; text:
     spec.key === 'section'
       ? [0, Math.floor((n - 1) / 2), n - 1]
       : [0, 0.2, 0.4, 0.6, 0.8, 1].map((f) => Math.round(f * (n - 1)));
-  return [...new Set(picks)].map((k) => ({ at: k, text: String(values[k]) }));
+  return [...new Set(picks)].map((k) => ({
+    at: k,
+    text: typeof values[k] === 'number' ? String(Number(values[k].toPrecision(3))) : String(values[k]),
+  }));
 }
 
 function path(line: [number, number][], cw: number, ch: number, ny: number): string {

@@ -1,5 +1,5 @@
 /**
- * The study a person sees first: length from half to 1.6 times the current reach, 40 points, against
+ * The study a person sees first: length from half to 2.5 times the current reach, 40 points, against
  * the tip depth from a third of the root depth to the full depth (a W shape) or the spacing from half
  * to one and a half times the current one (any other section).
  */
@@ -20,7 +20,7 @@ export function defaultSpec(doc: DesignDocument, shapes: ShapeLookup, steps = 40
   const length = {
     key: 'length' as const,
     from: round(toLen(lengthIn * 0.5), lenStep),
-    to: round(toLen(lengthIn * 1.6), lenStep),
+    to: round(toLen(Math.min(lengthIn * 2.5, 600)), lenStep),
     steps,
   };
   const shape = doc.member?.section?.shape ? shapes(doc.member.section.shape) : undefined;
