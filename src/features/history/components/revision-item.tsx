@@ -6,6 +6,7 @@ import { paths } from '../../../config/paths';
 import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { VerdictWord } from '../../../components/ui/verdict-word';
 import { CommentsThread } from '../../../components/comments-thread';
+import { PackageLink } from '../../../components/ui/package-link';
 import { formatDateTime } from '../../../lib/format';
 
 interface RevisionItemProps {
@@ -97,6 +98,13 @@ export function RevisionItem({
               Review record
             </Link>
           )}
+          <Link
+            to={paths.revision(revision.id)}
+            className="rounded border border-concrete-300 px-3 py-1 text-sm text-concrete-800 hover:bg-concrete-50"
+          >
+            Open revision {revision.number}
+          </Link>
+          <PackageLink revisionId={revision.id} number={revision.number} />
           <button
             type="button"
             aria-expanded={showComments}
