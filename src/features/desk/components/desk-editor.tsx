@@ -22,6 +22,7 @@ import { DeskInputs, IssueSummary } from './desk-inputs';
 import { DeskResults } from './desk-results';
 import { PlateScheduleLink } from './plate-schedule-link';
 import { PackageLink } from '../../../components/ui/package-link';
+import { SubmitForReview } from '../../../components/submit-for-review';
 import { DeskSave } from './desk-save';
 import { EngineIssuesContext } from './field-context';
 import { DeskSide } from './desk-side';
@@ -162,6 +163,17 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
               />
             </form>
             <div className="flex min-w-0 flex-col gap-3">
+              {baseRevision &&
+              !isDirty &&
+              (rights.member || rights.connection) &&
+              (baseRevision.id !== revision?.id || revision.reviewState === 'draft') ? (
+                <SubmitForReview
+                  key={baseRevision.id}
+                  cantileverId={cantilever.id}
+                  revisionId={baseRevision.id}
+                  number={baseRevision.number}
+                />
+              ) : null}
               <DeskResults live={live} doc={live.doc} schedule={schedule} />
               <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>
