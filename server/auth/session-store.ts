@@ -18,6 +18,8 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
       cleanupInterval: 10 * 60 * 1000,
       onDbCleanupError: (err) => console.warn('session cleanup failed:', err),
     });
+    // The table check at construction fails when the database closes first; every call re-awaits it.
+    this.ready.catch(() => undefined);
   }
 
   override set(sid: string, session: SessionData, callback?: Callback): Promise<void> {
