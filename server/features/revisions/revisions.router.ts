@@ -8,7 +8,7 @@ import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
 import {
   awaitingReview,
-  getRevision,
+  getRevisionJson,
   listRevisions,
   reviewRevision,
   saveRevisionForMember,
@@ -47,7 +47,7 @@ export function revisionsRouter(ctx: AppContext): Router {
   router.get(
     '/revisions/:revisionId',
     typedRoute({ params: revisionParams }, async ({ params }, req, res) => {
-      res.json(await getRevision(ctx, currentUser(req), params.revisionId));
+      res.type('application/json').send(await getRevisionJson(ctx, currentUser(req), params.revisionId));
     }),
   );
 

@@ -29,6 +29,7 @@ import {
   insertRevision,
   latestRevision,
   lockCantilever,
+  memberRevisionJson,
   listRevisionSummaries,
   listSubmittedFor,
   reviewStates,
@@ -105,6 +106,17 @@ export async function listRevisions(
 ): Promise<RevisionSummaryDto[]> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
   return listRevisionSummaries(ctx.db, cantileverId);
+}
+
+/** GET /revisions/:id: the RevisionDto as JSON text (see memberRevisionJson); 404 for a non-member. */
+export async function getRevisionJson(
+  ctx: AppContext,
+  user: Express.User,
+  revisionId: number,
+): Promise<string> {
+  const json = await memberRevisionJson(ctx.db, revisionId, user.id);
+  if (json === undefined) throw notFound('revision');
+  return json;
 }
 
 export async function getRevision(
