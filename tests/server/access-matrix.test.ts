@@ -239,6 +239,8 @@ const POLICY: Record<string, Policy> = {
       body: { decision: 'request-changes', comment: 'matrix' },
     }),
   },
+  // Anyone signed in: an engineer's own queue (empty for the other roles and outside projects).
+  'GET /reviews/awaiting': { expect: signedIn, target: () => ({ path: '/api/reviews/awaiting' }) },
   'GET /cantilevers/:cantileverId/attachments': {
     expect: anyMember,
     target: (e) => ({ path: `/api/cantilevers/${e.cantileverId}/attachments` }),
