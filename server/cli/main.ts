@@ -18,6 +18,11 @@ Usage:
 Commands:
   check <file>     Validate a design document (JSON, see the engine contract) and print the
                    result document as JSON on standard output. Use - to read standard input.
+                   Standard error lists each combination with its direction ("down": gravity,
+                   bottom flange in compression; "up": net uplift from wind (case W, negative)
+                   or ASCE 7-16 12.4.4, top flange in compression) and the failing checks.
+                   Version 2 keys: loads.seismic, member.lateralSupport, connection.post,
+                   connection.weld, connection.flexibleRoot (default true with a connection).
   shapes           List the shapes table shipped with Reachline and its source.
   admin create     Create an admin account in the configured database (DATABASE_URL); the
                    password is read from standard input (one line) and must be hard to guess.
