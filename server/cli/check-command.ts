@@ -49,6 +49,8 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   if (!outcome.ok) return invalid(io, outcome.issues);
   const { result } = outcome;
   io.out(`${JSON.stringify(result, null, 2)}\n`);
+  // Which way each combination bends the root: "up" puts the top flange and the other row of rods to work.
+  io.err(`combinations: ${result.member.combinations.map((c) => `${c.name} (${c.direction})`).join('; ')}\n`);
   const failed = result.checks.filter((c) => !c.ok).map((c) => c.id);
   io.err(
     failed.length

@@ -24,6 +24,11 @@ Usage:
 Commands:
   check <file>     Validate a design document (JSON, see the engine contract) and print the
                    result document as JSON on standard output. Use - to read standard input.
+                   Standard error lists each combination with its direction ("down": gravity,
+                   bottom flange in compression; "up": net uplift from wind (case W, negative)
+                   or ASCE 7-16 12.4.4, top flange in compression) and the failing checks.
+                   Version 2 keys: loads.seismic, member.lateralSupport, connection.post,
+                   connection.weld, connection.flexibleRoot (default true with a connection).
   lightest <file>  Put every shape of the families into the design (same length, loads and
                    connection), run each as a full design and print JSON: "passing" ordered
                    by steel weight, lightest first, each with its governing check and ratio,

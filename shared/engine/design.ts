@@ -212,6 +212,13 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     connection,
     checks,
   };
+  // Camber for the full dead load, root rotation included, and none for live load (common practice,
+  // no source): the tip then sits level under dead load and moves down only under live load.
+  const deadTip = tipByCase.D ?? 0;
+  result.member.recommendedCamber = {
+    ...quantity(Math.max(0, deadTip), 'smallLength', units),
+    basis: 'the tip deflection under the dead load (100 % D, 0 % L; common practice, no source)',
+  };
   if (parts) {
     result.member.tipDeflectionParts = {
       member: quantity(parts.member, 'smallLength', units),

@@ -89,6 +89,8 @@ export interface MemberResult {
   frequency: Quantity;
   /** Under the service combination that governs member.deflection.total: the member's bending and the root's rotation x length. */
   tipDeflectionParts?: { member: Quantity; connection: Quantity };
+  /** Dead-load camber at the tip (the root's rotation included) and the rule used. */
+  recommendedCamber?: Quantity & { basis: string };
 }
 
 export interface ConnectionResult {

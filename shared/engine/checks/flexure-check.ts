@@ -210,6 +210,11 @@ function rowOf(ctx: CheckContext, id: string, w: SideWorst, namedSegments: boole
         ? `${s.limitState} governs (Cb = ${w.Cb.toFixed(1)}, unbraced bottom flange ${(w.segment.Le / 12).toFixed(2)} ft)`
         : `${s.limitState} governs`,
     );
+    if (w.segment.Le < model.L * (1 - 1e-9)) {
+      notes.push(
+        'unbracedLength is applied to the whole member; to check each segment between braces give member.lateralSupport.braces',
+      );
+    }
   } else {
     const seg = w.segment.label;
     notes.push(

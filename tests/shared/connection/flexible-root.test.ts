@@ -108,6 +108,14 @@ describe('deflection and frequency with the root rotation', () => {
     expect(rel(parts.member.value, 0.1047)).toBeLessThan(2e-3);
     expect(rel(parts.connection.value, theta * 96)).toBeLessThan(1e-9);
     expect(rel(total.demand!.value, parts.member.value + parts.connection.value)).toBeLessThan(1e-12);
+    // Dead-load camber (common practice, no source: 100 % D): 0.0449 in + (M_D = 0.30 x 8^2 / 2 = 9.6 kip-ft
+    // = 115.2 kip-in) x c x 96 in.
+    expect(
+      rel(
+        r.member.recommendedCamber!.value,
+        r.member.cases.D!.tipDeflection.value + 115.2 * s.flexibility * 96,
+      ),
+    ).toBeLessThan(1e-9);
     // The cases stay the member's own bending (contract).
     expect(rel(r.member.cases.D!.tipDeflection.value, 0.0449)).toBeLessThan(3e-3);
   });

@@ -48,7 +48,10 @@ export const DeskResults = memo(function DeskResults({
             />
           </Panel>
           <Panel title="Check board">
-            <CheckBoard checks={result.checks} />
+            <CheckBoard
+              checks={result.checks}
+              directions={Object.fromEntries(result.member.combinations.map((c) => [c.name, c.direction]))}
+            />
           </Panel>
           <div className="grid gap-3 2xl:grid-cols-2">
             <Panel title="Member elevation">
