@@ -45,6 +45,12 @@ async function main(): Promise<number> {
     console.error('db:reset refuses to run with NODE_ENV=production.');
     return 1;
   }
+  if (/^postgres(ql)?:\/\//i.test(config.databaseUrl)) {
+    console.error(
+      'db:reset works on the local SQLite file only; on PostgreSQL drop and create the database with your own tools, then npm run db:seed.',
+    );
+    return 1;
+  }
   if (config.databaseUrl === ':memory:') {
     console.error('DATABASE_URL is :memory:, there is no database file to reset.');
     return 1;

@@ -27,11 +27,16 @@ import { hostCheck } from './middleware/host-check';
 import { passwordChangeGate } from './middleware/password-change';
 import { sameOrigin } from './middleware/same-origin';
 import { serveClient } from './static-client';
+import { healthRouter } from './features/health/health.router';
+import { createLogger, httpLogger } from './lib/logger';
+import type { Logger } from 'pino';
 import { createStorage, type Storage } from './storage/storage';
 
 export interface AppDeps {
   db: Knex;
   mail: MailKick;
+  /** Default: a JSON logger at config.logLevel (silent when unset, as in tests). */
+  logger?: Logger;
   /** Default: the storage the configuration names (createStorage). */
   storage?: Storage;
 }
@@ -51,6 +56,8 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   const ctx: AppContext = { config, db: deps.db, mail: deps.mail, storage };
   const app = express() as ReachlineApp;
   app.disable('x-powered-by');
+  const logger = deps.logger ?? createLogger(config.logLevel ?? 'silent');
+  app.use(httpLogger(logger));
   // Only the configured proxies' X-Forwarded-For is believed (a hop count or their addresses).
   if (config.trustProxy !== false) app.set('trust proxy', config.trustProxy === true ? 1 : config.trustProxy);
   const allowedHosts = config.allowedHosts ?? LOCAL_HOSTS;
@@ -88,6 +95,12 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
 
   const api = express.Router();
   api.use(sameOrigin({ appOrigin: config.appOrigin, allowedHosts }));
+  // Before sessions: a load balancer's probe carries no cookie and needs none.
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(healthRouter(ctx));
   if (https) {
     // APP_ORIGIN is https: people only reach the app through TLS (at a proxy, maybe with no
     // X-Forwarded-Proto we may trust), so the session cookie is always marked Secure.
@@ -109,13 +122,6 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
     }),
   );
   api.use(passport.session());
-  api.use((_req, res, next) => {
-    res.setHeader('Cache-Control', 'no-store');
-    next();
-  });
-  api.get('/health', (_req, res) => {
-    res.json({ ok: true });
-  });
   api.use(authGate);
   api.use(passwordChangeGate);
   api.use(authRouter(ctx, passport));

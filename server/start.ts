@@ -14,6 +14,11 @@ import { FirstAdminError, createFirstAdmin, seedDemoIfEmpty, warnAboutDemoInProd
 import { ConfigError, loadConfig, type Config } from './env';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { MailWorker } from './mail/mail-worker';
+import { createLogger } from './lib/logger';
+import { createStorage } from './storage/storage';
+
+/** How long shutdown waits for requests in flight before cutting their connections. */
+const SHUTDOWN_GRACE_MS = 8_000;
 
 export interface RunningServer {
   url: string;
@@ -26,14 +31,27 @@ export interface RunningServer {
 
 export async function startServer(overrides: Partial<Config> = {}): Promise<RunningServer> {
   const config = loadConfig(overrides);
-  mkdirSync(config.uploadDir, { recursive: true });
-  const db = createDb(config.databaseUrl);
+  if (!config.storageUrl) mkdirSync(config.uploadDir, { recursive: true });
+  const db = createDb(config.databaseUrl, { poolMax: config.databasePoolMax });
   let fakeSmtp: FakeSmtp | null = null;
   let worker: MailWorker | null = null;
   let server: Server | null = null;
+  const logger = createLogger(config.logLevel ?? 'info');
+  const storage = createStorage(config);
+  /**
+   * Graceful: stop accepting, let the requests in flight finish (idle keep-alive connections are
+   * closed as they become idle; whatever still runs after SHUTDOWN_GRACE_MS is cut), then let the
+   * mail worker finish the send in hand, then close the database.
+   */
   const cleanup = async () => {
-    if (server) await new Promise<void>((resolve) => server!.close(() => resolve()));
-    server?.closeAllConnections();
+    if (server) {
+      const s = server;
+      const idle = setInterval(() => s.closeIdleConnections(), 50);
+      const cut = setTimeout(() => s.closeAllConnections(), SHUTDOWN_GRACE_MS);
+      await new Promise<void>((resolve) => s.close(() => resolve()));
+      clearInterval(idle);
+      clearTimeout(cut);
+    }
     await worker?.stop();
     await fakeSmtp?.close();
     await db.destroy();
@@ -65,7 +83,7 @@ export async function startServer(overrides: Partial<Config> = {}): Promise<Runn
       pollMs: config.mailPollMs,
     });
     worker.start();
-    const app = createApp(config, { db, mail: worker });
+    const app = createApp(config, { db, mail: worker, logger, storage });
     server = createServer(app);
     await new Promise<void>((resolve, reject) => {
       server!.once('error', reject);

@@ -3,11 +3,13 @@ import { relative } from 'node:path';
 import { createDb } from '../../server/db/knex';
 import { migrateLatest } from '../../server/db/migrate';
 import { seedDemoIfEmpty } from '../../server/db/seed';
+import { redactUrl } from '../../server/lib/logger';
 import type { parseEnv } from '../../server/env';
 
 type DbConfig = Pick<ReturnType<typeof parseEnv>, 'databaseUrl' | 'passwordCost' | 'seedDemo'>;
 
 export function shownPath(path: string): string {
+  if (/^postgres(ql)?:\/\//i.test(path)) return redactUrl(path);
   const rel = relative(process.cwd(), path);
   return rel && !rel.startsWith('..') ? rel : path;
 }

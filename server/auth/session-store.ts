@@ -9,6 +9,13 @@ import { ConnectSessionKnexStore } from 'connect-session-knex';
 
 type Callback = (err?: unknown) => void;
 
+/**
+ * express-session touches the stored session at the end of every request that did not change it
+ * (one UPDATE per request). The expiry slides by 12 hours; moving it at most once a minute per
+ * session and instance costs a minute of sliding at worst and saves a write on nearly every request.
+ */
+const TOUCH_EVERY_MS = 60_000;
+
 export class GuardedSessionStore extends ConnectSessionKnexStore {
   constructor(db: Knex) {
     super({
@@ -18,10 +25,20 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
       cleanupInterval: 10 * 60 * 1000,
       onDbCleanupError: (err) => console.warn('session cleanup failed:', err),
     });
+    // The table check at construction fails when the database closes first; every call re-awaits it.
+    this.ready.catch(() => undefined);
   }
 
+  private readonly touched = new Map<string, number>();
+
   override set(sid: string, session: SessionData, callback?: Callback): Promise<void> {
+    this.remember(sid);
     return super.set(sid, session, callback).catch(() => undefined);
+  }
+
+  private remember(sid: string): void {
+    if (this.touched.size > 10_000) this.touched.clear();
+    this.touched.set(sid, Date.now());
   }
 
   override get(
@@ -32,10 +49,17 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
   }
 
   override destroy(sid: string, callback?: Callback): Promise<number> {
+    this.touched.delete(sid);
     return super.destroy(sid, callback).catch(() => 0);
   }
 
   override touch(sid: string, session: SessionData, callback?: () => void): Promise<void> {
+    const last = this.touched.get(sid);
+    if (last !== undefined && Date.now() - last < TOUCH_EVERY_MS) {
+      callback?.();
+      return Promise.resolve();
+    }
+    this.remember(sid);
     return super.touch(sid, session, callback).catch(() => {
       callback?.();
     });

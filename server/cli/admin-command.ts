@@ -10,6 +10,7 @@ import { createDb } from '../db/knex';
 import { migrateLatest } from '../db/migrate';
 import { FirstAdminError, createFirstAdmin } from '../db/seed';
 import { ConfigError, parseEnv } from '../env';
+import { redactUrl } from '../lib/logger';
 import type { CliIo } from './check-command';
 
 const emailSchema = z.email();
@@ -44,7 +45,7 @@ export async function adminCreateCommand(
       { email, password, displayName: name?.trim() || 'Administrator' },
       { passwordCost: config.passwordCost, mustChange: false, evenIfAdminExists: true },
     );
-    io.out(`Created the admin account ${email.trim().toLowerCase()} in ${config.databaseUrl}.\n`);
+    io.out(`Created the admin account ${email.trim().toLowerCase()} in ${redactUrl(config.databaseUrl)}.\n`);
     return 0;
   } catch (err) {
     if (err instanceof FirstAdminError) {

@@ -1,5 +1,5 @@
 /**
- * The `reachline` command line (bin.js runs it through tsx). Commands: check, lightest, shapes, --help.
+ * The `reachline` command line (bin.js runs it through tsx). Commands: check, lightest, report, shapes, admin, db backup, --help.
  * Returns the exit code: 0 all checks pass, 1 a check fails, 2 invalid input or usage.
  */
 import { adminCreateCommand } from './admin-command';
@@ -7,6 +7,7 @@ import { parseArgs } from './args';
 import { checkCommand, type CliIo } from './check-command';
 import { lightestCommand } from './lightest-command';
 import { reportCommand } from './report-command';
+import { dbBackupCommand } from './db-backup-command';
 import { shapesCommand } from './shapes-command';
 
 export const HELP = `reachline: check a steel cantilever deck design from the command line
@@ -17,6 +18,7 @@ Usage:
   reachline report <design.json | -> -o <out.pdf>
   reachline shapes [--json] [--family W|HSS|PIPE|C]
   reachline admin create --email <e-mail> [--name <display name>]  < password
+  reachline db backup <file>
   reachline --help
 
 Commands:
@@ -35,6 +37,9 @@ Commands:
   shapes           List the shapes table shipped with Reachline and its source.
   admin create     Create an admin account in the configured database (DATABASE_URL); the
                    password is read from standard input (one line) and must be hard to guess.
+  db backup <file> Write a consistent copy of the configured database to a new file while the
+                   app runs: SQLite through its backup API, PostgreSQL through pg_dump (custom
+                   format, restore with pg_restore).
 
 Options:
   --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
@@ -116,6 +121,15 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
     if (a.unknown.length || a.positionals.length)
       return usage(io, `unexpected ${[...a.unknown, ...a.positionals].join(', ')}`);
     return adminCreateCommand(a.values.get('--email'), a.values.get('--name'), io);
+  }
+  if (command === 'db') {
+    const [sub, ...more] = rest;
+    const a = parseArgs(more, ['--help', '-h']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (sub !== 'backup') return usage(io, 'db needs the subcommand backup');
+    if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
+    if (a.positionals.length !== 1) return usage(io, 'db backup needs one file to write');
+    return dbBackupCommand(a.positionals[0], io);
   }
   return usage(io, `unknown command "${command}"`);
 }

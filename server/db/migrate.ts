@@ -37,7 +37,3 @@ export async function migrateLatest(db: Knex): Promise<string[]> {
   const [, ran] = (await db.migrate.latest({ migrationSource })) as [number, string[]];
   return ran;
 }
-
-export async function rollbackAll(db: Knex): Promise<void> {
-  await db.migrate.rollback({ migrationSource }, true);
-}

@@ -16,7 +16,7 @@ export const notFoundApi: RequestHandler = (_req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: 'No such API route.', issues: [] } });
 };
 
-export const errorHandler: ErrorRequestHandler = (err: unknown, _req, res, next) => {
+export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, next) => {
   if (res.headersSent) {
     next(err);
     return;
@@ -65,7 +65,9 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, _req, res, next)
       .json({ error: { code: 'bad_request', message: String((err as Error).message), issues: [] } });
     return;
   }
-  console.error('Unexpected error while answering a request:', err);
+  // pino-http's request logger (with the request id) when present.
+  if (req.log) req.log.error({ err }, 'Unexpected error while answering a request');
+  else console.error('Unexpected error while answering a request:', err);
   res
     .status(500)
     .json({ error: { code: 'internal', message: 'Something went wrong on the server.', issues: [] } });

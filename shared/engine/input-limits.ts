@@ -9,6 +9,9 @@ import { toInternal } from './units';
 
 /** Longest cantilever the engine accepts, in (60 ft: far beyond any deck, short of absurd). */
 export const MAX_LENGTH = 720;
+/** Steepest taper the local-section checks accept: depth change / length (1:4, common practice, no source). */
+export const MAX_TAPER_SLOPE = 0.25;
+
 /** Shortest, in (1 ft: below that it is a bracket, not a cantilever beam). */
 export const MIN_LENGTH = 12;
 

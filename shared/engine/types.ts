@@ -87,6 +87,8 @@ export interface MemberResult {
   cases: Partial<Record<LoadCase, EffectSummary>>;
   combinations: CombinationSummary[];
   frequency: Quantity;
+  /** Under the service combination that governs member.deflection.total: the member's bending and the root's rotation x length. */
+  tipDeflectionParts?: { member: Quantity; connection: Quantity };
 }
 
 export interface ConnectionResult {
@@ -136,6 +138,8 @@ export interface RootFootprint {
   /** Width along B. */
   bf: number;
   tf: number;
+  /** Web thickness (or wall), in, when known. */
+  tw?: number;
 }
 
 /** A problem in a document that the schema alone cannot see (an unknown shape, a point load past the tip). */

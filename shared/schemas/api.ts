@@ -159,6 +159,25 @@ export interface StaleSaveBody {
 }
 
 // ---- review and comments ---------------------------------------------------------------------
+/** Body of a submission: an optional note to the reviewer, sent in the e-mail and kept with the request. */
+export const submitSchema = z
+  .object({ note: z.string().trim().max(2000, 'is too long (2000 characters at most)').default('') })
+  .default({ note: '' });
+export type SubmitRequest = z.output<typeof submitSchema>;
+/** What a submission answers: the revision, and in words who was told (or why nobody could be). */
+export type SubmitResponse = RevisionDto & { notice: string; notified: string[] };
+/** A submitted revision waiting for the signed-in engineer (never their own). */
+export interface AwaitingReviewDto {
+  revisionId: number;
+  number: number;
+  message: string;
+  cantileverId: number;
+  cantileverName: string;
+  projectId: number;
+  projectName: string;
+  authorName: string;
+  submittedAt: string;
+}
 export const reviewSchema = z.object({
   decision: z.enum(['approve', 'request-changes'], { error: 'must be "approve" or "request-changes"' }),
   comment: z.string().trim().max(4000).default(''),
@@ -185,13 +204,6 @@ export interface CommentDto {
 }
 
 // ---- attachments, shapes, outbox -------------------------------------------------------------
-export const ATTACHMENT_TYPES = [
-  'application/pdf',
-  'image/png',
-  'image/jpeg',
-  'image/vnd.dxf',
-  'text/csv',
-] as const;
 export interface AttachmentDto {
   id: number;
   cantileverId: number;

@@ -35,7 +35,6 @@ function noun(dimension: Dimension): string {
 
 export const lengthQ = (sign: Sign = 'positive') => quantityString('length', sign);
 export const stressQ = (sign: Sign = 'positive') => quantityString('stress', sign);
-export const forceQ = (sign: Sign = 'positive') => quantityString('force', sign);
 
 /** Formats a zod issue path the way every error in Reachline names a field: loads.area[0].value */
 export function formatPath(path: ReadonlyArray<PropertyKey>): string {

@@ -15,6 +15,7 @@ const HistoryRoute = lazy(() => import('./routes/history'));
 const CompareRoute = lazy(() => import('./routes/compare'));
 const ReviewRoute = lazy(() => import('./routes/review'));
 const ReachStudyRoute = lazy(() => import('./routes/reach-study'));
+const RevisionRoute = lazy(() => import('./routes/revision'));
 const TeamRoute = lazy(() => import('./routes/team'));
 const AccountRoute = lazy(() => import('./routes/account'));
 const OutboxRoute = lazy(() => import('./routes/outbox'));
@@ -47,6 +48,7 @@ export function createAppRouter() {
             { path: routePatterns.compare, element: page(CompareRoute) },
             { path: routePatterns.review, element: page(ReviewRoute) },
             { path: routePatterns.study, element: page(ReachStudyRoute) },
+            { path: routePatterns.revision, element: page(RevisionRoute) },
             { path: routePatterns.shapes, element: page(ShapesRoute) },
             { path: routePatterns.account, element: page(AccountRoute) },
             { path: routePatterns.team, element: page(TeamRoute) },

@@ -7,6 +7,7 @@
 import fc from 'fast-check';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dialectOf } from '../../server/db/knex';
 import { createTestEnv, type TestEnv } from '../helpers/api';
 import { errorProblems, fuzzRuns, fuzzTimeout, mutatedDesign, resultProblems } from '../helpers/fuzz';
 
@@ -68,7 +69,9 @@ describe('fuzzed design documents through the API', { timeout: fuzzTimeout() }, 
       `fuzz save: ${seen.saved} saved, ${seen.invalid} refused, ${seen.forbidden} outside the role`,
     );
     expect(seen.invalid).toBeGreaterThan(0);
-    const integrity = await env.db.raw('PRAGMA integrity_check');
-    expect(JSON.stringify(integrity)).toContain('ok');
+    if (dialectOf(env.db) === 'sqlite') {
+      const integrity = (await env.db.raw('PRAGMA integrity_check')) as { integrity_check: string }[];
+      expect(integrity[0]!.integrity_check).toBe('ok');
+    }
   });
 });

@@ -114,7 +114,7 @@ describe('startServer', () => {
     expect(api.status).toBe(401);
     expect(((await api.json()) as { error: { code: string } }).error.code).toBe('unauthorized');
     const health = await fetch(`${server.url}/api/health`);
-    expect(await health.json()).toEqual({ ok: true });
+    expect(await health.json()).toMatchObject({ ok: true, database: 'ok', storage: 'ok' });
   });
 
   it('says how to build the client when dist/ is missing, and does not seed a database that has accounts', async () => {

@@ -1,6 +1,12 @@
 /** Revisions and their reviews (Knex only). Revisions are only ever inserted. */
 import type { Knex } from 'knex';
-import type { ReviewDto, ReviewState, RevisionDto, RevisionSummaryDto } from '../../../shared/schemas/api';
+import type {
+  AwaitingReviewDto,
+  ReviewDto,
+  ReviewState,
+  RevisionDto,
+  RevisionSummaryDto,
+} from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
 import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
@@ -84,6 +90,29 @@ export async function listReviews(db: Db, revisionId: number): Promise<ReviewDto
     comment: r.comment,
     createdAt: toIso(r.created_at),
   }));
+}
+
+/**
+ * One revision as the JSON of a RevisionDto, for a member only (undefined otherwise): membership,
+ * the revision and its author in one query, the reviews in a second, and the stored input and
+ * result documents spliced in as stored (they are JSON already; parsing and re-serialising 20 kB
+ * per read was most of a read's time).
+ */
+export async function memberRevisionJson(
+  db: Db,
+  revisionId: number,
+  userId: number,
+): Promise<string | undefined> {
+  const row = (await summarySelect(db)
+    .join('cantilevers as c', 'c.id', 'r.cantilever_id')
+    .join('project_members as m', (j) => j.on('m.project_id', 'c.project_id').andOnVal('m.user_id', userId))
+    .where('r.id', revisionId)
+    .first()) as SummaryRow | undefined;
+  if (!row) return undefined;
+  const reviews = await listReviews(db, revisionId);
+  const state = reviews.length > 0 ? reviews[reviews.length - 1].state : 'draft';
+  const summary = JSON.stringify({ ...toSummary(row, state), reviews });
+  return `${summary.slice(0, -1)},"input":${row.input_json},"result":${row.result_json}}`;
 }
 
 export async function getRevisionDto(db: Db, revisionId: number): Promise<RevisionDto | undefined> {
@@ -195,6 +224,65 @@ export async function latestApprovedRevisions(
       revision,
       approvedBy: approver_name,
       approvedAt: toIso(approved_at),
+    });
+  }
+  return out;
+}
+
+/** Revisions waiting for review in the projects `userId` belongs to, not written by them. */
+export async function listSubmittedFor(db: Db, userId: number): Promise<AwaitingReviewDto[]> {
+  const rows = (await db('reviews as v')
+    .join('revisions as r', 'r.id', 'v.revision_id')
+    .join('cantilevers as c', 'c.id', 'r.cantilever_id')
+    .join('projects as p', 'p.id', 'c.project_id')
+    .join('project_members as m', function on() {
+      this.on('m.project_id', '=', 'p.id').andOnVal('m.user_id', '=', userId);
+    })
+    .join('users as u', 'u.id', 'r.author_id')
+    .where('v.state', 'submitted')
+    .whereNot('r.author_id', userId)
+    .orderBy('v.id')
+    .select(
+      'r.id as revision_id',
+      'r.number',
+      'r.message',
+      'c.id as cantilever_id',
+      'c.name as cantilever_name',
+      'p.id as project_id',
+      'p.name as project_name',
+      'u.display_name as author_name',
+      'v.created_at as submitted_at',
+    )) as {
+    revision_id: number;
+    number: number;
+    message: string;
+    cantilever_id: number;
+    cantilever_name: string;
+    project_id: number;
+    project_name: string;
+    author_name: string;
+    submitted_at: string;
+  }[];
+  const states = await reviewStates(
+    db,
+    rows.map((r) => r.revision_id),
+  );
+  const seen = new Set<number>();
+  const out: AwaitingReviewDto[] = [];
+  for (const r of rows) {
+    // A revision submitted again after changes were requested appears once, at its latest request.
+    if (states.get(r.revision_id) !== 'submitted' || seen.has(r.revision_id)) continue;
+    seen.add(r.revision_id);
+    out.push({
+      revisionId: r.revision_id,
+      number: r.number,
+      message: r.message,
+      cantileverId: r.cantilever_id,
+      cantileverName: r.cantilever_name,
+      projectId: r.project_id,
+      projectName: r.project_name,
+      authorName: r.author_name,
+      submittedAt: toIso(r.submitted_at),
     });
   }
   return out;

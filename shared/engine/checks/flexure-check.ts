@@ -151,6 +151,19 @@ function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor
 /** member.flexure (bottom flange in compression), always; member.flexure.uplift when uplift occurs. */
 export function flexureChecks(ctx: CheckContext): Check[] {
   const { lateral, model, Lb } = ctx;
+  if (ctx.section.family === 'C' && lateral.topFlange === 'free' && lateral.loadAt === 'top-flange') {
+    // A channel loaded on a top flange that nothing holds twists (the load is off its shear centre).
+    return [
+      notComputedRow(
+        ctx,
+        'member.flexure',
+        'Bending',
+        'AISC 360-16 F2',
+        'not computed: a channel loaded on its top flange twists because the load is off its shear centre; hold the top flange (lateralSupport.topFlange "braced", the deck fastened to it) or check the torsion separately (AISC Design Guide 9)',
+        0,
+      ),
+    ];
+  }
   const segments = bottomFlangeSegments(lateral, model.L, Lb);
   const floor = segments.length > 1 ? unbracedSegment(lateral, model.L, Lb) : null;
   const down = worstOfSide(ctx, 1, segments, floor);
@@ -205,6 +218,10 @@ function rowOf(ctx: CheckContext, id: string, w: SideWorst, namedSegments: boole
         : `${s.limitState} governs (${seg})`,
     );
   }
+  if (section.family === 'C')
+    notes.push(
+      'torsion from load on the top flange taken as restrained by the deck (lateralSupport.topFlange "braced")',
+    );
   // A station outside the clauses fails the check even when another station has the worst ratio.
   const outside = s.outOfScope ? w.node : w.outside;
   if (outside >= 0) {

@@ -47,7 +47,12 @@ export function analyseCombination(
   const shear = Math.abs(postBase ? d.H : d.V);
   const bearing = solveBearing({ N: geo.N, B: geo.B, f: geo.f, P, M, fpMax });
   const thickness = footprint
-    ? requiredThickness(bearing, { N: geo.N, B: geo.B, f: geo.f, Fy: geo.Fy }, footprint, method)
+    ? requiredThickness(
+        bearing,
+        { N: geo.N, B: geo.B, f: geo.f, Fy: geo.Fy, perSide: geo.perSide, gauge: geo.g },
+        footprint,
+        method,
+      )
     : null;
   const solved = bearing.T !== null;
   const T = bearing.T ?? 0;

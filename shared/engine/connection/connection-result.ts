@@ -56,7 +56,9 @@ export function buildConnectionResult(
   fpMax: number,
   sqrtA2A1: number,
   units: UnitSystem,
+  impossible: string | null = null,
 ): ConnectionResult | null {
+  if (impossible) return null;
   const s = plateGoverning(states, geo.t, fpMax);
   if (!s || !s.thickness || s.bearing.Y === null || s.bearing.fp === null || s.rodTension === null)
     return null;
@@ -83,6 +85,7 @@ export function buildConnectionResult(
     m: len(s.thickness.m),
     n: len(s.thickness.n),
     tensionLever: len(s.thickness.x),
+    tensionWidth: len(s.thickness.tensionWidth),
     nextStandardThickness: len(nextStandardThickness(s.thickness.required)),
     unsolvedCombinations: states.filter((x) => x.bearing.Y === null).map((x) => x.combination),
   };

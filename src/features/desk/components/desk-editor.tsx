@@ -25,6 +25,8 @@ import { DeskHeader } from './desk-header';
 import { DeskInputs, IssueSummary } from './desk-inputs';
 import { DeskResults } from './desk-results';
 import { PlateScheduleLink } from './plate-schedule-link';
+import { PackageLink } from '../../../components/ui/package-link';
+import { SubmitForReview } from '../../../components/submit-for-review';
 import { DeskSave } from './desk-save';
 import { EngineIssuesContext } from './field-context';
 import { DeskSide } from './desk-side';
@@ -112,8 +114,23 @@ export function DeskEditor({
   const baseId = baseRevision?.id ?? null;
   // Memoised so that the results (a memo component) skip the re-render of every keystroke.
   const schedule = useMemo(
-    () => <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />,
-    [baseId, isDirty, hasConnection],
+    () => (
+      <>
+        <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />
+        {/* The package is made from the saved revision; while changes are unsaved it is of the saved one. */}
+        {baseRevision ? (
+          <p className="mt-2 text-sm">
+            <PackageLink revisionId={baseRevision.id} number={baseRevision.number} />
+            {isDirty ? (
+              <span className="ml-2 text-xs text-concrete-600">
+                of the saved revision, not the inputs on screen
+              </span>
+            ) : null}
+          </p>
+        ) : null}
+      </>
+    ),
+    [baseId, baseRevision, isDirty, hasConnection],
   );
 
   function applyShape(target: 'member' | 'footprint', label: string) {
@@ -185,6 +202,17 @@ export function DeskEditor({
               />
             </form>
             <div className="flex min-w-0 flex-col gap-3">
+              {baseRevision &&
+              !isDirty &&
+              (rights.member || rights.connection) &&
+              (baseRevision.id !== revision?.id || revision.reviewState === 'draft') ? (
+                <SubmitForReview
+                  key={baseRevision.id}
+                  cantileverId={cantilever.id}
+                  revisionId={baseRevision.id}
+                  number={baseRevision.number}
+                />
+              ) : null}
               <DeskResults live={live} doc={live.doc} schedule={schedule} />
               <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>

@@ -1,0 +1,243 @@
+/**
+ * `npm run bench:load`: load figures on loopback with autocannon (a devDependency), bounded in
+ * time. For each setup (one instance on SQLite; one and two instances on one PostgreSQL, a
+ * throwaway cluster from scripts/lib/pg-cluster.ts) the server entry (server/index.ts) runs in its
+ * own process(es) on a fresh demo database; a signed-in demo engineer then measures, one after
+ * the other: /api/health, the project, the revisions list, one revision, POST /api/check, and a
+ * 50-client mix of the reads and the check. Prints req/s, p50/p99 latency and errors, with each
+ * figure's ratio to /api/health in the same run; `--json` prints one object.
+ *
+ * Options: --duration <s> per measurement (default 5), --connections <n> (default 10),
+ * --only sqlite|pg1|pg2.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import autocannon from 'autocannon';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../server/db/seed';
+import { startFakeSmtp } from '../server/mail/fake-smtp';
+import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
+
+const args = process.argv.slice(2);
+const option = (name: string, fallback: string) => {
+  const i = args.indexOf(name);
+  return i >= 0 && args[i + 1] ? args[i + 1] : fallback;
+};
+const DURATION = Number(option('--duration', '5'));
+const CONNECTIONS = Number(option('--connections', '10'));
+const ONLY = option('--only', '');
+const JSON_OUT = args.includes('--json');
+
+interface Figure {
+  name: string;
+  rps: number;
+  p50: number;
+  p99: number;
+  max: number;
+  errors: number;
+  non2xx: number;
+  ratio?: number;
+}
+
+interface Instance {
+  url: string;
+  child: ChildProcess;
+}
+
+function startInstance(env: Record<string, string>, name: string): Promise<Instance> {
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`${name} did not start:\n${output}`)), 90_000);
+    child.stderr!.on('data', (c: Buffer) => (output += c.toString()));
+    child.stdout!.on('data', (c: Buffer) => {
+      output += c.toString();
+      const m = /running at (http:\/\/\S+)/.exec(output);
+      if (m) {
+        clearTimeout(timer);
+        resolve({ url: m[1], child });
+      }
+    });
+    child.once('exit', (code) => reject(new Error(`${name} exited (${code}):\n${output}`)));
+  });
+}
+
+async function signIn(url: string): Promise<string> {
+  const engineer = DEMO_ACCOUNTS.find((a) => a.role === 'engineer')!;
+  const res = await fetch(`${url}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: engineer.email, password: DEMO_PASSWORD }),
+  });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
+  return res.headers.getSetCookie()[0].split(';')[0];
+}
+
+async function getJson<T>(url: string, cookie: string): Promise<T> {
+  const res = await fetch(url, { headers: { cookie } });
+  if (res.status !== 200) throw new Error(`${url}: ${res.status}`);
+  return (await res.json()) as T;
+}
+
+type Req = { method: 'GET' | 'POST'; path: string; body?: string };
+
+/** One autocannon run per instance at once (the connections split between them); figures merged. */
+async function measure(
+  name: string,
+  instances: Instance[],
+  cookie: string,
+  requests: Req[],
+  connections: number,
+) {
+  const per = Math.max(1, Math.round(connections / instances.length));
+  const results = await Promise.all(
+    instances.map((i) =>
+      autocannon({
+        url: i.url,
+        connections: per,
+        duration: DURATION,
+        headers: { cookie, 'content-type': 'application/json' },
+        requests: requests.map((r) => ({ method: r.method, path: r.path, body: r.body })),
+      }),
+    ),
+  );
+  const figure: Figure = {
+    name,
+    rps: results.reduce((s, r) => s + r.requests.average, 0),
+    // Merged conservatively: the slowest instance's percentiles.
+    p50: Math.max(...results.map((r) => r.latency.p50)),
+    p99: Math.max(...results.map((r) => r.latency.p99)),
+    max: Math.max(...results.map((r) => r.latency.max)),
+    errors: results.reduce((s, r) => s + r.errors + r.timeouts, 0),
+    non2xx: results.reduce((s, r) => s + r.non2xx, 0),
+  };
+  return figure;
+}
+
+async function runSetup(label: string, databaseUrl: string, count: number): Promise<Figure[]> {
+  const dir = mkdtempSync(join(tmpdir(), 'reachline-bench-'));
+  const smtp = await startFakeSmtp(null);
+  const base = {
+    NODE_ENV: 'production',
+    SEED_DEMO: '1',
+    PORT: '0',
+    HOST: '127.0.0.1',
+    DATABASE_URL: databaseUrl,
+    UPLOAD_DIR: join(dir, 'uploads'),
+    SESSION_SECRET: 'bench-secret-long-enough-for-the-check',
+    SMTP_URL: smtp.url,
+    LOG_LEVEL: 'warn',
+    LOGIN_RATE_LIMIT: '1000',
+  };
+  const instances: Instance[] = [];
+  try {
+    // The first instance migrates and seeds; the second starts on the ready database.
+    instances.push(await startInstance({ ...base, DATA_DIR: join(dir, 'a') }, `${label} A`));
+    if (count > 1) instances.push(await startInstance({ ...base, DATA_DIR: join(dir, 'b') }, `${label} B`));
+    const cookie = await signIn(instances[0].url);
+    const projects = await getJson<{ id: number }[]>(`${instances[0].url}/api/projects`, cookie);
+    const projectId = projects[0].id;
+    const cantilevers = await getJson<{ id: number; currentRevisionId: number | null }[]>(
+      `${instances[0].url}/api/projects/${projectId}/cantilevers`,
+      cookie,
+    );
+    const cantilever = cantilevers.find((c) => c.currentRevisionId)!;
+    const revision = await getJson<{ input: unknown }>(
+      `${instances[0].url}/api/revisions/${cantilever.currentRevisionId}`,
+      cookie,
+    );
+    const check: Req = {
+      method: 'POST',
+      path: '/api/check',
+      body: JSON.stringify({ input: revision.input }),
+    };
+    const reads: Record<string, Req> = {
+      project: { method: 'GET', path: `/api/projects/${projectId}` },
+      revisions: { method: 'GET', path: `/api/cantilevers/${cantilever.id}/revisions` },
+      revision: { method: 'GET', path: `/api/revisions/${cantilever.currentRevisionId}` },
+    };
+    // Warm-up: JIT and caches, not measured.
+    await measure('warm-up', instances, cookie, [reads.revision, check], CONNECTIONS).catch(() => undefined);
+    const figures: Figure[] = [];
+    const health = await measure(
+      'health',
+      instances,
+      cookie,
+      [{ method: 'GET', path: '/api/health' }],
+      CONNECTIONS,
+    );
+    figures.push(health);
+    for (const [name, req] of Object.entries(reads))
+      figures.push(await measure(name, instances, cookie, [req], CONNECTIONS));
+    figures.push(await measure('check', instances, cookie, [check], CONNECTIONS));
+    figures.push(
+      await measure('mix-50', instances, cookie, [reads.project, reads.revisions, reads.revision, check], 50),
+    );
+    for (const f of figures) f.ratio = f.rps / health.rps;
+    return figures;
+  } finally {
+    for (const i of instances) i.child.kill('SIGTERM');
+    await new Promise((r) => setTimeout(r, 300));
+    for (const i of instances) if (i.child.exitCode === null) i.child.kill('SIGKILL');
+    await smtp.close();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+function print(label: string, figures: Figure[]): void {
+  console.log(`\n${label} (${DURATION} s each, ${CONNECTIONS} connections; the mix: 50)`);
+  console.log('  what         req/s    p50 ms   p99 ms   max ms   errors  non-2xx  of health');
+  for (const f of figures) {
+    console.log(
+      `  ${f.name.padEnd(10)} ${f.rps.toFixed(0).padStart(7)} ${f.p50.toFixed(0).padStart(9)} ${f.p99
+        .toFixed(0)
+        .padStart(8)} ${f.max.toFixed(0).padStart(8)} ${String(f.errors).padStart(8)} ${String(
+        f.non2xx,
+      ).padStart(8)} ${`${((f.ratio ?? 0) * 100).toFixed(0)} %`.padStart(10)}`,
+    );
+  }
+}
+
+async function main(): Promise<void> {
+  const all: Record<string, Figure[]> = {};
+  const setups: { key: string; label: string; count: number; pg: boolean }[] = [
+    { key: 'sqlite', label: 'SQLite, one instance', count: 1, pg: false },
+    { key: 'pg1', label: 'PostgreSQL, one instance', count: 1, pg: true },
+    { key: 'pg2', label: 'PostgreSQL, two instances', count: 2, pg: true },
+  ].filter((s) => !ONLY || s.key === ONLY);
+  let cluster: PgCluster | null = null;
+  try {
+    for (const setup of setups) {
+      let url: string;
+      if (setup.pg) {
+        if (!findPgBin()) {
+          console.log(`${setup.label}: skipped, PostgreSQL is not installed`);
+          continue;
+        }
+        cluster ??= await startPgCluster();
+        const db = `bench_${setup.key}`;
+        const admin = await import('knex').then((k) => k.default({ client: 'pg', connection: cluster!.url }));
+        await admin.raw(`CREATE DATABASE ${db}`);
+        await admin.destroy();
+        url = cluster.urlFor(db);
+      } else {
+        url = join(mkdtempSync(join(tmpdir(), 'reachline-bench-db-')), 'bench.sqlite');
+      }
+      all[setup.key] = await runSetup(setup.label, url, setup.count);
+      if (!JSON_OUT) print(setup.label, all[setup.key]);
+    }
+  } finally {
+    cluster?.stop();
+  }
+  if (JSON_OUT)
+    console.log(JSON.stringify({ duration: DURATION, connections: CONNECTIONS, setups: all }, null, 2));
+}
+
+main().catch((err: unknown) => {
+  console.error(err);
+  process.exit(1);
+});
