@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
+import { assertAccessible } from '../helpers/axe';
 import { startE2E, type E2E } from '../helpers/e2e';
 
 let e2e: E2E;
@@ -91,6 +92,10 @@ describe('reach study', () => {
       .poll(() => page.getByTestId('map-announcement').textContent())
       .toMatch(/^Length [\d.]+ ft, tip depth [\d.]+ in: (passes|does not pass)/);
     await e2e.screenshot(page, 'reach-study-map-us');
+    await assertAccessible(page, 'reach study, map');
+    await page.getByRole('button', { name: 'Table' }).click();
+    await assertAccessible(page, 'reach study, table');
+    await page.getByRole('button', { name: 'Map' }).click();
   });
 
   it('clicking a feasible point loads it into the desk as unsaved changes from the study', async () => {

@@ -34,7 +34,13 @@ export function PointReadout({
   return (
     <div className="text-sm" data-testid="point-readout">
       <p className="font-semibold">{pointLabel(plan, point.i, point.j)}</p>
-      <p className={outcome?.kind === 'result' && outcome.ok ? 'text-util-calm' : 'text-util-over'}>
+      <p
+        className={
+          outcome?.kind === 'result' && outcome.ok
+            ? 'font-medium text-concrete-800'
+            : 'font-medium text-util-over'
+        }
+      >
         {verdictText(outcome)}
         {outcome ? `: ${governingText(outcome)}` : ''}
       </p>

@@ -85,7 +85,7 @@ export function StudyScreen({
   return (
     <section className="mx-auto flex max-w-6xl flex-col gap-4 p-4" aria-labelledby="study-title">
       <div>
-        <p className="text-xs text-concrete-500">
+        <p className="text-xs text-concrete-600">
           <Link to={paths.project(cantilever.projectId)} className="underline">
             Project
           </Link>{' '}
@@ -115,7 +115,8 @@ export function StudyScreen({
         <AxisFields name="x" draft={x} onChange={setX} units={units} catalog={catalog} errors={errors} />
         <AxisFields name="y" draft={y} onChange={setY} units={units} catalog={catalog} errors={errors} />
         <div className="flex flex-wrap items-center gap-3 md:col-span-2">
-          <Button type="submit" variant="primary">
+          {/* oxide-600: white text on oxide-500 is below 4.5:1 for this text size. */}
+          <Button type="submit" variant="primary" style={{ backgroundColor: '#a94714' }}>
             {running ? 'Restart study' : 'Run study'}
           </Button>
           <Button onClick={cancel} disabled={!running}>
@@ -152,7 +153,8 @@ export function StudyScreen({
               <Button
                 key={v}
                 size="sm"
-                variant={view === v ? 'primary' : 'secondary'}
+                variant={view === v ? 'secondary' : 'ghost'}
+                className={view === v ? 'border-concrete-800 font-semibold ring-1 ring-concrete-800' : ''}
                 aria-pressed={view === v}
                 onClick={() => setView(v)}
               >
@@ -214,7 +216,7 @@ export function StudyScreen({
                     steel weight contours (one beam)
                   </li>
                   {run.status !== 'done' ? (
-                    <li className="text-concrete-500">Contours appear when every point is in.</li>
+                    <li className="text-concrete-600">Contours appear when every point is in.</li>
                   ) : null}
                 </ul>
                 {!mayUse ? (

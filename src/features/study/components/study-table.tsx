@@ -22,7 +22,12 @@ export function StudyTable({
       if (o) rows.push({ i, j, o });
     }
   return (
-    <div className="max-h-[32rem] overflow-auto rounded border border-concrete-300">
+    <div
+      className="max-h-[32rem] overflow-auto rounded border border-concrete-300"
+      role="region"
+      aria-label="Study points table (scrolls)"
+      tabIndex={0}
+    >
       <table className="w-full border-collapse text-xs" aria-label="Study points" data-testid="study-table">
         <caption className="sr-only">
           {rows.length} of {nx * ny} points computed; one row per point.
