@@ -50,6 +50,8 @@ export default defineConfig({
           environment: 'node',
           include: ['tests/server/**/*.test.ts'],
           setupFiles: ['tests/helpers/setup-loud.ts'],
+          // TEST_PG=1: the same suite on a throwaway PostgreSQL cluster (one database per file).
+          globalSetup: ['tests/helpers/pg-global-setup.ts'],
         },
       },
       {

@@ -1,7 +1,9 @@
 /** Accounts, sessions (the connect-session-knex table) and the audit trail. */
 import type { Knex } from 'knex';
+import { dialectOf } from '../server/db/knex';
 
 export async function up(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010000_accounts');
   await knex.schema.createTable('users', (t) => {
     t.increments('id').primary();
     t.string('email', 254).notNullable().unique();
@@ -28,6 +30,7 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010000_accounts');
   await knex.schema.dropTable('audit');
   await knex.schema.dropTable('sessions');
   await knex.schema.dropTable('users');

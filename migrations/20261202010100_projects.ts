@@ -1,7 +1,9 @@
 /** Projects, their members and the cantilevers designed in them. */
 import type { Knex } from 'knex';
+import { dialectOf } from '../server/db/knex';
 
 export async function up(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010100_projects');
   await knex.schema.createTable('projects', (t) => {
     t.increments('id').primary();
     t.string('name', 120).notNullable();
@@ -32,6 +34,7 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010100_projects');
   await knex.schema.dropTable('cantilevers');
   await knex.schema.dropTable('project_members');
   await knex.schema.dropTable('projects');

@@ -1,16 +1,43 @@
 /**
- * Revisions (immutable), reviews and comments. Immutability is enforced by the database itself:
- * on SQLite, triggers refuse any UPDATE of a revision and the DELETE of an approved one.
- * (On PostgreSQL the same rules would be written as plpgsql triggers; not supported yet.)
+ * Revisions (immutable), reviews and comments. Immutability is enforced by the database itself,
+ * by triggers on both databases: SQLite triggers and their plpgsql twins refuse any UPDATE of a
+ * revision or a review, the DELETE of an approved revision and the DELETE of an approval
+ * (PostgreSQL also refuses TRUNCATE of both tables).
  */
 import type { Knex } from 'knex';
+import { dialectOf } from '../server/db/knex';
 
-function sqlite(knex: Knex): boolean {
-  const client = String(knex.client.config.client);
-  return client === 'better-sqlite3' || client === 'sqlite3';
-}
+const NAME = 'migration 20261202010200_revisions';
+
+/** plpgsql: one function refusing with the message given as the trigger's argument. */
+const PG_UP = [
+  `CREATE FUNCTION reachline_refuse() RETURNS trigger LANGUAGE plpgsql AS $$
+   BEGIN
+     RAISE EXCEPTION '%', TG_ARGV[0] USING ERRCODE = 'restrict_violation';
+   END $$`,
+  `CREATE FUNCTION reachline_revisions_keep_approved() RETURNS trigger LANGUAGE plpgsql AS $$
+   BEGIN
+     IF EXISTS (SELECT 1 FROM reviews WHERE reviews.revision_id = OLD.id AND reviews.state = 'approved') THEN
+       RAISE EXCEPTION 'an approved revision cannot be deleted' USING ERRCODE = 'restrict_violation';
+     END IF;
+     RETURN OLD;
+   END $$`,
+  `CREATE TRIGGER revisions_immutable BEFORE UPDATE ON revisions
+   FOR EACH ROW EXECUTE FUNCTION reachline_refuse('revisions are immutable: save a new revision instead')`,
+  `CREATE TRIGGER revisions_no_truncate BEFORE TRUNCATE ON revisions
+   FOR EACH STATEMENT EXECUTE FUNCTION reachline_refuse('revisions are immutable: they cannot be truncated')`,
+  `CREATE TRIGGER revisions_keep_approved BEFORE DELETE ON revisions
+   FOR EACH ROW EXECUTE FUNCTION reachline_revisions_keep_approved()`,
+  `CREATE TRIGGER reviews_keep_approval BEFORE DELETE ON reviews
+   FOR EACH ROW WHEN (OLD.state = 'approved') EXECUTE FUNCTION reachline_refuse('an approval cannot be deleted')`,
+  `CREATE TRIGGER reviews_immutable BEFORE UPDATE ON reviews
+   FOR EACH ROW EXECUTE FUNCTION reachline_refuse('reviews are immutable')`,
+  `CREATE TRIGGER reviews_no_truncate BEFORE TRUNCATE ON reviews
+   FOR EACH STATEMENT EXECUTE FUNCTION reachline_refuse('reviews are immutable: they cannot be truncated')`,
+];
 
 export async function up(knex: Knex): Promise<void> {
+  const dialect = dialectOf(knex, NAME);
   await knex.schema.createTable('revisions', (t) => {
     t.increments('id').primary();
     t.integer('cantilever_id')
@@ -57,7 +84,10 @@ export async function up(knex: Knex): Promise<void> {
     t.timestamp('created_at').notNullable();
     t.index(['revision_id']);
   });
-  if (sqlite(knex)) {
+  if (dialect === 'postgres') {
+    for (const statement of PG_UP) await knex.raw(statement);
+  }
+  if (dialect === 'sqlite') {
     await knex.raw(`
       CREATE TRIGGER revisions_immutable
       BEFORE UPDATE ON revisions
@@ -88,7 +118,8 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
-  if (sqlite(knex)) {
+  const dialect = dialectOf(knex, NAME);
+  if (dialect === 'sqlite') {
     for (const name of [
       'reviews_immutable',
       'reviews_keep_approval',
@@ -101,4 +132,9 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTable('comments');
   await knex.schema.dropTable('reviews');
   await knex.schema.dropTable('revisions');
+  if (dialect === 'postgres') {
+    // The triggers went with their tables.
+    await knex.raw('DROP FUNCTION IF EXISTS reachline_revisions_keep_approved()');
+    await knex.raw('DROP FUNCTION IF EXISTS reachline_refuse()');
+  }
 }

@@ -1,7 +1,9 @@
 /** Attachments, the e-mail outbox and user-imported shapes. */
 import type { Knex } from 'knex';
+import { dialectOf } from '../server/db/knex';
 
 export async function up(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010300_files_mail_shapes');
   await knex.schema.createTable('attachments', (t) => {
     t.increments('id').primary();
     t.integer('cantilever_id')
@@ -46,6 +48,7 @@ export async function up(knex: Knex): Promise<void> {
 }
 
 export async function down(knex: Knex): Promise<void> {
+  dialectOf(knex, 'migration 20261202010300_files_mail_shapes');
   await knex.schema.dropTable('shapes');
   await knex.schema.dropTable('outbox');
   await knex.schema.dropTable('attachments');

@@ -8,6 +8,7 @@
  */
 import { mkdirSync, rmSync } from 'node:fs';
 import { realHost, resolveChromium } from './lib/chromium';
+import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
 import { report, runNode, type Finished } from './lib/processes';
 import { countReport, type Tally } from './lib/vitest-report';
 
@@ -20,6 +21,8 @@ interface VitestRun {
   env?: Record<string, string>;
   /** Starts only once the client build has finished (the browser tests serve dist/). */
   needsBuild?: boolean;
+  /** Runs on the throwaway PostgreSQL cluster (TEST_PG_URL); fails as one step when PostgreSQL is missing. */
+  needsPg?: boolean;
 }
 
 /**
@@ -28,6 +31,8 @@ interface VitestRun {
  */
 const VITEST_RUNS: VitestRun[] = [
   { label: 'unit-client-api', projects: ['unit', 'client', 'api'] },
+  // The API suite again on PostgreSQL, with the multi-instance test (tests/server/multi-instance.test.ts).
+  { label: 'api-postgres', projects: ['api'], needsPg: true },
   { label: 'e2e', projects: ['e2e'], needsBuild: true },
 ];
 
@@ -64,8 +69,10 @@ const BUILD = { label: 'build', args: ['--import', 'tsx', 'scripts/build.ts', '-
 
 const OUT_DIR = 'tests/output';
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
+let pg: PgCluster | null = null;
 
 function finish(): never {
+  pg?.stop();
   const skipped = total.skipped ? `, ${total.skipped} skipped` : '';
   console.log(`\n${total.passed} passed, ${total.failed} failed${skipped}`);
   process.exit(total.failed > 0 ? 1 : 0);
@@ -90,7 +97,8 @@ async function vitestRun(run: VitestRun, chromium: string): Promise<void> {
   args.push('--reporter=default', '--reporter=json', `--outputFile=${file}`);
   console.log(`\n=== tests (${run.label}): vitest ${args.slice(1).join(' ')}`);
   const started = Date.now();
-  const r = await runNode(args, { env: { ...process.env, CHROMIUM_PATH: chromium, ...run.env } });
+  const pgEnv: Record<string, string> = run.needsPg && pg ? { TEST_PG_URL: pg.url } : {};
+  const r = await runNode(args, { env: { ...process.env, CHROMIUM_PATH: chromium, ...pgEnv, ...run.env } });
   report(`tests (${run.label})`, r, started);
   const tally = countReport(file, r.ok);
   if (tally.note) console.log(`=== tests (${run.label}): ${tally.note}`);
@@ -113,6 +121,18 @@ async function main(): Promise<void> {
   const checks = Promise.all(CHECKS.map((c) => sideStep(c.label, c.args)));
   const build = sideStep(BUILD.label, BUILD.args);
   for (const run of VITEST_RUNS) {
+    if (run.needsPg && !pg) {
+      try {
+        if (!findPgBin())
+          throw new Error('PostgreSQL is not installed (Debian: apt-get install -y postgresql)');
+        pg = await startPgCluster();
+        console.log(`\n=== PostgreSQL for the ${run.label} run: ${pg.url} (binaries in ${pg.bin})`);
+      } catch (err) {
+        console.log(`=== tests (${run.label}): not run: ${err instanceof Error ? err.message : String(err)}`);
+        total.failed += 1;
+        continue;
+      }
+    }
     if (run.needsBuild && !(await build).ok) {
       console.log(`=== tests (${run.label}): not run, the client build failed`);
       total.failed += 1;

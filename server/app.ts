@@ -27,10 +27,13 @@ import { hostCheck } from './middleware/host-check';
 import { passwordChangeGate } from './middleware/password-change';
 import { sameOrigin } from './middleware/same-origin';
 import { serveClient } from './static-client';
+import { createStorage, type Storage } from './storage/storage';
 
 export interface AppDeps {
   db: Knex;
   mail: MailKick;
+  /** Default: the storage the configuration names (createStorage). */
+  storage?: Storage;
 }
 
 export type ReachlineApp = Express & { closeApp(): void };
@@ -44,7 +47,8 @@ const authGate: RequestHandler = (req, res, next) => {
 };
 
 export function createApp(config: Config, deps: AppDeps): ReachlineApp {
-  const ctx: AppContext = { config, db: deps.db, mail: deps.mail };
+  const storage = deps.storage ?? createStorage(config);
+  const ctx: AppContext = { config, db: deps.db, mail: deps.mail, storage };
   const app = express() as ReachlineApp;
   app.disable('x-powered-by');
   // Only the configured proxies' X-Forwarded-For is believed (a hop count or their addresses).

@@ -1,6 +1,7 @@
 /** What every feature needs: the configuration, the database and a way to wake the mail worker. */
 import type { Knex } from 'knex';
 import type { Config } from './env';
+import type { Storage } from './storage/storage';
 
 export interface MailKick {
   /** Called after a commit that queued mail. */
@@ -11,4 +12,6 @@ export interface AppContext {
   config: Config;
   db: Knex;
   mail: MailKick;
+  /** Attachment bytes: the local folder or an S3-compatible store. */
+  storage: Storage;
 }

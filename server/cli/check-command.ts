@@ -15,25 +15,36 @@ export interface CliIo {
   readStdin(): Promise<string>;
 }
 
-export async function checkCommand(source: string, stations: boolean, io: CliIo): Promise<number> {
+/** Reads and parses a JSON document from a file or standard input; problems go to stderr. */
+export async function readDocument(
+  source: string,
+  io: CliIo,
+): Promise<{ ok: true; json: unknown } | { ok: false }> {
   let text: string;
   try {
     text = source === '-' ? await io.readStdin() : await readFile(source, 'utf8');
   } catch (e) {
-    return invalid(io, [
+    invalid(io, [
       {
         path: '(document)',
         message: `cannot read ${source}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`,
       },
     ]);
+    return { ok: false };
   }
-  let json: unknown;
   try {
     // Editors on some systems save UTF-8 with a byte-order mark; JSON.parse refuses it.
-    json = JSON.parse(text.replace(/^\uFEFF/, ''));
+    return { ok: true, json: JSON.parse(text.replace(/^\uFEFF/, '')) as unknown };
   } catch (e) {
-    return invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
+    invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
+    return { ok: false };
   }
+}
+
+export async function checkCommand(source: string, stations: boolean, io: CliIo): Promise<number> {
+  const read = await readDocument(source, io);
+  if (!read.ok) return 2;
+  const json = read.json;
   const outcome = checkDocument(json, { stations });
   if (!outcome.ok) return invalid(io, outcome.issues);
   const { result } = outcome;
@@ -48,7 +59,9 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   return result.ok ? 0 : 1;
 }
 
+/** One line per problem, whatever the message holds (a file's own text may carry line breaks). */
 function invalid(io: CliIo, issues: readonly FieldIssue[]): number {
-  for (const i of issues) io.err(`${i.path}: ${i.message}\n`);
+  const oneLine = (t: string) => t.replace(/\s*[\r\n]+\s*/g, ' ');
+  for (const i of issues) io.err(`${oneLine(i.path || '(document)')}: ${oneLine(i.message)}\n`);
   return 2;
 }

@@ -1,10 +1,11 @@
 /**
- * The `reachline` command line (bin.js runs it through tsx). Commands: check, shapes, --help.
+ * The `reachline` command line (bin.js runs it through tsx). Commands: check, lightest, shapes, --help.
  * Returns the exit code: 0 all checks pass, 1 a check fails, 2 invalid input or usage.
  */
 import { adminCreateCommand } from './admin-command';
 import { parseArgs } from './args';
 import { checkCommand, type CliIo } from './check-command';
+import { lightestCommand } from './lightest-command';
 import { reportCommand } from './report-command';
 import { shapesCommand } from './shapes-command';
 
@@ -12,6 +13,7 @@ export const HELP = `reachline: check a steel cantilever deck design from the co
 
 Usage:
   reachline check <design.json | ->  [--stations]
+  reachline lightest <design.json | ->  [--families W,HSS,PIPE,C]
   reachline report <design.json | -> -o <out.pdf>
   reachline shapes [--json] [--family W|HSS|PIPE|C]
   reachline admin create --email <e-mail> [--name <display name>]  < password
@@ -20,6 +22,13 @@ Usage:
 Commands:
   check <file>     Validate a design document (JSON, see the engine contract) and print the
                    result document as JSON on standard output. Use - to read standard input.
+  lightest <file>  Put every shape of the families into the design (same length, loads and
+                   connection), run each as a full design and print JSON: "passing" ordered
+                   by steel weight, lightest first, each with its governing check and ratio,
+                   then "failing" with the check that fails. For a tapered W design each W
+                   gets the shallowest tip depth that passes ("tipDepth", absent when only
+                   the full depth passes). Exit 0 when at
+                   least one shape passes, 1 when none does, 2 for invalid input.
   report <file>    Run the engine on a design document and write a preliminary calculation
                    package (PDF: inputs, loads, diagrams, every check, the plate sketch and the
                    schedule row), stamped PRELIMINARY, NOT FOR CONSTRUCTION on every page.
@@ -30,6 +39,7 @@ Commands:
 Options:
   --stations       (check) also print the station arrays: x, shear, moment, deflection and depth
                    along the member, per load case and per combination, in the result's units.
+  --families <list>  (lightest) families to try, comma-separated; default W,HSS,PIPE,C.
   -o, --output <f> (report) where to write the PDF.
   --json           (shapes) print the whole table as one JSON object: the source and every shape
                    with its properties under the published database's column names.
@@ -73,6 +83,14 @@ export async function main(args: string[], io: CliIo = processIo): Promise<numbe
     if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
     if (a.positionals.length !== 1) return usage(io, 'check needs one design file (or - for standard input)');
     return checkCommand(a.positionals[0], a.flags.has('--stations'), io);
+  }
+  if (command === 'lightest') {
+    const a = parseArgs(rest, ['--help', '-h'], ['--families']);
+    if (a.flags.has('--help') || a.flags.has('-h')) return usage(io, null, 0);
+    if (a.unknown.length) return usage(io, `unknown option ${a.unknown.join(', ')}`);
+    if (a.positionals.length !== 1)
+      return usage(io, 'lightest needs one design file (or - for standard input)');
+    return lightestCommand(a.positionals[0], a.values.get('--families'), io);
   }
   if (command === 'report') {
     const a = parseArgs(rest, ['--help', '-h'], ['-o', '--output']);

@@ -1,4 +1,7 @@
-/** Opens the SQLite database through Knex with the pragmas every connection needs. */
+/**
+ * Opens the database through Knex: SQLite (a file path, the embedded default) with the pragmas
+ * every connection needs, or PostgreSQL (DATABASE_URL=postgres://…) through `pg`.
+ */
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import knex, { type Knex } from 'knex';
@@ -7,7 +10,26 @@ interface SqliteConnection {
   pragma(source: string): unknown;
 }
 
-export function createDb(databaseUrl: string): Knex {
+export type Dialect = 'sqlite' | 'postgres';
+
+export function isPostgresUrl(databaseUrl: string): boolean {
+  return /^postgres(ql)?:\/\//i.test(databaseUrl);
+}
+
+export interface DbOptions {
+  /** PostgreSQL pool size per app instance (DATABASE_POOL_MAX). */
+  poolMax?: number;
+}
+
+export function createDb(databaseUrl: string, options: DbOptions = {}): Knex {
+  if (isPostgresUrl(databaseUrl)) {
+    return knex({
+      client: 'pg',
+      connection: { connectionString: databaseUrl, application_name: 'reachline' },
+      pool: { min: 0, max: options.poolMax ?? 10 },
+      acquireConnectionTimeout: 10_000,
+    });
+  }
   if (databaseUrl !== ':memory:') mkdirSync(dirname(databaseUrl), { recursive: true });
   return knex({
     client: 'better-sqlite3',
@@ -32,13 +54,42 @@ export function createDb(databaseUrl: string): Knex {
   });
 }
 
-/** True when the database behind this Knex instance is SQLite (for SQLite-only statements). */
-export function isSqlite(db: Knex): boolean {
+/**
+ * Which of the two supported databases this Knex instance talks to. Any other client throws, so
+ * a migration or a statement written for these two can never run half-applied elsewhere.
+ */
+export function dialectOf(db: Knex, what = 'Reachline'): Dialect {
   const client = String(db.client.config.client);
-  return client === 'better-sqlite3' || client === 'sqlite3';
+  if (client === 'better-sqlite3' || client === 'sqlite3') return 'sqlite';
+  if (client === 'pg' || client === 'postgres' || client === 'postgresql') return 'postgres';
+  throw new Error(
+    `${what}: unsupported database client "${client}"; Reachline runs on SQLite (better-sqlite3) or PostgreSQL (pg) only`,
+  );
 }
 
-/** Timestamps are stored as ISO strings in UTC; PostgreSQL would hand back Date objects. */
+/** True when the database behind this Knex instance is SQLite (for SQLite-only statements). */
+export function isSqlite(db: Knex): boolean {
+  return dialectOf(db) === 'sqlite';
+}
+
+export function isPostgres(db: Knex): boolean {
+  return dialectOf(db) === 'postgres';
+}
+
+/**
+ * True when the error is a unique-key violation (two writers took the same number): PostgreSQL
+ * 23505, SQLite SQLITE_CONSTRAINT_UNIQUE / PRIMARYKEY.
+ */
+export function isUniqueViolation(err: unknown): boolean {
+  const e = err as { code?: string } | null;
+  return (
+    e?.code === '23505' ||
+    e?.code === 'SQLITE_CONSTRAINT_UNIQUE' ||
+    e?.code === 'SQLITE_CONSTRAINT_PRIMARYKEY'
+  );
+}
+
+/** Timestamps are stored as ISO strings in UTC; PostgreSQL hands back Date objects. */
 export function nowIso(): string {
   return new Date().toISOString();
 }

@@ -67,6 +67,8 @@ export async function startFakeSmtp(db: Knex | null, port = 0): Promise<FakeSmtp
     authOptional: true,
     disabledCommands: ['STARTTLS'],
     logger: false,
+    // Pooled clients keep idle connections open: close() ends them after this long, not after 30 s.
+    closeTimeout: 250,
     onData(stream, session, callback) {
       const chunks: Buffer[] = [];
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));

@@ -5,7 +5,7 @@
  */
 import type { Knex } from 'knex';
 import type { OutboxDto } from '../../shared/schemas/api';
-import { nowIso, toIso } from '../db/knex';
+import { isPostgres, nowIso, toIso } from '../db/knex';
 
 export interface OutboxRow {
   id: number;
@@ -20,6 +20,8 @@ export interface OutboxRow {
   created_at: string;
   sent_at: string | null;
   captured_at: string | null;
+  claim_token?: string | null;
+  claimed_at?: string | null;
 }
 
 export interface OutgoingMail {
@@ -74,10 +76,54 @@ export async function dueMail(db: Knex, now: string, limit = 20): Promise<Outbox
     .limit(limit);
 }
 
-export async function markSent(db: Knex, id: number): Promise<void> {
-  await db('outbox')
+/**
+ * Claims up to `limit` due messages for one worker: in one UPDATE, the rows get this worker's
+ * token and their next_attempt_at moves to the end of the lease, so no other worker (another app
+ * instance) picks them while this one sends. PostgreSQL: the candidate rows are locked with
+ * FOR UPDATE SKIP LOCKED (two claimers never wait for or take each other's rows); SQLite: the
+ * single writer makes the UPDATE atomic. A worker that dies holding a claim leaves the row pending
+ * and due again when the lease ends: it is sent later, never lost.
+ */
+export async function claimDueMail(
+  db: Knex,
+  token: string,
+  leaseMs: number,
+  limit = 20,
+): Promise<OutboxRow[]> {
+  const now = new Date();
+  const candidates = db('outbox')
+    .select('id')
+    .where({ status: 'pending' })
+    .andWhere('next_attempt_at', '<=', now.toISOString())
+    .orderBy('id')
+    .limit(limit);
+  if (isPostgres(db)) candidates.forUpdate().skipLocked();
+  const rows = (await db('outbox')
+    .whereIn('id', candidates)
+    .update({
+      claim_token: token,
+      claimed_at: now.toISOString(),
+      next_attempt_at: new Date(now.getTime() + leaseMs).toISOString(),
+    })
+    .returning('*')) as OutboxRow[];
+  return rows.sort((a, b) => a.id - b.id);
+}
+
+/** Marks a claimed message sent; false when the claim was lost (the lease ran out and another worker took it). */
+export async function markSent(db: Knex, id: number, token?: string): Promise<boolean> {
+  const n = await db('outbox')
     .where({ id })
-    .update({ status: 'sent', sent_at: nowIso(), last_error: null, attempts: db.raw('attempts + 1') });
+    .modify((q) => {
+      if (token) q.andWhere({ claim_token: token });
+    })
+    .update({
+      status: 'sent',
+      sent_at: nowIso(),
+      last_error: null,
+      attempts: db.raw('attempts + 1'),
+      claim_token: null,
+    });
+  return n > 0;
 }
 
 export async function markAttemptFailed(
@@ -85,10 +131,15 @@ export async function markAttemptFailed(
   id: number,
   error: string,
   nextAttemptAt: string | null,
+  token?: string,
 ): Promise<void> {
   await db('outbox')
     .where({ id })
+    .modify((q) => {
+      if (token) q.andWhere({ claim_token: token });
+    })
     .update({
+      claim_token: null,
       status: nextAttemptAt ? 'pending' : 'failed',
       attempts: db.raw('attempts + 1'),
       last_error: error.slice(0, 1000),
@@ -102,7 +153,11 @@ export async function markCaptured(db: Knex, id: number): Promise<void> {
 
 /** Makes failed and waiting messages due now (the admin's "retry now"). */
 export async function retryNow(db: Knex): Promise<number> {
-  return db('outbox')
-    .whereIn('status', ['pending', 'failed'])
-    .update({ status: 'pending', next_attempt_at: nowIso() });
+  return (
+    db('outbox')
+      .whereIn('status', ['pending', 'failed'])
+      // A message being sent right now (claimed, lease running) stays with its worker.
+      .where((q) => q.whereNull('claim_token').orWhere('status', 'failed'))
+      .update({ status: 'pending', next_attempt_at: nowIso() })
+  );
 }

@@ -204,13 +204,6 @@ export interface CommentDto {
 }
 
 // ---- attachments, shapes, outbox -------------------------------------------------------------
-export const ATTACHMENT_TYPES = [
-  'application/pdf',
-  'image/png',
-  'image/jpeg',
-  'image/vnd.dxf',
-  'text/csv',
-] as const;
 export interface AttachmentDto {
   id: number;
   cantileverId: number;

@@ -18,7 +18,7 @@ beforeAll(async () => {
   await e2e.signInAs(context, 'engineer');
   await page.goto('/projects');
   await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
   await page.getByTestId('tip-deflection').waitFor();
 });
 

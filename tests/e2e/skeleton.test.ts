@@ -64,7 +64,7 @@ describe('skeleton: sign in, edit, save, reload', () => {
     // the project page states pass/fail words, so it carries the caution too
     expect(await page.getByTestId('caution-footer').textContent()).toContain('licensed engineer');
     await e2e.screenshot(page, 'project');
-    await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+    await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
     await page.getByTestId('tip-deflection').waitFor();
     expect(await page.getByTestId('caution').textContent()).toContain('licensed engineer');
     expect(await page.getByTestId('verdict').textContent()).toMatch(/checks/);

@@ -1,7 +1,9 @@
 /**
- * A real migrated SQLite database per test file: the migrations run once into a template file
- * (named by a hash of the migration sources, written atomically so parallel workers can share it),
- * and each test file gets its own copy in a fresh temporary folder.
+ * A real migrated database per test file. SQLite (the default): the migrations run once into a
+ * template file (named by a hash of the migration sources, written atomically so parallel workers
+ * can share it), and each test file gets its own copy in a fresh temporary folder. PostgreSQL
+ * (TEST_PG_URL, set by tests/helpers/pg-global-setup.ts): each test file gets its own database
+ * copied from the migrated template database.
  */
 import { createHash, randomUUID } from 'node:crypto';
 import {
@@ -17,6 +19,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createDb } from '../../server/db/knex';
 import { migrateLatest } from '../../server/db/migrate';
+import { createPgTestDatabase } from './pg-template';
+
+/** True when this run's API tests use PostgreSQL (TEST_PG=1 through the api project's global setup). */
+export const ON_POSTGRES = Boolean(process.env.TEST_PG_URL);
 
 const MIGRATIONS_DIR = new URL('../../migrations/', import.meta.url);
 
@@ -58,6 +64,16 @@ export interface TestDirs {
 
 /** A temporary folder holding a copy of the migrated template database and an uploads folder. */
 export async function freshTestDirs(): Promise<TestDirs> {
+  if (process.env.TEST_PG_URL) {
+    const root = mkdtempSync(join(tmpdir(), 'reachline-test-'));
+    return {
+      root,
+      // The cluster is thrown away at the end of the run, with every database in it.
+      databaseUrl: await createPgTestDatabase(process.env.TEST_PG_URL),
+      uploadDir: join(root, 'uploads'),
+      remove: () => rmSync(root, { recursive: true, force: true }),
+    };
+  }
   template ??= buildTemplate();
   const source = await template;
   const root = mkdtempSync(join(tmpdir(), 'reachline-test-'));

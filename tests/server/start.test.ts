@@ -7,10 +7,14 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/seed';
 import { startServer, type RunningServer } from '../../server/start';
 
 describe('configuration', () => {
-  it('refuses a PostgreSQL URL with a clear message', () => {
-    expect(() => parseEnv({ DATABASE_URL: 'postgres://u:p@db/reachline' })).toThrow(
-      /PostgreSQL is not supported yet/,
+  it('takes a PostgreSQL URL as it is and refuses other schemes with a clear message', () => {
+    expect(parseEnv({ DATABASE_URL: 'postgres://u:p@db/reachline' }).databaseUrl).toBe(
+      'postgres://u:p@db/reachline',
     );
+    expect(() => parseEnv({ DATABASE_URL: 'mysql://u:p@db/reachline' })).toThrow(
+      /DATABASE_URL: must be a plain path to an SQLite file or a postgres:\/\/ URL/,
+    );
+    expect(() => parseEnv({ STORAGE_URL: 'ftp://files' })).toThrow(/STORAGE_URL/);
   });
 
   it('names the bad variable', () => {

@@ -1,10 +1,9 @@
 /** Storing and reading attachments: members only; design roles upload. */
 import { createHash, randomUUID } from 'node:crypto';
-import { mkdir, unlink, writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
 import { EDIT_RIGHTS, type AttachmentDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
-import { badRequest, forbidden, notFound } from '../../lib/http-error';
+import { HttpError, badRequest, forbidden, notFound } from '../../lib/http-error';
+import { ChecksumError, MissingObjectError } from '../../storage/storage';
 import { cantileverForMember } from '../projects/project-access';
 import {
   findAttachment,
@@ -46,10 +45,8 @@ export async function storeAttachment(
   const sniff = await sniffAttachment(file.buffer, originalName);
   if (!sniff.ok)
     throw badRequest(`The file was refused: ${sniff.reason}.`, [{ path: 'file', message: sniff.reason }]);
-  await mkdir(ctx.config.uploadDir, { recursive: true });
   const storedName = randomUUID();
-  const path = join(ctx.config.uploadDir, storedName);
-  await writeFile(path, file.buffer, { flag: 'wx', mode: 0o600 });
+  await ctx.storage.put(storedName, file.buffer, sniff.mime);
   try {
     const id = await insertAttachment(ctx.db, {
       cantilever_id: cantileverId,
@@ -62,7 +59,7 @@ export async function storeAttachment(
     });
     return (await getAttachmentDto(ctx.db, id))!;
   } catch (err) {
-    await unlink(path).catch(() => undefined);
+    await ctx.storage.delete(storedName).catch(() => undefined);
     throw err;
   }
 }
@@ -71,7 +68,7 @@ export async function attachmentForMember(
   ctx: AppContext,
   user: Express.User,
   attachmentId: number,
-): Promise<{ row: AttachmentRow; path: string }> {
+): Promise<{ row: AttachmentRow; bytes: Buffer }> {
   const row = await findAttachment(ctx.db, attachmentId);
   if (!row) throw notFound('attachment');
   try {
@@ -79,5 +76,16 @@ export async function attachmentForMember(
   } catch {
     throw notFound('attachment');
   }
-  return { row, path: join(ctx.config.uploadDir, row.stored_name) };
+  try {
+    return { row, bytes: await ctx.storage.get(row.stored_name, row.sha256) };
+  } catch (err) {
+    if (err instanceof MissingObjectError) throw notFound('attachment file');
+    if (err instanceof ChecksumError)
+      throw new HttpError(
+        500,
+        'checksum_mismatch',
+        'The stored file does not match its checksum; it is not served.',
+      );
+    throw err;
+  }
 }

@@ -9,7 +9,7 @@ import type {
 } from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
-import { nowIso, toBool, toIso } from '../../db/knex';
+import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
 import type { RevisionRow } from '../projects/project-access';
 
 type Db = Knex | Knex.Transaction;
@@ -103,6 +103,15 @@ export async function getRevisionDto(db: Db, revisionId: number): Promise<Revisi
     result: JSON.parse(row.result_json) as DesignResult,
     reviews,
   };
+}
+
+/**
+ * Locks the cantilever row until the transaction ends (SELECT … FOR UPDATE on PostgreSQL), so
+ * saves and reviews of one cantilever on several instances go one at a time. SQLite's single
+ * writer already serialises them.
+ */
+export async function lockCantilever(trx: Knex.Transaction, cantileverId: number): Promise<void> {
+  if (isPostgres(trx)) await trx('cantilevers').where({ id: cantileverId }).forUpdate().first('id');
 }
 
 export async function latestRevision(db: Db, cantileverId: number): Promise<RevisionRow | undefined> {

@@ -11,9 +11,15 @@ import type {
   StaleSaveBody,
 } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
+import { isUniqueViolation } from '../../db/knex';
 import { HttpError, conflict, forbidden, notFound } from '../../lib/http-error';
 import { recordAudit } from '../audit/audit.repository';
-import { cantileverForMember, revisionForMember, type CantileverRow } from '../projects/project-access';
+import {
+  cantileverForMember,
+  revisionForMember,
+  type CantileverRow,
+  type RevisionRow,
+} from '../projects/project-access';
 import { assertMayChange } from './edit-rights';
 import { mailDecision, mailSubmission, type SubmitNotice } from './review-mail';
 import { evaluateWithSections, storedSections } from './evaluate';
@@ -22,6 +28,7 @@ import {
   insertReview,
   insertRevision,
   latestRevision,
+  lockCantilever,
   listRevisionSummaries,
   listSubmittedFor,
   reviewStates,
@@ -38,16 +45,20 @@ export async function saveRevision(
   cantilever: CantileverRow,
   body: CreateRevisionRequest,
 ): Promise<RevisionDto> {
+  const stale = async (db: Knex, latest: RevisionRow | undefined) => {
+    const latestDto = latest ? await getRevisionDto(db, latest.id) : null;
+    const message = latest
+      ? `Revision ${latest.number} was saved since you started from ${body.baseRevision === null ? 'nothing' : `revision ${body.baseRevision}`}; compare and save again.`
+      : 'This cantilever has no revisions yet; save with baseRevision null.';
+    const extra: Omit<StaleSaveBody, 'error'> | { latest: null } = { latest: latestDto as RevisionDto };
+    return new HttpError(409, 'stale_base', message, [], extra);
+  };
   const run = async (trx: Knex.Transaction) => {
+    // Several instances: the cantilever row is locked until commit (PostgreSQL), so the next number
+    // and the stale-base rule are decided by one save at a time. SQLite has one writer anyway.
+    await lockCantilever(trx, cantilever.id);
     const latest = await latestRevision(trx, cantilever.id);
-    if ((latest?.number ?? null) !== body.baseRevision) {
-      const latestDto = latest ? await getRevisionDto(trx, latest.id) : null;
-      const message = latest
-        ? `Revision ${latest.number} was saved since you started from ${body.baseRevision === null ? 'nothing' : `revision ${body.baseRevision}`}; compare and save again.`
-        : 'This cantilever has no revisions yet; save with baseRevision null.';
-      const extra: Omit<StaleSaveBody, 'error'> | { latest: null } = { latest: latestDto as RevisionDto };
-      throw new HttpError(409, 'stale_base', message, [], extra);
-    }
+    if ((latest?.number ?? null) !== body.baseRevision) throw await stale(trx, latest);
     assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input);
     const { result, sections } = await evaluateWithSections(trx, body.input, {
       stations: true,
@@ -67,7 +78,14 @@ export async function saveRevision(
     return (await getRevisionDto(trx, id)) as RevisionDto;
   };
   // Inside an outer transaction this nests as a savepoint.
-  return db.transaction(run);
+  try {
+    return await db.transaction(run);
+  } catch (err) {
+    // The lock makes this rare; a writer that took the number anyway (another process on SQLite,
+    // a save outside the lock) is a stale base too: 409 with the latest, never a 500.
+    if (!isUniqueViolation(err)) throw err;
+    throw await stale(db, await latestRevision(db, cantilever.id));
+  }
 }
 
 export async function saveRevisionForMember(
@@ -117,6 +135,7 @@ export async function submitRevision(
     throw forbidden(`Your role (${user.role}) may not submit a revision for review.`);
   }
   const told: SubmitNotice = await ctx.db.transaction(async (trx) => {
+    await lockCantilever(trx, cantilever.id);
     const state = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
     if (state === 'submitted')
       throw conflict('already_submitted', `Revision ${revision.number} is already waiting for review.`);
@@ -153,6 +172,7 @@ export async function reviewRevision(
     throw forbidden('You may not review your own revision; ask another engineer.');
   const state = body.decision === 'approve' ? 'approved' : 'changes-requested';
   await ctx.db.transaction(async (trx) => {
+    await lockCantilever(trx, cantilever.id);
     const current = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
     if (current !== 'submitted') {
       throw conflict(

@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { FormProvider, useForm, useFormState } from 'react-hook-form';
+import { useNavigate } from 'react-router-dom';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { UnitSystem } from '../../../../shared/engine/units';
 import {
@@ -10,7 +11,10 @@ import {
   type UserDto,
 } from '../../../../shared/schemas/api';
 import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
+import { paths } from '../../../config/paths';
 import { useUpdateMe } from '../../../lib/api/me/update-me';
+import type { DeskProposal } from '../../../lib/desk-proposal';
+import { studyState } from '../../../lib/study-handoff';
 import { ShapePickerDialog } from '../../../components/shapes/shape-picker-dialog';
 import { useShapes } from '../../../lib/api/shapes/get-shapes';
 import { useLiveDesign } from '../hooks/use-live-design';
@@ -38,10 +42,20 @@ export interface DeskEditorProps {
   toUserUnits: (doc: DesignDocument) => DesignDocument;
   /** The cantilever's files panel (the attachments feature, composed by the route). */
   files: ReactNode;
+  /** A document handed over by the reach study: loaded as unsaved changes on top of the revision. */
+  proposal?: DeskProposal | null;
 }
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
-export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits, files }: DeskEditorProps) {
+export function DeskEditor({
+  cantilever,
+  revision,
+  initialDoc,
+  user,
+  toUserUnits,
+  files,
+  proposal,
+}: DeskEditorProps) {
   const form = useForm<DesignDocument, unknown, DesignInput>({
     resolver: zodResolver(designSchema),
     mode: 'onChange',
@@ -64,6 +78,20 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const switchUnits = useUnitsSwitch(form);
   const updateMe = useUpdateMe();
   const rights = EDIT_RIGHTS[user.role];
+
+  const navigate = useNavigate();
+  const [fromStudy] = useState(() => proposal ?? null);
+  useEffect(() => {
+    // The saved document stays the form's default (so the change reads as unsaved); the values are the proposal's.
+    if (fromStudy) form.reset(toUserUnits(fromStudy.document), { keepDefaultValues: true });
+  }, [form, fromStudy, toUserUnits]);
+  const openStudy = useCallback(
+    () =>
+      navigate(paths.study(cantilever.id), {
+        state: studyState({ document: form.getValues(), unsaved: isDirty }),
+      }),
+    [navigate, cantilever.id, form, isDirty],
+  );
 
   useEffect(() => {
     submit(form.getValues());
@@ -136,6 +164,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
             live={live}
             units={units}
             onUnits={onUnits}
+            onStudy={openStudy}
             save={
               <DeskSave
                 cantileverId={cantilever.id}
@@ -154,6 +183,16 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
               aria-label="Design inputs"
               className="flex flex-col gap-2"
             >
+              {fromStudy ? (
+                <p
+                  role="status"
+                  className="rounded border border-oxide-300 bg-oxide-50 p-2 text-sm"
+                  data-testid="from-study"
+                >
+                  Loaded from the {fromStudy.source === 'study' ? 'reach study' : 'lightest sections list'}:{' '}
+                  <strong>{fromStudy.label}</strong>. These are unsaved changes; save a revision to keep them.
+                </p>
+              ) : null}
               <IssueSummary issues={live.issues} failure={live.failure} />
               <DeskInputs
                 mayEditMember={rights.member}

@@ -21,7 +21,10 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
           <th className="py-1.5 pr-3 font-medium">Latest approved</th>
           <th className="py-1.5 pr-3 font-medium">Qty</th>
           <th className="py-1.5 pr-3 font-medium">Checks</th>
-          <th className="py-1.5 font-medium">Updated</th>
+          <th className="py-1.5 pr-3 font-medium">Updated</th>
+          <th className="py-1.5 font-medium">
+            <span className="sr-only">Study</span>
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -70,7 +73,14 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
             <td className="py-2 pr-3">
               <VerdictWord ok={c.ok} />
             </td>
-            <td className="num py-2 text-xs text-concrete-600">{new Date(c.updatedAt).toLocaleString()}</td>
+            <td className="num py-2 pr-3 text-xs text-concrete-600">
+              {new Date(c.updatedAt).toLocaleString()}
+            </td>
+            <td className="py-2">
+              <Link to={paths.study(c.id)} className="text-xs text-oxide-700 underline">
+                Reach study
+              </Link>
+            </td>
           </tr>
         ))}
       </tbody>
