@@ -8,8 +8,8 @@ import { formatQuantity } from '../../../shared/engine/units';
 
 const EQUATIONS: Record<string, { LRFD: string; ASD: string }> = {
   'member.flexure': {
-    LRFD: 'Mu <= φb Mn, φb = 0.90; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling), Cb = 1.0',
-    ASD: 'Ma <= Mn / Ωb, Ωb = 1.67; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling), Cb = 1.0',
+    LRFD: 'Mu <= φb Mn, φb = 0.90; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling) over the governing unbraced segment (see the note)',
+    ASD: 'Ma <= Mn / Ωb, Ωb = 1.67; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling) over the governing unbraced segment (see the note)',
   },
   'member.flexure.uplift': {
     LRFD: 'Mu <= φb Mn with the top flange in compression (net upward load), φb = 0.90',
