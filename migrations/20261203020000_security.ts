@@ -1,5 +1,5 @@
 /**
- * Hardening (issue 15): shapes owned by a project or by the organisation, the section properties a
+ * Hardening: shapes owned by a project or by the organisation, the section properties a
  * revision was computed with, password state on accounts, failed sign-ins in a table (so limits
  * hold across app instances), and SQLite triggers against INSERT OR REPLACE on revisions and
  * against a review row inserted after an approval, with plpgsql twins on PostgreSQL (where the

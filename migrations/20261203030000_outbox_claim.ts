@@ -1,5 +1,5 @@
 /**
- * Several app instances share one outbox (issue 12): a worker claims a row before it sends it.
+ * Several app instances share one outbox: a worker claims a row before it sends it.
  * The claim writes a token and pushes next_attempt_at to the end of a lease; the send is marked
  * only by the claimer holding that token, and a claim whose worker died becomes due again when
  * its lease runs out (a retry, never a loss).

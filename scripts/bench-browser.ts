@@ -6,6 +6,9 @@
  * next task after that commit, after any frame painted first) get that figure printed as well.
  * Guard: at the moment "desk-redraw" is measured, the chart lines must already be the ones on
  * screen once everything has settled; the run fails otherwise.
+ * Then the reach study: a 40 x 40 study of length x tip depth on the same cantilever, from the click
+ * on "Run study" (mark "study-start-<run>") to the first canvas paint with points
+ * ("study-first-paint") and to the paint with every point ("study-complete"); median of 3 runs.
  * Builds nothing: run `npx vite build` first. Usage:
  *   npm run bench:browser [-- --runs 40] [-- --json] [-- --profile] [-- --trace] [-- --dist DIR]
  * `--profile` records a CPU profile of the main thread over the changes and prints the functions
@@ -107,6 +110,36 @@ function summariseProfile(
   }
   const top = (m: Map<string, number>, n: number) => [...m].sort((a, b) => b[1] - a[1]).slice(0, n);
   return { byFunction: top(byFunction, 30), byFile: top(byFile, 15), inclusive: top(inclusive, 60) };
+}
+
+/** Runs the 40 x 40 study `repeats` times; medians of the first-paint and complete measures (ms). */
+async function studyBench(page: import('playwright-core').Page, cantileverId: number, repeats: number) {
+  await page.goto(`/cantilevers/${cantileverId}/study`);
+  await page.locator('#study-x-steps').waitFor();
+  await page.locator('#study-x-steps').fill('40');
+  await page.locator('#study-y-steps').fill('40');
+  // The pool of workers starts with the screen; let it load the engine as a person would before the first run.
+  await page.waitForTimeout(1000);
+  for (let k = 0; k < repeats; k += 1) {
+    await page.getByRole('button', { name: /Run study|Restart study/ }).click();
+    await page.waitForFunction(
+      (n) => performance.getEntriesByName('study-complete', 'measure').length > n,
+      k,
+      {
+        timeout: 120_000,
+        polling: 20,
+      },
+    );
+  }
+  const read = (name: string) =>
+    page.evaluate((n) => performance.getEntriesByName(n, 'measure').map((e) => e.duration), name);
+  const mid = (v: number[]) => [...v].sort((a, b) => a - b)[Math.floor(v.length / 2)];
+  const workers = await page.evaluate(() => navigator.hardwareConcurrency);
+  return {
+    first: mid(await read('study-first-paint')),
+    complete: mid(await read('study-complete')),
+    workers,
+  };
 }
 
 function percentile(sorted: number[], p: number): number {
@@ -276,6 +309,7 @@ async function main() {
     // The lower quartile moves least when other work shares the machine: useful to compare builds.
     const p25 = percentile(sorted, 0.25);
     const round = (n: number) => Math.round(n * 10) / 10;
+    const study = await studyBench(page, project.cantilevers[0].id, 3);
     if (json)
       console.log(
         JSON.stringify({
@@ -288,6 +322,9 @@ async function main() {
               : null,
           mainThreadCpuPerChangeMs: round(cpuPerChange),
           runs: samples.length,
+          studyFirstPaintMs: round(study.first),
+          studyCompleteMs: round(study.complete),
+          studyWorkers: study.workers,
         }),
       );
     if (!json && nextTask.length > 0) {
@@ -299,6 +336,10 @@ async function main() {
     if (!json)
       console.log(
         `desk redraw over ${samples.length} changes: median ${round(median)} ms, p95 ${round(p95)} ms, p25 ${round(p25)} ms (target: median under 50 ms)`,
+      );
+    if (!json)
+      console.log(
+        `reach study 40 x 40 (${study.workers} workers), median of 3: first paint ${round(study.first)} ms, complete ${round(study.complete)} ms (target: complete under 1500 ms)`,
       );
   } finally {
     await context.close();

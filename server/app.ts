@@ -15,6 +15,7 @@ import { attachmentsRouter } from './features/attachments/attachments.router';
 import { authRouter } from './features/auth/auth.router';
 import { checkRouter } from './features/check/check.router';
 import { commentsRouter } from './features/comments/comments.router';
+import { packageRouter } from './features/package/package.router';
 import { plateScheduleRouter } from './features/plate-schedule/plate-schedule.router';
 import { projectsRouter } from './features/projects/projects.router';
 import { revisionsRouter } from './features/revisions/revisions.router';
@@ -127,6 +128,7 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   api.use(projectsRouter(ctx));
   api.use(commentsRouter(ctx));
   api.use(plateScheduleRouter(ctx));
+  api.use(packageRouter(ctx));
   api.use(revisionsRouter(ctx));
   api.use(attachmentsRouter(ctx));
   api.use(shapesRouter(ctx));

@@ -15,29 +15,42 @@ export interface CliIo {
   readStdin(): Promise<string>;
 }
 
-export async function checkCommand(source: string, stations: boolean, io: CliIo): Promise<number> {
+/** Reads and parses a JSON document from a file or standard input; problems go to stderr. */
+export async function readDocument(
+  source: string,
+  io: CliIo,
+): Promise<{ ok: true; json: unknown } | { ok: false }> {
   let text: string;
   try {
     text = source === '-' ? await io.readStdin() : await readFile(source, 'utf8');
   } catch (e) {
-    return invalid(io, [
+    invalid(io, [
       {
         path: '(document)',
         message: `cannot read ${source}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`,
       },
     ]);
+    return { ok: false };
   }
-  let json: unknown;
   try {
     // Editors on some systems save UTF-8 with a byte-order mark; JSON.parse refuses it.
-    json = JSON.parse(text.replace(/^\uFEFF/, ''));
+    return { ok: true, json: JSON.parse(text.replace(/^\uFEFF/, '')) as unknown };
   } catch (e) {
-    return invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
+    invalid(io, [{ path: '(document)', message: `is not valid JSON: ${(e as Error).message}` }]);
+    return { ok: false };
   }
+}
+
+export async function checkCommand(source: string, stations: boolean, io: CliIo): Promise<number> {
+  const read = await readDocument(source, io);
+  if (!read.ok) return 2;
+  const json = read.json;
   const outcome = checkDocument(json, { stations });
   if (!outcome.ok) return invalid(io, outcome.issues);
   const { result } = outcome;
   io.out(`${JSON.stringify(result, null, 2)}\n`);
+  // Which way each combination bends the root: "up" puts the top flange and the other row of rods to work.
+  io.err(`combinations: ${result.member.combinations.map((c) => `${c.name} (${c.direction})`).join('; ')}\n`);
   const failed = result.checks.filter((c) => !c.ok).map((c) => c.id);
   io.err(
     failed.length
@@ -48,7 +61,9 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   return result.ok ? 0 : 1;
 }
 
+/** One line per problem, whatever the message holds (a file's own text may carry line breaks). */
 function invalid(io: CliIo, issues: readonly FieldIssue[]): number {
-  for (const i of issues) io.err(`${i.path}: ${i.message}\n`);
+  const oneLine = (t: string) => t.replace(/\s*[\r\n]+\s*/g, ' ');
+  for (const i of issues) io.err(`${oneLine(i.path || '(document)')}: ${oneLine(i.message)}\n`);
   return 2;
 }

@@ -9,6 +9,7 @@ import * as revisions from '../../migrations/20261202010200_revisions';
 import * as filesMailShapes from '../../migrations/20261202010300_files_mail_shapes';
 import * as security from '../../migrations/20261203020000_security';
 import * as outboxClaim from '../../migrations/20261203030000_outbox_claim';
+import * as cantileverQuantity from '../../migrations/20261203040000_cantilever_quantity';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -22,6 +23,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261202010300_files_mail_shapes': filesMailShapes,
   '20261203020000_security': security,
   '20261203030000_outbox_claim': outboxClaim,
+  '20261203040000_cantilever_quantity': cantileverQuantity,
 };
 
 const migrationSource: Knex.MigrationSource<string> = {
@@ -34,8 +36,4 @@ const migrationSource: Knex.MigrationSource<string> = {
 export async function migrateLatest(db: Knex): Promise<string[]> {
   const [, ran] = (await db.migrate.latest({ migrationSource })) as [number, string[]];
   return ran;
-}
-
-export async function rollbackAll(db: Knex): Promise<void> {
-  await db.migrate.rollback({ migrationSource }, true);
 }

@@ -11,7 +11,7 @@ import { designSchema } from '../../shared/schemas/design';
 import { toFieldIssues } from '../../shared/schemas/quantity';
 import { insertCantilever } from '../features/cantilevers/cantilevers.repository';
 import { addMember, insertProject } from '../features/projects/projects.repository';
-import { insertRevision } from '../features/revisions/revisions.repository';
+import { insertReview, insertRevision } from '../features/revisions/revisions.repository';
 import { findUserByEmail, insertUser } from '../features/users/users.repository';
 import { hashPassword, passwordProblem } from '../lib/password';
 import { ENTRY_CANOPY_DESIGN, EAST_DECK_DESIGN } from './demo-designs';
@@ -53,12 +53,15 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
         description: 'Six beams at 4 ft, web tapered to 7 in at the tip, posts on piers.',
         doc: EAST_DECK_DESIGN,
         author: ids.architect,
+        // Submitted by the architect and approved by the engineer: what the shop builds from.
+        approvedBy: ids.engineer as number | null,
       },
       {
         name: 'Entry canopy',
         description: 'Tube outriggers over the front door, end plates on the wall.',
         doc: ENTRY_CANOPY_DESIGN,
         author: ids.engineer,
+        approvedBy: null,
       },
     ];
     for (const d of designs) {
@@ -72,7 +75,7 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
         name: d.name,
         description: d.description,
       });
-      await insertRevision(trx, {
+      const revisionId = await insertRevision(trx, {
         cantileverId,
         number: 1,
         authorId: d.author,
@@ -81,6 +84,15 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
         result: evaluateDesign(parsed.data, { stations: true }),
         baseRevisionId: null,
       });
+      if (d.approvedBy !== null) {
+        await insertReview(trx, { revisionId, state: 'submitted', reviewerId: d.author, comment: '' });
+        await insertReview(trx, {
+          revisionId,
+          state: 'approved',
+          reviewerId: d.approvedBy,
+          comment: 'Checked against the shop drawings; approved for fabrication.',
+        });
+      }
     }
   });
 }

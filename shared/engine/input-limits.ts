@@ -9,6 +9,9 @@ import { toInternal } from './units';
 
 /** Longest cantilever the engine accepts, in (60 ft: far beyond any deck, short of absurd). */
 export const MAX_LENGTH = 720;
+/** Steepest taper the local-section checks accept: depth change / length (1:4, common practice, no source). */
+export const MAX_TAPER_SLOPE = 0.25;
+
 /** Shortest, in (1 ft: below that it is a bracket, not a cantilever beam). */
 export const MIN_LENGTH = 12;
 
@@ -39,6 +42,34 @@ export function inputProblems(input: DesignInput, L: number, Fy: number, E: numb
     problems.push({
       path: 'member.unbracedLength',
       message: `must not exceed the member length (${member.length}), got "${member.unbracedLength}"`,
+    });
+  }
+  const ls = member.lateralSupport;
+  if (ls && member.unbracedLength) {
+    problems.push({
+      path: 'member.unbracedLength',
+      message: 'give the braces in member.lateralSupport.braces instead of unbracedLength, not both',
+    });
+  }
+  (ls?.braces ?? []).forEach((b, i) => {
+    if (toInternal(b, 'length') >= L * (1 - 1e-9)) {
+      problems.push({
+        path: `member.lateralSupport.braces[${i}]`,
+        message: `must lie between the root and the tip (length ${member.length}), got "${b}"`,
+      });
+    }
+  });
+  const conn = input.connection;
+  if (conn?.post && conn.arrangement !== 'post-base') {
+    problems.push({
+      path: 'connection.post',
+      message: 'applies to a post base only (arrangement "post-base")',
+    });
+  } else if (conn?.post && !conn.footprint) {
+    problems.push({
+      path: 'connection.footprint',
+      message:
+        'name the post\'s section (e.g. { "shape": "HSS8X8X1/2" }) to check the post of height connection.post.height',
     });
   }
   if (!(Fy >= 20 && Fy <= 100)) {

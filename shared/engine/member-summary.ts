@@ -9,10 +9,11 @@ import type { MemberSection } from './sections/section-types';
 import type { EffectSummary, Stations, StationSeries } from './types';
 import { displayFactor, quantity, RESULT_UNITS, type UnitSystem } from './units';
 
+/** Root moment and shear as magnitudes (the direction says which way); tip deflection signed, down +. */
 function summary(r: Response, units: UnitSystem): EffectSummary {
   return {
-    rootMoment: quantity(r.M[0], 'moment', units),
-    rootShear: quantity(r.V[0], 'force', units),
+    rootMoment: quantity(Math.abs(r.M[0]), 'moment', units),
+    rootShear: quantity(Math.abs(r.V[0]), 'force', units),
     tipDeflection: quantity(r.tip, 'smallLength', units),
   };
 }
@@ -27,10 +28,25 @@ export function caseSummaries(
 }
 
 export function combinationSummaries(combos: readonly CombinationResponse[], units: UnitSystem) {
-  return combos.map((c) => ({ name: c.name, ...summary(c.response, units) }));
+  return combos.map((c) => ({
+    name: c.name,
+    direction: directionOf(c.response),
+    ...summary(c.response, units),
+  }));
 }
 
-function series(name: string, r: Response, units: UnitSystem): StationSeries {
+/** "up" when the root moment is sagging (net load lifts the tip), else "down". */
+export function directionOf(r: Response): 'down' | 'up' {
+  return r.M[0] < 0 ? 'up' : 'down';
+}
+
+function series(
+  name: string,
+  r: Response,
+  units: UnitSystem,
+  x: readonly number[],
+  theta0 = 0,
+): StationSeries {
   const fV = displayFactor('force', units);
   const fM = displayFactor('moment', units);
   const fy = displayFactor('smallLength', units);
@@ -38,8 +54,9 @@ function series(name: string, r: Response, units: UnitSystem): StationSeries {
     name,
     V: Array.from(r.V, (v) => v * fV),
     M: Array.from(r.M, (v) => v * fM),
-    deflection: Array.from(r.y, (v) => v * fy),
-    rotation: Array.from(r.theta),
+    // With a flexible root the whole member also turns by the root's rotation theta0.
+    deflection: Array.from(r.y, (v, i) => (v + theta0 * x[i]) * fy),
+    rotation: Array.from(r.theta, (t) => t + theta0),
   };
 }
 
@@ -49,15 +66,23 @@ export function stationArrays(
   section: MemberSection,
   combos: readonly CombinationResponse[],
   units: UnitSystem,
+  /** Root rotation of each case, rad (a flexible root); absent: a rigid root. */
+  rootRotation: Partial<Record<LoadCase, number>> = {},
 ): Stations {
+  const x = model.grid.x;
+  const comboRotation = (c: CombinationResponse) => {
+    let t = 0;
+    for (const [k, f] of Object.entries(c.factors) as [LoadCase, number][]) t += f * (rootRotation[k] ?? 0);
+    return t;
+  };
   const u = RESULT_UNITS[units];
   const fx = displayFactor('length', units);
   const fd = displayFactor('smallLength', units);
   return {
     units: { x: u.length, V: u.force, M: u.moment, deflection: u.smallLength, rotation: 'rad' },
     x: model.grid.x.map((x) => x * fx),
-    cases: model.cases.map((c) => series(c.case, c.response, units)),
-    combinations: combos.map((c) => series(c.name, c.response, units)),
+    cases: model.cases.map((c) => series(c.case, c.response, units, x, rootRotation[c.case] ?? 0)),
+    combinations: combos.map((c) => series(c.name, c.response, units, x, comboRotation(c))),
     depth: model.grid.x.map((x) => section.at(x / model.L).d * fd),
   };
 }

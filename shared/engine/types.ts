@@ -36,6 +36,8 @@ export interface Check {
   at?: Quantity;
   /** Plain words when something is off, and a suggestion. */
   note?: string;
+  /** member.flexure(.uplift): the effective length of the governing unbraced segment. */
+  effectiveLength?: Quantity;
 }
 
 /** Root demand and tip deflection for one case or one combination. */
@@ -47,6 +49,8 @@ export interface EffectSummary {
 
 export interface CombinationSummary extends EffectSummary {
   name: string;
+  /** The sense of the root moment: "up" when net load lifts the tip (top flange in compression). */
+  direction: 'down' | 'up';
 }
 
 /** Station arrays for the charts and `reachline check --stations` (display units). */
@@ -83,6 +87,10 @@ export interface MemberResult {
   cases: Partial<Record<LoadCase, EffectSummary>>;
   combinations: CombinationSummary[];
   frequency: Quantity;
+  /** Under the service combination that governs member.deflection.total: the member's bending and the root's rotation x length. */
+  tipDeflectionParts?: { member: Quantity; connection: Quantity };
+  /** Dead-load camber at the tip (the root's rotation included) and the rule used. */
+  recommendedCamber?: Quantity & { basis: string };
 }
 
 export interface ConnectionResult {
@@ -119,6 +127,8 @@ export interface RootDemand {
   V: number;
   /** Horizontal force at the root, kip (zero under gravity loads alone). */
   H: number;
+  /** The sense of the root moment (the rows of rods swap roles under "up"). */
+  direction?: 'down' | 'up';
 }
 
 /** The member's section at the root, as the default footprint on the plate (internal units, in). */
@@ -130,6 +140,8 @@ export interface RootFootprint {
   /** Width along B. */
   bf: number;
   tf: number;
+  /** Web thickness (or wall), in, when known. */
+  tw?: number;
 }
 
 /** A problem in a document that the schema alone cannot see (an unknown shape, a point load past the tip). */

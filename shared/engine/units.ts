@@ -75,19 +75,31 @@ export function dimensionWord(dimension: Dimension): string {
 
 export type ParseResult = { ok: true; value: number; unit: Unit } | { ok: false; message: string };
 
-const cache = new Map<string, ParseResult>();
+// One map per dimension, keyed by the text itself: a "dimension|text" key would be a new string to
+// build and hash on every call, and this runs for every quantity of every design (the reach study).
+const cache = new Map<Dimension, Map<string, ParseResult>>();
+let cached = 0;
 
 /**
  * Parses a quantity string and converts it to the internal unit of `dimension`.
  * A plain number, a unit of the wrong dimension or a non-finite value is refused.
  */
 export function parseQuantity(text: string, dimension: Dimension): ParseResult {
-  const key = `${dimension}|${text}`;
-  const hit = cache.get(key);
+  let byText = cache.get(dimension);
+  const hit = byText?.get(text);
   if (hit) return hit;
   const result = parseUncached(text, dimension);
-  if (cache.size > 5000) cache.clear();
-  cache.set(key, result);
+  if (cached > 5000) {
+    cache.clear();
+    cached = 0;
+    byText = undefined;
+  }
+  if (!byText) {
+    byText = new Map();
+    cache.set(dimension, byText);
+  }
+  byText.set(text, result);
+  cached += 1;
   return result;
 }
 
@@ -97,14 +109,17 @@ function parseUncached(text: string, dimension: Dimension): ParseResult {
   try {
     parsed = math.evaluate(mixedNumbers(text.trim()));
   } catch {
-    return { ok: false, message: `could not read "${text}" as ${DIMENSION_WORDS[dimension]} with a unit` };
+    return {
+      ok: false,
+      message: `could not read ${quoted(text)} as ${DIMENSION_WORDS[dimension]} with a unit`,
+    };
   }
   if (!math.isUnit(parsed)) {
-    return { ok: false, message: `needs a unit, got "${text}" (for example ${example(dimension)})` };
+    return { ok: false, message: `needs a unit, got ${quoted(text)} (for example ${example(dimension)})` };
   }
   const unit = parsed as Unit;
   if (!unit.equalBase(math.unit(`1 ${target}`))) {
-    return { ok: false, message: `must be ${DIMENSION_WORDS[dimension]}, got "${text}"` };
+    return { ok: false, message: `must be ${DIMENSION_WORDS[dimension]}, got ${quoted(text)}` };
   }
   // mathjs converts through SI base units, so "12 in" can come back as 11.999999999999998 in and a
   // rod exactly at a required edge distance would fail by 1e-16. Fourteen significant digits keep
@@ -112,9 +127,17 @@ function parseUncached(text: string, dimension: Dimension): ParseResult {
   const raw = unit.toNumber(target);
   const value = Number.isFinite(raw) ? Number(raw.toPrecision(14)) : raw;
   if (!Number.isFinite(value)) {
-    return { ok: false, message: `must be a finite value, got "${text}"` };
+    return { ok: false, message: `must be a finite value, got ${quoted(text)}` };
   }
   return { ok: true, value, unit };
+}
+
+/**
+ * The text someone typed, quoted for a message: escaped (a newline or a quote cannot break the
+ * one-line-per-problem form) and cut to 40 characters.
+ */
+export function quoted(text: string): string {
+  return JSON.stringify(text.length > 40 ? `${text.slice(0, 40)}…` : text);
 }
 
 /**

@@ -98,8 +98,26 @@ export interface CantileverDto {
   reviewState: ReviewState | null;
   ok: boolean | null;
   updatedAt: string;
+  /** How many identical beams this cantilever stands for (the plate schedule's quantity). */
+  quantity: number;
+  /** The latest approved revision, which the shop builds from; null when none is approved. */
+  latestApproved: {
+    revisionId: number;
+    number: number;
+    approvedBy: string;
+    approvedAt: string;
+  } | null;
 }
+const quantitySchema = z
+  .number({ error: 'must be a whole number of beams' })
+  .int('must be a whole number of beams')
+  .min(1, 'must be at least 1')
+  .max(999, 'is too large (999 at most)');
+export const updateCantileverSchema = z.object({ quantity: quantitySchema });
+export type UpdateCantileverRequest = z.output<typeof updateCantileverSchema>;
 export const createCantileverSchema = z.object({
+  /** Number of identical beams; default 1. */
+  quantity: quantitySchema.default(1),
   name: z.string().trim().min(1, 'is required').max(120, 'is too long (120 characters at most)'),
   description: z.string().trim().max(500, 'is too long (500 characters at most)').default(''),
   /** Optional first design; saved as revision 1 with the message "First design". */
@@ -141,6 +159,25 @@ export interface StaleSaveBody {
 }
 
 // ---- review and comments ---------------------------------------------------------------------
+/** Body of a submission: an optional note to the reviewer, sent in the e-mail and kept with the request. */
+export const submitSchema = z
+  .object({ note: z.string().trim().max(2000, 'is too long (2000 characters at most)').default('') })
+  .default({ note: '' });
+export type SubmitRequest = z.output<typeof submitSchema>;
+/** What a submission answers: the revision, and in words who was told (or why nobody could be). */
+export type SubmitResponse = RevisionDto & { notice: string; notified: string[] };
+/** A submitted revision waiting for the signed-in engineer (never their own). */
+export interface AwaitingReviewDto {
+  revisionId: number;
+  number: number;
+  message: string;
+  cantileverId: number;
+  cantileverName: string;
+  projectId: number;
+  projectName: string;
+  authorName: string;
+  submittedAt: string;
+}
 export const reviewSchema = z.object({
   decision: z.enum(['approve', 'request-changes'], { error: 'must be "approve" or "request-changes"' }),
   comment: z.string().trim().max(4000).default(''),
@@ -167,13 +204,6 @@ export interface CommentDto {
 }
 
 // ---- attachments, shapes, outbox -------------------------------------------------------------
-export const ATTACHMENT_TYPES = [
-  'application/pdf',
-  'image/png',
-  'image/jpeg',
-  'image/vnd.dxf',
-  'text/csv',
-] as const;
 export interface AttachmentDto {
   id: number;
   cantileverId: number;

@@ -45,6 +45,17 @@ export const connectionSchema = z.object({
     /** Concrete thickness along the rods (ha); when absent the pier is taken as deep (psi_h,V = 1). */
     depth: lengthQ().optional(),
   }),
+  /** Post-base only: the post from the top of the plate to the beam's centreline (Version 2 key). */
+  post: z.object({ height: lengthQ() }).optional(),
+  /** Fillet weld all around the member (or post) at the plate (Version 2 key). */
+  weld: z
+    .object({
+      size: lengthQ(),
+      electrode: z.enum(['E70', 'E80'], { error: 'must be "E70" or "E80"' }).default('E70'),
+    })
+    .optional(),
+  /** The root rotates with the connection (rods, plate, post); engine default true (Version 2 key). */
+  flexibleRoot: z.boolean().optional(),
 });
 
 export type ConnectionInput = z.infer<typeof connectionSchema>;

@@ -3,7 +3,7 @@
  * parses with a unit of the right dimension and, where asked, that the value is positive.
  */
 import { z } from 'zod';
-import { parseQuantity, dimensionWord, type Dimension } from '../engine/units';
+import { parseQuantity, dimensionWord, quoted, type Dimension } from '../engine/units';
 
 export type Sign = 'any' | 'positive' | 'nonNegative';
 
@@ -18,10 +18,13 @@ export function quantityString(dimension: Dimension, sign: Sign = 'positive') {
         return;
       }
       if (sign === 'positive' && !(parsed.value > 0)) {
-        ctx.addIssue({ code: 'custom', message: `must be a positive ${noun(dimension)}, got "${text}"` });
+        ctx.addIssue({
+          code: 'custom',
+          message: `must be a positive ${noun(dimension)}, got ${quoted(text)}`,
+        });
       }
       if (sign === 'nonNegative' && parsed.value < 0) {
-        ctx.addIssue({ code: 'custom', message: `must not be negative, got "${text}"` });
+        ctx.addIssue({ code: 'custom', message: `must not be negative, got ${quoted(text)}` });
       }
     });
 }
@@ -32,7 +35,6 @@ function noun(dimension: Dimension): string {
 
 export const lengthQ = (sign: Sign = 'positive') => quantityString('length', sign);
 export const stressQ = (sign: Sign = 'positive') => quantityString('stress', sign);
-export const forceQ = (sign: Sign = 'positive') => quantityString('force', sign);
 
 /** Formats a zod issue path the way every error in Reachline names a field: loads.area[0].value */
 export function formatPath(path: ReadonlyArray<PropertyKey>): string {

@@ -14,6 +14,8 @@ const ShapesRoute = lazy(() => import('./routes/shapes'));
 const HistoryRoute = lazy(() => import('./routes/history'));
 const CompareRoute = lazy(() => import('./routes/compare'));
 const ReviewRoute = lazy(() => import('./routes/review'));
+const ReachStudyRoute = lazy(() => import('./routes/reach-study'));
+const RevisionRoute = lazy(() => import('./routes/revision'));
 const TeamRoute = lazy(() => import('./routes/team'));
 const AccountRoute = lazy(() => import('./routes/account'));
 const OutboxRoute = lazy(() => import('./routes/outbox'));
@@ -45,6 +47,8 @@ export function createAppRouter() {
             { path: routePatterns.history, element: page(HistoryRoute) },
             { path: routePatterns.compare, element: page(CompareRoute) },
             { path: routePatterns.review, element: page(ReviewRoute) },
+            { path: routePatterns.study, element: page(ReachStudyRoute) },
+            { path: routePatterns.revision, element: page(RevisionRoute) },
             { path: routePatterns.shapes, element: page(ShapesRoute) },
             { path: routePatterns.account, element: page(AccountRoute) },
             { path: routePatterns.team, element: page(TeamRoute) },

@@ -18,7 +18,7 @@ beforeAll(async () => {
   await e2e.signInAs(context, 'engineer');
   await page.goto('/projects');
   await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
   await page.getByTestId('tip-deflection').waitFor();
 });
 
@@ -45,9 +45,11 @@ describe('design desk', () => {
     const revision = (await page.getByTestId('base-revision').textContent())?.replace('rev ', '');
     const csv = await page.evaluate(async (h) => (await fetch(h)).text(), href as string);
     const lines = csv.trimEnd().split('\r\n');
-    expect(lines[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
-    expect(lines).toHaveLength(2);
-    expect(lines[1]).toMatch(new RegExp(`^"East deck, typical beam \\(rev ${revision}\\)",post-base,`));
+    expect(lines[0]).toMatch(/^Revision,State,Approved by,Approved on,Quantity,Mark,Arrangement,/);
+    expect(lines[1]).toMatch(
+      new RegExp(`^${revision},.*East deck, typical beam \\(rev ${revision}[,)].*,post-base,`),
+    );
+    expect(lines.at(-1)).toMatch(/^"Caution: /);
     const length = await field('Length (root to tip)').inputValue();
     await field('Length (root to tip)').fill('9 ft');
     await expect.poll(() => link.getAttribute('aria-disabled')).toBe('true');

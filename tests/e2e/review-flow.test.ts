@@ -75,7 +75,7 @@ async function submitLatest(page: Page, number: number, message: string): Promis
   expect(await latest.getByRole('heading').textContent()).toContain(`Revision ${number}Draft`);
   await latest.getByRole('button', { name: 'Submit for review' }).click();
   await page
-    .getByText(`Revision ${number} was submitted for review. The project's engineers were notified.`)
+    .getByText(`Revision ${number} was submitted for review. ${ENGINEER} was notified by e-mail.`)
     .waitFor();
   await latest.getByText('Awaiting review').waitFor();
 }
@@ -164,6 +164,8 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const form = page.getByRole('form', { name: 'Review decision' });
     await form.getByRole('radio', { name: 'Approve revision 3' }).check();
     await form.getByRole('button', { name: 'Record decision' }).click();
+    const confirm = page.getByRole('alertdialog', { name: 'Approve revision 3?' });
+    await confirm.getByRole('button', { name: 'Yes, approve revision 3' }).click();
     await page.getByText('You approved revision 3.').waitFor();
     await page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)).waitFor();
     expect(await page.getByRole('radio').count()).toBe(0);

@@ -51,14 +51,20 @@ describe('skeleton: sign in, edit, save, reload', () => {
     const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string))
       .trimEnd()
       .split('\r\n');
-    expect(schedule[0]).toMatch(/^Mark,Arrangement,Plate N x B x t \(in\),/);
-    expect(schedule.some((line) => /^"East deck, typical beam \(rev \d+\)",post-base,\d/.test(line))).toBe(
-      true,
-    );
+    expect(schedule[0]).toMatch(/^Revision,State,Approved by,Approved on,Quantity,Mark,Arrangement,/);
+    // The demo's east deck is approved at revision 1: the shop's schedule lists it, and no draft.
+    expect(
+      schedule.some((line) =>
+        /^1,approved,"Priya Vasquez, PE",[\d-]+,1,"East deck, typical beam \(rev 1\)",post-base,\d/.test(
+          line,
+        ),
+      ),
+    ).toBe(true);
+    expect(schedule.some((line) => line.includes('NOT APPROVED'))).toBe(false);
     // the project page states pass/fail words, so it carries the caution too
     expect(await page.getByTestId('caution-footer').textContent()).toContain('licensed engineer');
     await e2e.screenshot(page, 'project');
-    await page.getByRole('link', { name: 'East deck, typical beam' }).click();
+    await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
     await page.getByTestId('tip-deflection').waitFor();
     expect(await page.getByTestId('caution').textContent()).toContain('licensed engineer');
     expect(await page.getByTestId('verdict').textContent()).toMatch(/checks/);

@@ -1,4 +1,4 @@
-/** `reachline admin create` and a UTF-8 byte-order mark in a design file (issue 15). */
+/** `reachline admin create` and a UTF-8 byte-order mark in a design file. */
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';

@@ -115,3 +115,62 @@ describe('reachline CLI (in process)', () => {
       expect(r.out).toContain(option);
   });
 });
+
+describe('reachline check with the Version 2 keys (ENGINE-CONTRACT)', () => {
+  it('accepts every Version 2 key, reports the new checks and the direction of each combination', async () => {
+    const doc = {
+      ...exampleDesign,
+      member: {
+        length: '9 ft',
+        spacing: '4 ft',
+        section: { shape: 'W8X18' },
+        lateralSupport: {
+          topFlange: 'braced',
+          loadAt: 'top-flange',
+          root: 'fixed',
+          tip: 'free',
+          braces: ['4 ft'],
+          effectiveLengthFactor: 1.4,
+        },
+      },
+      loads: {
+        ...exampleDesign.loads,
+        area: [...(exampleDesign.loads?.area ?? []), { case: 'W', value: '-30 psf' }],
+        seismic: { SDS: 1.0, category: 'D' },
+      },
+      connection: {
+        ...exampleDesign.connection!,
+        footprint: { shape: 'HSS8X8X1/2' },
+        post: { height: '12 in' },
+        weld: { size: '5/16 in', electrode: 'E70' },
+        flexibleRoot: true,
+      },
+    };
+    const r = await inProcess(['check', '-'], JSON.stringify(doc));
+    expect(r.code).toBeLessThan(2);
+    const result = JSON.parse(r.out);
+    const ids = result.checks.map((c: { id: string }) => c.id);
+    for (const id of [
+      'member.flexure',
+      'member.flexure.uplift',
+      'post.combined',
+      'weld.strength',
+      'member.vibration',
+    ])
+      expect(ids).toContain(id);
+    const names = result.member.combinations.map((c: { name: string }) => c.name);
+    expect(names).toEqual(
+      expect.arrayContaining([
+        '1.2D + 1.0W + L + 0.5S',
+        '0.9D + 1.0W',
+        '1.2D + Ev + L + 0.2S',
+        '0.9D - Ev',
+        '0.2D upward (ASCE 7-16 12.4.4)',
+      ]),
+    );
+    expect(result.member.tipDeflectionParts.connection.value).toBeGreaterThan(0);
+    expect(result.connection.plateMoment.unit).toBe('kip ft');
+    expect(r.err).toMatch(/0\.9D \+ 1\.0W \(up\)/);
+    expect(r.err).toMatch(/1\.4D \(down\)/);
+  });
+});

@@ -1,5 +1,5 @@
 /**
- * What several app instances rely on the database for (issue 12), on whichever database this run
+ * What several app instances rely on the database for, on whichever database this run
  * uses (SQLite by default, PostgreSQL with TEST_PG=1): concurrent saves on one base give one 201
  * and 409s, never a 500 or two revisions with one number; the outbox is claimed, so two workers
  * send each message once; a claim whose worker died is sent after its lease, never lost; a

@@ -1,5 +1,5 @@
 /**
- * Hardening (issue 15): the Host allow-list against DNS rebinding, the same-origin check against
+ * Hardening: the Host allow-list against DNS rebinding, the same-origin check against
  * the configured origin, sign-in limits that count failures per account and per address in the
  * database, the client address from configured proxies only, the Secure cookie under an https
  * origin, and when the demo and a first admin are created.

@@ -1,5 +1,5 @@
 /**
- * The database keeps revisions and approvals as they were (issue 15): INSERT OR REPLACE cannot
+ * The database keeps revisions and approvals as they were: INSERT OR REPLACE cannot
  * rewrite a revision (not even an approved one with foreign keys off), and no review row can be
  * added after an approval. SQLite triggers from migration 20261203020000_security; on PostgreSQL
  * (TEST_PG=1) their plpgsql twins, against INSERT … ON CONFLICT DO UPDATE, UPDATE, DELETE and

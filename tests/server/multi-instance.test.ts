@@ -1,5 +1,5 @@
 /**
- * Two app processes on one PostgreSQL database and one storage folder (issue 12), as behind a
+ * Two app processes on one PostgreSQL database and one storage folder, as behind a
  * load balancer: a session made on A works on B; concurrent saves on A and B give one 201 and one
  * 409; a file uploaded through A downloads identically from B; a submitted revision's e-mail
  * leaves once although both instances run a mail worker; failed sign-ins count across both; killing A (SIGKILL) during saves loses

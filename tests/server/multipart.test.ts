@@ -1,5 +1,5 @@
 /**
- * Malformed multipart bodies (issue 15): each answers 400 naming `file`, with no stack trace in
+ * Malformed multipart bodies: each answers 400 naming `file`, with no stack trace in
  * the answer and one warn line in the log; UTF-8 file names are kept; field and part limits hold
  * on every multipart route.
  */

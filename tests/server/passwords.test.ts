@@ -1,4 +1,4 @@
-/** Passwords (issue 15): strength, changing one's own, an admin's reset, and the forced change. */
+/** Passwords: strength, changing one's own, an admin's reset, and the forced change. */
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { passwordProblem } from '../../server/lib/password';

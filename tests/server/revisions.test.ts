@@ -206,13 +206,25 @@ describe('saving revisions', () => {
       /^attachment; filename="?plate-schedule-test-beam-rev1\.csv"?$/,
     );
     const lines = one.text.trimEnd().split('\r\n');
-    expect(lines).toHaveLength(2);
-    expect(lines[0]).toMatch(/^Mark,Arrangement,/);
-    expect(lines[1]).toMatch(/^Test beam \(rev 1\),post-base,24 x 16 x 1-1\/2,/);
+    // header, the row, the note that it is not approved, the caution
+    expect(lines).toHaveLength(4);
+    expect(lines[0]).toMatch(/^Revision,State,Approved by,Approved on,Quantity,Mark,Arrangement,/);
+    expect(lines[1]).toMatch(
+      /^1,"DRAFT, NOT APPROVED: not for construction",,,1,"Test beam \(rev 1, NOT APPROVED\)",post-base,24 x 16 x 1-1\/2,/,
+    );
+    expect(lines[3]).toMatch(/^"Caution: Reachline is a design aid/);
+    // Nothing is approved yet: the project schedule lists no row unless drafts are asked for.
     const project = await fabricator.get(`/api/projects/${env.projectId}/plate-schedule.csv`).expect(200);
     const projectLines = project.text.trimEnd().split('\r\n');
-    expect(projectLines).toHaveLength(2);
-    expect(projectLines[1]).toMatch(/^Test beam \(rev 6\),post-base,24 x 16 x 2,/);
+    expect(projectLines[1]).toMatch(/^Approved revisions only/);
+    expect(projectLines[2]).toMatch(/^Not listed \(no approved revision with a plate\): Test beam$/);
+    const drafts = await fabricator
+      .get(`/api/projects/${env.projectId}/plate-schedule.csv?include=drafts`)
+      .expect(200);
+    const draftLines = drafts.text.trimEnd().split('\r\n');
+    expect(draftLines[1]).toMatch(
+      /^6,"DRAFT, NOT APPROVED: not for construction",,,1,"Test beam \(rev 6, NOT APPROVED\)",post-base,24 x 16 x 2,/,
+    );
     const outsider = await env.login('outsider');
     await outsider.get(`/api/revisions/${env.revisionId}/plate-schedule.csv`).expect(404);
     await outsider.get(`/api/projects/${env.projectId}/plate-schedule.csv`).expect(404);

@@ -1,5 +1,5 @@
 /**
- * The shapes attack from the hardening review (issue 15): a fabricator outside a project
+ * The shapes attack from the hardening review: a fabricator outside a project
  * re-imports the label a design in that project uses, with ten times the stiffness. The
  * project's stored results and its next save (a connection-only change) must not move.
  * Shape values are invented for the test; only their internal consistency (Sx = Ix/(d/2)) matters.

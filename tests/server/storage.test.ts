@@ -1,5 +1,5 @@
 /**
- * Attachment storage (issue 12): the local folder and the S3 driver (against the local fake in
+ * Attachment storage: the local folder and the S3 driver (against the local fake in
  * tests/helpers/fake-s3.ts) behave alike, never overwrite, and verify the SHA-256 on every read;
  * through the API, a file stored in the object store downloads intact and a corrupted one is
  * refused rather than served.

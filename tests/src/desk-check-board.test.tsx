@@ -69,3 +69,16 @@ describe('CheckBoard', () => {
     expect(screen.getByTestId('caution')).toHaveTextContent('licensed engineer');
   });
 });
+
+describe('check board: the direction of the governing combination', () => {
+  it('marks an upward combination as uplift, and leaves a downward one plain', () => {
+    const up = { ...check('member.flexure.uplift', 0.4), combination: '0.9D + 1.0W' };
+    const down = check('member.flexure', 0.5);
+    render(<CheckBoard checks={[up, down]} directions={{ '0.9D + 1.0W': 'up', '1.2D + 1.6L': 'down' }} />);
+    const board = screen.getByRole('table', { name: 'Check board' });
+    const upRow = board.querySelector('tr[data-check="member.flexure.uplift"]') as HTMLElement;
+    const downRow = board.querySelector('tr[data-check="member.flexure"]') as HTMLElement;
+    expect(within(upRow).getByText(/uplift: top flange in compression/)).toBeInTheDocument();
+    expect(within(downRow).queryByText(/uplift/)).toBeNull();
+  });
+});

@@ -15,6 +15,8 @@ const cantilever: CantileverDto = {
   reviewState: 'draft',
   ok: false,
   updatedAt: '2026-11-03T10:00:00.000Z',
+  quantity: 1,
+  latestApproved: null,
 };
 
 function summary(id: number, number: number, extra: Partial<RevisionSummaryDto>): RevisionSummaryDto {
@@ -50,7 +52,14 @@ function serve(me: UserDto) {
     if (path === '/api/cantilevers/7/revisions') return { body: list };
     if (path === '/api/revisions/33/submit' && method === 'POST') {
       list = list.map((r) => (r.id === 33 ? { ...r, reviewState: 'submitted' as const } : r));
-      return { status: 201, body: {} };
+      const note = (body as { note: string }).note;
+      return {
+        status: 200,
+        body: {
+          notice: `Revision 3 was submitted for review. Test Engineer was notified by e-mail.${note ? ` Note: ${note}` : ''}`,
+          notified: ['Test Engineer'],
+        },
+      };
     }
     if (path === '/api/revisions/33/comments' && method === 'GET') return { body: comments };
     if (path === '/api/revisions/33/comments' && method === 'POST') {
@@ -91,9 +100,17 @@ describe('History', () => {
     expect(screen.getAllByRole('button', { name: 'Submit for review' })).toHaveLength(1);
     expect(within(items[0]).getByRole('button', { name: 'Submit for review' })).toBeInTheDocument();
 
+    await user.type(screen.getByRole('textbox', { name: /Note to the reviewer/ }), 'Check the rods');
     await user.click(screen.getByRole('button', { name: 'Submit for review' }));
-    expect(await screen.findByText(/Revision 3 was submitted for review/)).toBeInTheDocument();
-    expect(calls.some((c) => c.method === 'POST' && c.path === '/api/revisions/33/submit')).toBe(true);
+    // the notice is the server's: who was notified, or why nobody could be
+    expect(
+      await screen.findByText(
+        'Revision 3 was submitted for review. Test Engineer was notified by e-mail. Note: Check the rods',
+      ),
+    ).toBeInTheDocument();
+    expect(calls.find((c) => c.method === 'POST' && c.path === '/api/revisions/33/submit')?.body).toEqual({
+      note: 'Check the rods',
+    });
     expect(await within(list).findAllByText('Awaiting review')).toHaveLength(2);
     expect(screen.queryByRole('button', { name: 'Submit for review' })).not.toBeInTheDocument();
   });

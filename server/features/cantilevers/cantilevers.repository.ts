@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 import type { CantileverDto } from '../../../shared/schemas/api';
 import { nowIso, toBool, toIso } from '../../db/knex';
 import type { CantileverRow } from '../projects/project-access';
-import { reviewStates } from '../revisions/revisions.repository';
+import { latestApprovedRevisions, reviewStates } from '../revisions/revisions.repository';
 
 type Db = Knex | Knex.Transaction;
 
@@ -24,6 +24,10 @@ export async function listCantilevers(
     db,
     rows.map((r) => r.current_revision_id).filter((id): id is number => id !== null),
   );
+  const approved = await latestApprovedRevisions(
+    db,
+    rows.map((r) => r.id),
+  );
   return rows.map((r) => ({
     id: r.id,
     projectId: r.project_id,
@@ -34,12 +38,24 @@ export async function listCantilevers(
     reviewState: r.current_revision_id === null ? null : (states.get(r.current_revision_id) ?? 'draft'),
     ok: r.current_ok === null || r.current_ok === undefined ? null : toBool(r.current_ok),
     updatedAt: toIso(r.updated_at),
+    quantity: Number(r.quantity ?? 1),
+    latestApproved: (() => {
+      const a = approved.get(r.id);
+      return a
+        ? {
+            revisionId: a.revision.id,
+            number: a.revision.number,
+            approvedBy: a.approvedBy,
+            approvedAt: a.approvedAt,
+          }
+        : null;
+    })(),
   }));
 }
 
 export async function insertCantilever(
   db: Db,
-  c: { projectId: number; name: string; description: string },
+  c: { projectId: number; name: string; description: string; quantity?: number },
 ): Promise<number> {
   const now = nowIso();
   const [row] = await db('cantilevers')
@@ -47,10 +63,15 @@ export async function insertCantilever(
       project_id: c.projectId,
       name: c.name,
       description: c.description,
+      quantity: c.quantity ?? 1,
       current_revision_id: null,
       created_at: now,
       updated_at: now,
     })
     .returning('id');
   return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+}
+
+export async function updateCantileverQuantity(db: Db, id: number, quantity: number): Promise<void> {
+  await db('cantilevers').where({ id }).update({ quantity, updated_at: nowIso() });
 }

@@ -29,7 +29,7 @@ export async function listComments(db: Knex, revisionId: number): Promise<Commen
 }
 
 export async function insertComment(
-  db: Knex,
+  db: Knex | Knex.Transaction,
   c: { revisionId: number; authorId: number; body: string },
 ): Promise<number> {
   const [row] = await db('comments')

@@ -2,6 +2,7 @@
 import type { CommentDto } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { revisionForMember } from '../projects/project-access';
+import { mailComment } from '../revisions/review-mail';
 import { insertComment, listComments } from './comments.repository';
 
 export async function revisionComments(
@@ -19,7 +20,12 @@ export async function addComment(
   revisionId: number,
   body: string,
 ): Promise<CommentDto | undefined> {
-  await revisionForMember(ctx.db, revisionId, user.id);
-  const id = await insertComment(ctx.db, { revisionId, authorId: user.id, body });
+  const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
+  // The revision's author and earlier commenters hear of it; the mail is queued with the comment.
+  const id = await ctx.db.transaction(async (trx) => {
+    await mailComment(trx, ctx.config, { revision, cantilever, commenter: user, body });
+    return insertComment(trx, { revisionId, authorId: user.id, body });
+  });
+  ctx.mail.kick();
   return (await listComments(ctx.db, revisionId)).find((c) => c.id === id);
 }

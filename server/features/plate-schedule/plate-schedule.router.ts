@@ -1,10 +1,23 @@
-/** GET …/plate-schedule.csv for a revision and for a whole project (current revisions). */
+/**
+ * GET …/plate-schedule.csv for a revision, a cantilever and a whole project. The cantilever and
+ * project schedules list approved revisions only unless `?include=drafts`.
+ */
 import { Router, type Response } from 'express';
+import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { idParams } from '../../lib/params';
 import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { projectSchedule, revisionSchedule, type CsvFile } from './plate-schedule.service';
+import {
+  cantileverSchedule,
+  projectSchedule,
+  revisionSchedule,
+  type CsvFile,
+} from './plate-schedule.service';
+
+const scheduleQuery = z.object({
+  include: z.enum(['drafts'], { error: 'must be "drafts" or left out' }).optional(),
+});
 
 function sendCsv(res: Response, file: CsvFile): void {
   res.attachment(file.filename);
@@ -20,10 +33,28 @@ export function plateScheduleRouter(ctx: AppContext): Router {
     }),
   );
   router.get(
+    '/cantilevers/:cantileverId/plate-schedule.csv',
+    typedRoute(
+      { params: idParams('cantileverId'), query: scheduleQuery },
+      async ({ params, query }, req, res) => {
+        sendCsv(
+          res,
+          await cantileverSchedule(ctx, currentUser(req), params.cantileverId, query.include === 'drafts'),
+        );
+      },
+    ),
+  );
+  router.get(
     '/projects/:projectId/plate-schedule.csv',
-    typedRoute({ params: idParams('projectId') }, async ({ params }, req, res) => {
-      sendCsv(res, await projectSchedule(ctx, currentUser(req), params.projectId));
-    }),
+    typedRoute(
+      { params: idParams('projectId'), query: scheduleQuery },
+      async ({ params, query }, req, res) => {
+        sendCsv(
+          res,
+          await projectSchedule(ctx, currentUser(req), params.projectId, query.include === 'drafts'),
+        );
+      },
+    ),
   );
   return router;
 }

@@ -14,6 +14,8 @@ export interface CantileverRow {
   name: string;
   description: string;
   current_revision_id: number | null;
+  /** Identical beams this cantilever stands for (default 1). */
+  quantity: number;
   created_at: string;
   updated_at: string;
 }

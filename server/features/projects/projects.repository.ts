@@ -102,3 +102,22 @@ export async function memberEmailsWithRole(
     .select('u.id', 'u.email')
     .orderBy('u.id');
 }
+
+export interface Recipient {
+  id: number;
+  email: string;
+  displayName: string;
+  role: Role;
+}
+
+/** The project's active members (for notifications), optionally of one role. */
+export async function activeMembers(db: Db, projectId: number, role?: Role): Promise<Recipient[]> {
+  const q = db('project_members as m')
+    .join('users as u', 'u.id', 'm.user_id')
+    .where({ 'm.project_id': projectId, 'u.active': true })
+    .select('u.id', 'u.email', 'u.display_name', 'u.role')
+    .orderBy('u.id');
+  if (role) q.where('u.role', role);
+  const rows = (await q) as { id: number; email: string; display_name: string; role: Role }[];
+  return rows.map((r) => ({ id: r.id, email: r.email, displayName: r.display_name, role: r.role }));
+}

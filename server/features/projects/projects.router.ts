@@ -1,6 +1,11 @@
 /** Projects, team membership (admin) and cantilevers. */
 import { Router } from 'express';
-import { addMemberSchema, createCantileverSchema, createProjectSchema } from '../../../shared/schemas/api';
+import {
+  addMemberSchema,
+  createCantileverSchema,
+  createProjectSchema,
+  updateCantileverSchema,
+} from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { idParams } from '../../lib/params';
 import { typedRoute } from '../../lib/route';
@@ -10,6 +15,7 @@ import {
   createCantilever,
   createProject,
   getCantilever,
+  updateCantilever,
   listMyProjects,
   projectCantilevers,
   projectDetail,
@@ -70,6 +76,15 @@ export function projectsRouter(ctx: AppContext): Router {
     typedRoute({ params: idParams('cantileverId') }, async ({ params }, req, res) => {
       res.json(await getCantilever(ctx, currentUser(req), params.cantileverId));
     }),
+  );
+  router.patch(
+    '/cantilevers/:cantileverId',
+    typedRoute(
+      { params: idParams('cantileverId'), body: updateCantileverSchema },
+      async ({ params, body }, req, res) => {
+        res.json(await updateCantilever(ctx, currentUser(req), params.cantileverId, body));
+      },
+    ),
   );
   return router;
 }

@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import type {
   CantileverDto,
   CreateCantileverRequest,
+  UpdateCantileverRequest,
   CreateProjectRequest,
   ProjectDetailDto,
   ProjectDto,
@@ -10,7 +11,11 @@ import type {
 import type { AppContext } from '../../context';
 import { badRequest, forbidden, notFound } from '../../lib/http-error';
 import { recordAudit } from '../audit/audit.repository';
-import { insertCantilever, listCantilevers } from '../cantilevers/cantilevers.repository';
+import {
+  insertCantilever,
+  listCantilevers,
+  updateCantileverQuantity,
+} from '../cantilevers/cantilevers.repository';
 import { saveRevision } from '../revisions/revisions.service';
 import { findUserById } from '../users/users.repository';
 import { cantileverForMember, projectForMember } from './project-access';
@@ -82,6 +87,7 @@ export async function createCantilever(
       projectId,
       name: body.name,
       description: body.description,
+      quantity: body.quantity,
     });
     if (body.input) {
       const cantilever = await cantileverForMember(trx, cantileverId, user.id);
@@ -102,6 +108,19 @@ export async function getCantilever(
   cantileverId: number,
 ): Promise<CantileverDto> {
   await cantileverForMember(ctx.db, cantileverId, user.id);
+  return (await listCantilevers(ctx.db, { id: cantileverId }))[0];
+}
+
+/** Sets how many identical beams a cantilever stands for (design roles; not a design change). */
+export async function updateCantilever(
+  ctx: AppContext,
+  user: Express.User,
+  cantileverId: number,
+  body: UpdateCantileverRequest,
+): Promise<CantileverDto> {
+  await cantileverForMember(ctx.db, cantileverId, user.id);
+  if (!DESIGN_ROLES.has(user.role)) throw forbidden(`Your role (${user.role}) may not change a cantilever.`);
+  await updateCantileverQuantity(ctx.db, cantileverId, body.quantity);
   return (await listCantilevers(ctx.db, { id: cantileverId }))[0];
 }
 

@@ -1,6 +1,12 @@
 /** Revisions and their reviews (Knex only). Revisions are only ever inserted. */
 import type { Knex } from 'knex';
-import type { ReviewDto, ReviewState, RevisionDto, RevisionSummaryDto } from '../../../shared/schemas/api';
+import type {
+  AwaitingReviewDto,
+  ReviewDto,
+  ReviewState,
+  RevisionDto,
+  RevisionSummaryDto,
+} from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
 import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
@@ -185,4 +191,99 @@ export async function insertReview(
     comment: r.comment,
     created_at: nowIso(),
   });
+}
+
+export interface ApprovedRevision {
+  revision: RevisionRow;
+  approvedBy: string;
+  approvedAt: string;
+}
+
+/**
+ * The latest approved revision of each cantilever. An approved revision stays approved (no review
+ * may follow an approval), so an 'approved' review row is enough.
+ */
+export async function latestApprovedRevisions(
+  db: Db,
+  cantileverIds: readonly number[],
+): Promise<Map<number, ApprovedRevision>> {
+  const out = new Map<number, ApprovedRevision>();
+  if (cantileverIds.length === 0) return out;
+  const rows = (await db('reviews as v')
+    .join('revisions as r', 'r.id', 'v.revision_id')
+    .join('users as u', 'u.id', 'v.reviewer_id')
+    .where('v.state', 'approved')
+    .whereIn('r.cantilever_id', [...cantileverIds])
+    .orderBy('r.number')
+    .select('r.*', 'u.display_name as approver_name', 'v.created_at as approved_at')) as (RevisionRow & {
+    approver_name: string;
+    approved_at: string;
+  })[];
+  for (const { approver_name, approved_at, ...revision } of rows) {
+    out.set(revision.cantilever_id, {
+      revision,
+      approvedBy: approver_name,
+      approvedAt: toIso(approved_at),
+    });
+  }
+  return out;
+}
+
+/** Revisions waiting for review in the projects `userId` belongs to, not written by them. */
+export async function listSubmittedFor(db: Db, userId: number): Promise<AwaitingReviewDto[]> {
+  const rows = (await db('reviews as v')
+    .join('revisions as r', 'r.id', 'v.revision_id')
+    .join('cantilevers as c', 'c.id', 'r.cantilever_id')
+    .join('projects as p', 'p.id', 'c.project_id')
+    .join('project_members as m', function on() {
+      this.on('m.project_id', '=', 'p.id').andOnVal('m.user_id', '=', userId);
+    })
+    .join('users as u', 'u.id', 'r.author_id')
+    .where('v.state', 'submitted')
+    .whereNot('r.author_id', userId)
+    .orderBy('v.id')
+    .select(
+      'r.id as revision_id',
+      'r.number',
+      'r.message',
+      'c.id as cantilever_id',
+      'c.name as cantilever_name',
+      'p.id as project_id',
+      'p.name as project_name',
+      'u.display_name as author_name',
+      'v.created_at as submitted_at',
+    )) as {
+    revision_id: number;
+    number: number;
+    message: string;
+    cantilever_id: number;
+    cantilever_name: string;
+    project_id: number;
+    project_name: string;
+    author_name: string;
+    submitted_at: string;
+  }[];
+  const states = await reviewStates(
+    db,
+    rows.map((r) => r.revision_id),
+  );
+  const seen = new Set<number>();
+  const out: AwaitingReviewDto[] = [];
+  for (const r of rows) {
+    // A revision submitted again after changes were requested appears once, at its latest request.
+    if (states.get(r.revision_id) !== 'submitted' || seen.has(r.revision_id)) continue;
+    seen.add(r.revision_id);
+    out.push({
+      revisionId: r.revision_id,
+      number: r.number,
+      message: r.message,
+      cantileverId: r.cantilever_id,
+      cantileverName: r.cantilever_name,
+      projectId: r.project_id,
+      projectName: r.project_name,
+      authorName: r.author_name,
+      submittedAt: toIso(r.submitted_at),
+    });
+  }
+  return out;
 }

@@ -1,12 +1,13 @@
 /** Revisions, submission and review. There is deliberately no route that changes a revision. */
 import { Router } from 'express';
-import { createRevisionSchema, reviewSchema } from '../../../shared/schemas/api';
+import { createRevisionSchema, reviewSchema, submitSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { idParams } from '../../lib/params';
 import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
 import {
+  awaitingReview,
   getRevisionJson,
   listRevisions,
   reviewRevision,
@@ -37,6 +38,13 @@ export function revisionsRouter(ctx: AppContext): Router {
   );
 
   router.get(
+    '/reviews/awaiting',
+    typedRoute({}, async (_input, req, res) => {
+      res.json(await awaitingReview(ctx, currentUser(req)));
+    }),
+  );
+
+  router.get(
     '/revisions/:revisionId',
     typedRoute({ params: revisionParams }, async ({ params }, req, res) => {
       res.type('application/json').send(await getRevisionJson(ctx, currentUser(req), params.revisionId));
@@ -54,8 +62,8 @@ export function revisionsRouter(ctx: AppContext): Router {
 
   router.post(
     '/revisions/:revisionId/submit',
-    typedRoute({ params: revisionParams }, async ({ params }, req, res) => {
-      res.json(await submitRevision(ctx, currentUser(req), params.revisionId));
+    typedRoute({ params: revisionParams, body: submitSchema }, async ({ params, body }, req, res) => {
+      res.json(await submitRevision(ctx, currentUser(req), params.revisionId, body));
     }),
   );
 

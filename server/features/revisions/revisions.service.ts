@@ -2,15 +2,17 @@
 import type { Knex } from 'knex';
 import type {
   CreateRevisionRequest,
+  AwaitingReviewDto,
   ReviewRequest,
   RevisionDto,
+  SubmitRequest,
+  SubmitResponse,
   RevisionSummaryDto,
   StaleSaveBody,
 } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { isUniqueViolation } from '../../db/knex';
 import { HttpError, conflict, forbidden, notFound } from '../../lib/http-error';
-import { queueMail } from '../../mail/outbox.repository';
 import { recordAudit } from '../audit/audit.repository';
 import {
   cantileverForMember,
@@ -18,9 +20,8 @@ import {
   type CantileverRow,
   type RevisionRow,
 } from '../projects/project-access';
-import { findProject, memberEmailsWithRole } from '../projects/projects.repository';
-import { findUserById } from '../users/users.repository';
 import { assertMayChange } from './edit-rights';
+import { mailDecision, mailSubmission, type SubmitNotice } from './review-mail';
 import { evaluateWithSections, storedSections } from './evaluate';
 import {
   getRevisionDto,
@@ -30,6 +31,7 @@ import {
   lockCantilever,
   memberRevisionJson,
   listRevisionSummaries,
+  listSubmittedFor,
   reviewStates,
 } from './revisions.repository';
 
@@ -130,17 +132,21 @@ export async function getRevision(
 
 const DESIGN_ROLES = new Set(['architect', 'fabricator', 'engineer']);
 
-/** Submits a revision for review and e-mails the project's engineers (queued in the same transaction). */
+/**
+ * Submits a revision for review and e-mails the project's engineers who may review it (queued in
+ * the same transaction), with the submitter's note; answers who was told, or why nobody could be.
+ */
 export async function submitRevision(
   ctx: AppContext,
   user: Express.User,
   revisionId: number,
-): Promise<RevisionDto> {
+  body: SubmitRequest = { note: '' },
+): Promise<SubmitResponse> {
   const { revision, cantilever } = await revisionForMember(ctx.db, revisionId, user.id);
   if (revision.author_id !== user.id && !DESIGN_ROLES.has(user.role)) {
     throw forbidden(`Your role (${user.role}) may not submit a revision for review.`);
   }
-  await ctx.db.transaction(async (trx) => {
+  const told: SubmitNotice = await ctx.db.transaction(async (trx) => {
     await lockCantilever(trx, cantilever.id);
     const state = (await reviewStates(trx, [revision.id])).get(revision.id) ?? 'draft';
     if (state === 'submitted')
@@ -151,24 +157,18 @@ export async function submitRevision(
       revisionId: revision.id,
       state: 'submitted',
       reviewerId: user.id,
-      comment: '',
+      comment: body.note,
     });
-    const project = await findProject(trx, cantilever.project_id);
-    const engineers = (await memberEmailsWithRole(trx, cantilever.project_id, 'engineer')).filter(
-      (e) => e.id !== user.id,
-    );
-    await queueMail(trx, {
-      to: engineers.map((e) => e.email),
-      subject: `Review requested: ${cantilever.name}, revision ${revision.number}`,
-      text: [
-        `${user.displayName} submitted revision ${revision.number} of "${cantilever.name}" (${project?.name ?? 'project'}) for review.`,
-        `Message: ${revision.message}`,
-        `Result: ${revision.ok ? 'every computed check passes' : 'at least one check fails or was not computed'}.`,
-      ].join('\n'),
-    });
+    return mailSubmission(trx, ctx.config, { revision, cantilever, submitter: user, note: body.note });
   });
   ctx.mail.kick();
-  return getRevision(ctx, user, revisionId);
+  return { ...(await getRevision(ctx, user, revisionId)), ...told };
+}
+
+/** Submitted revisions in the engineer's projects that wait for a decision, oldest request first. */
+export async function awaitingReview(ctx: AppContext, user: Express.User): Promise<AwaitingReviewDto[]> {
+  if (user.role !== 'engineer') return [];
+  return listSubmittedFor(ctx.db, user.id);
 }
 
 /** An engineer's decision on a submitted revision; never their own. Approvals go to the audit trail. */
@@ -199,20 +199,13 @@ export async function reviewRevision(
       subject: `revision ${revision.id}`,
       detail: `${cantilever.name}, revision ${revision.number}${body.comment ? `: ${body.comment}` : ''}`,
     });
-    const author = await findUserById(trx, revision.author_id);
-    if (author && author.active) {
-      const verdict = state === 'approved' ? 'approved' : 'returned with changes requested';
-      await queueMail(trx, {
-        to: [author.email],
-        subject: `Revision ${revision.number} of ${cantilever.name} was ${verdict}`,
-        text: [
-          `${user.displayName} ${verdict} revision ${revision.number} of "${cantilever.name}".`,
-          body.comment ? `Comment: ${body.comment}` : '',
-        ]
-          .filter(Boolean)
-          .join('\n'),
-      });
-    }
+    await mailDecision(trx, ctx.config, {
+      revision,
+      cantilever,
+      reviewer: user,
+      approved: state === 'approved',
+      comment: body.comment,
+    });
   });
   ctx.mail.kick();
   return getRevision(ctx, user, revisionId);

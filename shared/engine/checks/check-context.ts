@@ -1,5 +1,7 @@
 /** What every member check reads: the analysis, the combinations, the steel and the output units. */
 import type { MemberModel, Response } from '../member/analysis';
+import type { Factors } from '../member/combinations';
+import type { LateralSupport } from './lateral-support';
 import type { MemberSection } from '../sections/section-types';
 import type { Method } from '../types';
 import type { UnitSystem } from '../units';
@@ -7,6 +9,8 @@ import { clearlyGreater } from '../ties';
 
 export interface CombinationResponse {
   name: string;
+  /** Factors on the unfactored cases (Ev folded into D). */
+  factors: Factors;
   response: Response;
 }
 
@@ -17,8 +21,12 @@ export interface CheckContext {
   units: UnitSystem;
   Fy: number;
   E: number;
-  /** Unbraced length of the bottom flange, in. */
+  /** Unbraced length of the bottom flange, in (the older member.unbracedLength rule). */
   Lb: number;
+  /** Some load acts upward (wind): shear and moment may change sign along the member. */
+  signed: boolean;
+  /** member.lateralSupport with its defaults. */
+  lateral: LateralSupport;
   /** Combinations of the chosen method (strength or allowable). */
   combos: CombinationResponse[];
 }

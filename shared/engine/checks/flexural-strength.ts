@@ -15,8 +15,10 @@ export const CANTILEVER_CB = 1.0;
 export interface SteelAndBracing {
   Fy: number;
   E: number;
-  /** Unbraced length of the compression (bottom) flange, in. */
+  /** Unbraced (effective) length of the compression flange, in. */
   Lb: number;
+  /** Lateral-torsional buckling modification factor; default 1.0 (a free, unbraced tip). */
+  Cb?: number;
 }
 
 /**
@@ -28,7 +30,7 @@ export function flexuralStrengthOf(
   o: SteelAndBracing,
 ): (p: SectionProps) => Strength {
   const { Fy, E, Lb } = o;
-  const Cb = CANTILEVER_CB;
+  const Cb = o.Cb ?? CANTILEVER_CB;
   switch (section.family) {
     case 'HSS': {
       const opts = { Fy, E, Lb, Cb };

@@ -13,25 +13,32 @@ import { notComputedRow } from './not-computed';
 
 export function shearCheck(ctx: CheckContext): Check {
   const { model, section, method, units, Fy, E } = ctx;
-  const nodes = section.prismatic ? 1 : model.grid.x.length;
+  const nodes = model.grid.x.length;
   const strengths: ShearStrength[] = [];
-  for (let i = 0; i < nodes; i++) {
+  // A prismatic member has one strength; with signed loads its largest shear need not be at the root.
+  for (let i = 0; i < (section.prismatic ? 1 : nodes); i++) {
     strengths.push(shearStrength(model.props[i], section.family, section.rolled, Fy, E, model.L));
   }
-  const capacity = (i: number) => available(strengths[i].Vn, method, strengths[i].phi, strengths[i].omega);
-  const w = worstRatio(ctx.combos, (r, i) => r.V[i], capacity, nodes);
+  const caps = strengths.map((s) => available(s.Vn, method, s.phi, s.omega));
+  const capacity = section.prismatic ? () => caps[0] : (i: number) => caps[i];
+  const w = worstRatio(
+    ctx.combos,
+    (r, i) => Math.abs(r.V[i]),
+    capacity,
+    section.prismatic && !ctx.signed ? 1 : nodes,
+  );
   if (w.noCapacity >= 0) {
     // No positive shear strength at a station: a failed, uncomputed check, never a silent pass.
     return notComputedRow(
       ctx,
       'member.shear',
       'Shear',
-      `AISC 360-16 ${strengths[w.noCapacity].clause}`,
+      `AISC 360-16 ${strengths[section.prismatic ? 0 : w.noCapacity].clause}`,
       'no shear strength could be computed for this section; check the web dimensions',
       w.noCapacity,
     );
   }
-  const s = strengths[w.node];
+  const s = strengths[section.prismatic ? 0 : w.node];
   const combo = ctx.combos[w.combo];
   const factor = method === 'LRFD' ? `phi_v = ${s.phi.toFixed(2)}` : `Omega_v = ${s.omega.toFixed(2)}`;
   const check: Check = {
@@ -39,12 +46,12 @@ export function shearCheck(ctx: CheckContext): Check {
     title: section.prismatic ? 'Shear at the root' : 'Shear along the tapered member',
     reference: `AISC 360-16 ${s.clause}`,
     combination: combo?.name ?? null,
-    demand: quantity(combo ? combo.response.V[w.node] : 0, 'force', units),
+    demand: quantity(combo ? Math.abs(combo.response.V[w.node]) : 0, 'force', units),
     capacity: quantity(capacity(w.node), 'force', units),
     ratio: w.ratio,
     ok: w.ratio <= 1,
     note: w.ratio <= 1 ? factor : `${factor}; over capacity: a thicker or deeper web would help`,
   };
-  if (!section.prismatic) check.at = quantity(model.grid.x[w.node], 'length', units);
+  if (!section.prismatic || w.node !== 0) check.at = quantity(model.grid.x[w.node], 'length', units);
   return check;
 }

@@ -9,9 +9,9 @@ import type { Check, ConnectionResult, Method, RootDemand, RootFootprint } from 
 import type { ShapeLookup } from '../shapes/types';
 import type { UnitSystem } from '../units';
 import { availableBearingStress, confinementFactor } from './bearing';
-import { governing, toCheck, type CheckSpec, type Evaluation } from './check-row';
+import { governing, notComputed, toCheck, type CheckSpec, type Evaluation } from './check-row';
 import { analyseCombination } from './combo-state';
-import { readGeometry } from './connection-geometry';
+import { readGeometry, type ConnectionGeometry } from './connection-geometry';
 import { buildConnectionResult } from './connection-result';
 import { ANCHOR_LAYOUT, evaluateAnchorLayout } from './check-anchor-layout';
 import { ANCHOR_SHEAR, evaluateAnchorShear, rodShearCapacity } from './check-anchor-shear';
@@ -23,6 +23,27 @@ import { PLATE_THICKNESS, evaluatePlateThickness } from './check-plate-thickness
 import { PULLOUT, evaluatePullout, pulloutCapacity } from './check-pullout';
 import { SIDE_FACE_BLOWOUT, blowoutCapacity, evaluateSideFaceBlowout } from './check-side-face-blowout';
 import { STEEL_TENSION, evaluateSteelTension, steelTensionCapacity } from './check-steel-tension';
+import { POST_COMBINED, evaluatePost, postStrength } from './check-post';
+import { WELD_STRENGTH, evaluateWeld } from './check-weld';
+import { toInternal } from '../units';
+
+/**
+ * A layout that cannot be built: a rod at or beyond the plate's or the pier's edge, a plate larger
+ * than the pier, or a section that does not fit on the plate. Null when it can be built.
+ */
+export function impossibleLayout(geo: ConnectionGeometry): string | null {
+  const out: string[] = [];
+  if (geo.f >= geo.N / 2 || geo.rowSpan / 2 >= geo.B / 2) out.push('the rods fall outside the plate');
+  if (geo.edgeBeyondRow <= 0 || geo.edgeSide <= 0) out.push('the rods fall outside the pier');
+  if (geo.N > geo.pierLength * (1 + 1e-9) || geo.B > geo.pierWidth * (1 + 1e-9))
+    out.push('the plate is larger than the pier');
+  if (geo.footprint.ok) {
+    const fp = geo.footprint.footprint;
+    if (fp.d > geo.N * (1 + 1e-9) || fp.bf > geo.B * (1 + 1e-9))
+      out.push('the section does not fit on the plate');
+  }
+  return out.length ? out.join(', ') : null;
+}
 
 export interface ConnectionContext {
   units: UnitSystem;
@@ -72,6 +93,7 @@ export function checkConnection(
     });
     return { result: null, checks };
   }
+  const impossible = impossibleLayout(geo);
   const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
   const fpMax = availableBearingStress(geo.fc, sqrtA2A1, method);
   const steel = steelTensionCapacity(geo, method);
@@ -80,7 +102,10 @@ export function checkConnection(
   const blowout = blowoutCapacity(geo, method);
   const rodShear = rodShearCapacity(geo, method);
 
-  const states = demands.map((d) => analyseCombination(d, geo, footprint, fpMax, method));
+  // A post base with its own post section: the beam's support face is the post's face, so the plate
+  // gets M + V x (post depth / 2) (ENGINE-CONTRACT Version 2). Without a footprint it gets M.
+  const offset = geo.arrangement === 'post-base' && input.footprint && footprint ? footprint.d / 2 : 0;
+  const states = demands.map((d) => analyseCombination(d, geo, footprint, fpMax, method, offset));
   // One evaluation per check (in PER_COMBINATION order) per combination; blowout may be absent.
   const table = states.map((s) => {
     const shear = evaluateAnchorShear(s, rodShear, geo, method);
@@ -108,7 +133,40 @@ export function checkConnection(
       if (ev) rows.push({ combination: states[j].combination, ev });
     }
     const worst = governing(rows);
-    if (worst) checks.push(toCheck(PER_COMBINATION[i], worst.combination, worst.ev, units));
+    if (!worst) continue;
+    if (impossible) {
+      // Every check that rests on the layout is not computed when the layout cannot be built.
+      const note = `not computed: ${impossible}; fix the layout first (plate.geometry, anchors.layout)`;
+      checks.push(toCheck(PER_COMBINATION[i], null, notComputed(worst.ev.kind, note), units));
+    } else checks.push(toCheck(PER_COMBINATION[i], worst.combination, worst.ev, units));
   }
-  return { result: buildConnectionResult(states, geo, fpMax, sqrtA2A1, units), checks };
+  if (input.post && geo.arrangement === 'post-base' && input.footprint) {
+    const shape = ctx.shapes(input.footprint.shape);
+    const strength = shape
+      ? postStrength(shape, toInternal(input.post.height, 'length'), method)
+      : ({
+          ok: false,
+          reason: `the post section "${input.footprint.shape}" is not in the shapes table`,
+        } as const);
+    const rows = states.map((s) => ({ combination: s.combination, ev: evaluatePost(s.P, s.M, strength) }));
+    const worst = governing(rows);
+    if (worst) checks.push(toCheck(POST_COMBINED, worst.combination, worst.ev, units));
+  }
+  if (input.weld) {
+    const weld = {
+      size: toInternal(input.weld.size, 'length'),
+      electrode: input.weld.electrode ?? 'E70',
+      plateThickness: geo.t,
+    };
+    const rows = states.map((s) => ({
+      combination: s.combination,
+      ev: footprint
+        ? evaluateWeld(s.P, s.M, s.shear, footprint, weld, method, units)
+        : notComputed('forcePerLength', 'the section at the plate is unknown, so its weld cannot be checked'),
+    }));
+    const worst = governing(rows);
+    if (worst) checks.push(toCheck(WELD_STRENGTH, worst.combination, worst.ev, units));
+  }
+  const result = buildConnectionResult(states, geo, fpMax, sqrtA2A1, units, impossible);
+  return { result, checks };
 }

@@ -37,13 +37,28 @@ function dropNonFinite(result: ConnectionResult): void {
   }
 }
 
+/**
+ * Which row of rods the moment pulls. Hogging (gravity) lifts the back of a post-base plate and the
+ * top of a face plate; uplift reverses both. Plate and rows are symmetric about the plate centre, so
+ * the same equations hold with the rows' roles swapped.
+ */
+export function tensionRowWords(
+  arrangement: ConnectionGeometry['arrangement'],
+  direction: 'down' | 'up',
+): string {
+  if (arrangement === 'face-plate') return direction === 'up' ? 'bottom row' : 'top row';
+  return direction === 'up' ? 'row on the tip side' : 'row away from the tip';
+}
+
 export function buildConnectionResult(
   states: readonly ComboState[],
   geo: ConnectionGeometry,
   fpMax: number,
   sqrtA2A1: number,
   units: UnitSystem,
+  impossible: string | null = null,
 ): ConnectionResult | null {
+  if (impossible) return null;
   const s = plateGoverning(states, geo.t, fpMax);
   if (!s || !s.thickness || s.bearing.Y === null || s.bearing.fp === null || s.rodTension === null)
     return null;
@@ -52,6 +67,10 @@ export function buildConnectionResult(
   const result: ConnectionResult = {
     arrangement: geo.arrangement,
     combination: s.combination,
+    direction: s.direction,
+    tensionRow: tensionRowWords(geo.arrangement, s.direction),
+    directionsChecked: [...new Set(states.map((x) => x.direction))],
+    plateMoment: quantity(s.M, 'moment', units),
     bearingLength: len(b.Y ?? 0),
     bearingPressure: quantity(b.fp ?? 0, 'stress', units),
     anchorTensionPerRod: quantity(s.rodTension, 'force', units),
@@ -66,6 +85,7 @@ export function buildConnectionResult(
     m: len(s.thickness.m),
     n: len(s.thickness.n),
     tensionLever: len(s.thickness.x),
+    tensionWidth: len(s.thickness.tensionWidth),
     nextStandardThickness: len(nextStandardThickness(s.thickness.required)),
     unsolvedCombinations: states.filter((x) => x.bearing.Y === null).map((x) => x.combination),
   };

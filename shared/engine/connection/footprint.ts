@@ -39,14 +39,14 @@ function fromShape(shape: ShapeRecord): Footprint | undefined {
 function fromRoot(root: RootFootprint): Footprint {
   const kind: FootprintKind =
     root.family === 'HSS' ? 'box' : root.family === 'PIPE' ? 'round' : root.family === 'C' ? 'C' : 'I';
-  // The root footprint carries no web thickness; it is used for drawing only, so a rough value will do.
+  // An older caller may give no web thickness; it is then used for drawing only, so a rough value will do.
   return {
     label: root.label,
     kind,
     d: root.d,
     bf: root.bf,
     tf: root.tf,
-    tw: kind === 'I' || kind === 'C' ? 0.6 * root.tf : root.tf,
+    tw: root.tw ?? (kind === 'I' || kind === 'C' ? 0.6 * root.tf : root.tf),
   };
 }
 

@@ -1,6 +1,6 @@
 /**
- * The fabricator's plate schedule: one row per connection, exported as CSV (RFC 4180: CRLF line
- * ends, fields with a comma, quote or line break quoted, quotes doubled). Dimensions in inches,
+ * The fabricator's plate schedule: one row per connection, exported as CSV through the shared
+ * writer (shared/csv/csv-writer.ts: RFC 4180, cells neutralised against formula injection). Dimensions in inches,
  * written the shop's way (1-1/2), whatever unit system the design uses.
  */
 import type { ConnectionInput } from '../../schemas/connection';
@@ -10,6 +10,7 @@ import { inchFraction } from './inch-fraction';
 import { nextStandardThickness } from './plate-thickness';
 import { rodEdgeMinimum } from './rod-positions';
 import { rodSize } from './rod-data';
+import { csvText } from '../../csv/csv-writer';
 
 export interface PlateScheduleRow {
   mark: string;
@@ -81,14 +82,34 @@ export function plateScheduleRow(
   };
 }
 
-/** Quotes one CSV field per RFC 4180 when it needs it. */
-export function csvField(value: string): string {
-  return /[",\r\n]/.test(value) ? `"${value.replace(/"/g, '""')}"` : value;
+/** The schedule's columns in order, with their header words. */
+export function plateScheduleHeaders(): [keyof PlateScheduleRow, string][] {
+  return (Object.keys(HEADERS) as (keyof PlateScheduleRow)[]).map((k) => [k, HEADERS[k]]);
 }
 
-/** The schedule as CSV text: a header line and one line per row, CRLF line ends. */
-export function plateScheduleCsv(rows: readonly PlateScheduleRow[]): string {
-  const keys = Object.keys(HEADERS) as (keyof PlateScheduleRow)[];
-  const lines = [keys.map((k) => csvField(HEADERS[k])), ...rows.map((r) => keys.map((k) => csvField(r[k])))];
-  return lines.map((l) => l.join(',')).join('\r\n') + '\r\n';
+/** Extra columns written before the schedule's own (revision, state, quantity…), with their values. */
+export interface ScheduleLine {
+  before: Record<string, string>;
+  row: PlateScheduleRow;
+}
+
+/**
+ * The schedule as CSV text: a header line, one line per row, and then `footer` lines (the caution),
+ * through the shared CSV writer. `extra` names the columns put before the schedule's own.
+ */
+export function plateScheduleCsv(
+  rows: readonly (PlateScheduleRow | ScheduleLine)[],
+  extra: readonly string[] = [],
+  footer: readonly string[] = [],
+): string {
+  const cols = plateScheduleHeaders();
+  const lines = [
+    [...extra, ...cols.map(([, h]) => h)],
+    ...rows.map((r) => {
+      const line: ScheduleLine = 'row' in r ? r : { before: {}, row: r };
+      return [...extra.map((e) => line.before[e] ?? ''), ...cols.map(([k]) => line.row[k])];
+    }),
+    ...footer.map((f) => [f]),
+  ];
+  return csvText(lines);
 }

@@ -50,6 +50,8 @@ export interface ThicknessParts {
   m: number;
   n: number;
   x: number;
+  /** Width of the tension-side strip, in: the plate width B, or less with few rods (45-degree spread). */
+  tensionWidth: number;
   /**
    * False when the rods carry tension but the row is not beyond the tension flange (x <= 0): the DG1
    * tension-side model does not apply, `tensionSide` is not a requirement and the check must fail.
@@ -60,11 +62,12 @@ export interface ThicknessParts {
 /**
  * Required thickness, in, for a solved bearing block (null when the bearing has no solution).
  * Bearing side: for l = m and l = n, Y >= l: 1.5 l sqrt(fp/Fy); Y < l: 2.11 sqrt(fp Y (l - Y/2)/Fy).
- * Tension side: 2.11 sqrt(T x/(B Fy)). ASD: 1.83 and 2.58.
+ * Tension side: 2.11 sqrt(T x/(b Fy)) with b = min(B, (perSide - 1) g + 2x) when the rows are given
+ * (the DG1 strip takes B; with one or two rods a row cannot engage the whole width). ASD: 1.83 and 2.58.
  */
 export function requiredThickness(
   s: BearingSolution,
-  plate: { N: number; B: number; f: number; Fy: number },
+  plate: { N: number; B: number; f: number; Fy: number; perSide?: number; gauge?: number },
   fp: Footprint,
   method: Method,
 ): ThicknessParts | null {
@@ -78,9 +81,22 @@ export function requiredThickness(
   if (p > 0 && Y > 0)
     bearingSide = Math.max(bearingCantilever(m, Y, p, plate.Fy, c), bearingCantilever(n, Y, p, plate.Fy, c));
   const tension = Math.max(s.T, s.Tother);
-  const tensionSide = tension > 0 ? c.partial * Math.sqrt((tension * x) / (plate.B * plate.Fy)) : 0;
+  // The rods' pull spreads at 45 degrees toward the flange line x away: a row of n rods at gauge g
+  // engages (n - 1) g + 2x of the plate, never more than B (common practice, no source).
+  const spread = plate.perSide ? (plate.perSide - 1) * (plate.gauge ?? 0) + 2 * x : plate.B;
+  const tensionWidth = Math.min(plate.B, spread > 0 ? spread : plate.B);
+  const tensionSide = tension > 0 ? c.partial * Math.sqrt((tension * x) / (tensionWidth * plate.Fy)) : 0;
   const tensionModelled = !(tension > 0 && lever <= 0);
-  return { bearingSide, tensionSide, required: Math.max(bearingSide, tensionSide), m, n, x, tensionModelled };
+  return {
+    bearingSide,
+    tensionSide,
+    required: Math.max(bearingSide, tensionSide),
+    m,
+    n,
+    x,
+    tensionWidth,
+    tensionModelled,
+  };
 }
 
 /**

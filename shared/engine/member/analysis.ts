@@ -42,8 +42,10 @@ export function analyseMember(
   E: number,
   caseLoads: CaseLoads[],
   intervals = DEFAULT_INTERVALS,
+  /** Further positions that must be nodes (bottom-flange braces: a segment ends on a node). */
+  extraNodes: readonly number[] = [],
 ): MemberModel {
-  const points = caseLoads.flatMap((c) => c.points.map((p) => p.a));
+  const points = [...caseLoads.flatMap((c) => c.points.map((p) => p.a)), ...extraNodes];
   // A prismatic member under uniform and point loads is integrated exactly on any grid.
   const grid = buildGrid(L, intervals, points);
   const { x, mid } = grid;
@@ -89,6 +91,16 @@ function respond(model: MemberModel, c: CaseLoads): Response {
 }
 
 const EMPTY = new Float64Array(0);
+
+/** The moment of a combination at any x (kip·in, hogging positive), from the cases' closed forms. */
+export function momentOfCombination(model: MemberModel, factors: Factors, x: number): number {
+  let m = 0;
+  for (const c of model.cases) {
+    const f = factors[c.case];
+    if (f) m += f * momentAt(c.loads, model.L, x);
+  }
+  return m;
+}
 
 /**
  * The response to a combination of the cases present (absent cases contribute nothing).

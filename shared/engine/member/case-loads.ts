@@ -55,15 +55,15 @@ export function gatherCaseLoads(
   }
   for (const a of loads.area) {
     const v = toInternal(a.value, 'areaLoad') * spacing;
-    if (v > 0) get(a.case).q0 += v;
+    if (v !== 0) get(a.case).q0 += v;
   }
   for (const l of loads.line) {
     const v = toInternal(l.value, 'lineLoad');
-    if (v > 0) get(l.case).q0 += v;
+    if (v !== 0) get(l.case).q0 += v;
   }
   for (const p of loads.point) {
     const P = toInternal(p.value, 'force');
-    if (P > 0) get(p.case).points.push({ P, a: toInternal(p.at, 'length') });
+    if (P !== 0) get(p.case).points.push({ P, a: toInternal(p.at, 'length') });
   }
   return LOAD_CASES.flatMap((c) => {
     const entry = byCase.get(c);

@@ -14,8 +14,17 @@ import { momentAt } from './statics';
 const G = 386.0886; // in/s^2, standard gravity
 const ITERATIONS = 1;
 
-/** Frequency in Hz of the first bending mode under the weights `mass` (kip/in and kip at points). */
-export function firstFrequency(model: MemberModel, mass: CaseLoads): number {
+/** A flexible root: rotation = (M + V x offset) x flexibility (connection/root-stiffness.ts). */
+export interface RootSpring {
+  flexibility: number;
+  offset: number;
+}
+
+/**
+ * Frequency in Hz of the first bending mode under the weights `mass` (kip/in and kip at points).
+ * With a root spring the shapes include the rigid-body rotation of the root.
+ */
+export function firstFrequency(model: MemberModel, mass: CaseLoads, root?: RootSpring): number {
   const { grid, EInode, EImid, L } = model;
   const { x, mid } = grid;
   const n = x.length;
@@ -31,7 +40,8 @@ export function firstFrequency(model: MemberModel, mass: CaseLoads): number {
   const kM = new Float64Array(n - 1);
   for (let i = 0; i < n; i++) kN[i] = momentAt(mass, L, x[i]) / EInode[i];
   for (let i = 0; i < n - 1; i++) kM[i] = momentAt(mass, L, mid[i]) / EImid[i];
-  let shape = deflectedShape(x, kN, kM);
+  const V0 = mass.q0 * L + 0.5 * mass.q1 * L * L + mass.points.reduce((s, p) => s + p.P, 0);
+  let shape = withRootRotation(deflectedShape(x, kN, kM), x, root, momentAt(mass, L, 0), V0);
   let omega2 = G / quotient(x, wNode, wMid, pNode, ones(n), shape);
   for (let k = 0; k < ITERATIONS; k++) {
     const qN = new Float64Array(n);
@@ -42,7 +52,8 @@ export function firstFrequency(model: MemberModel, mass: CaseLoads): number {
       pN[i] = pNode[i] * shape.node[i];
     }
     for (let i = 0; i < n - 1; i++) qM[i] = wMid[i] * shape.mid[i];
-    const next = shapeUnderLoad(x, qN, qM, pN, EInode, EImid);
+    const loaded = shapeUnderLoad(x, qN, qM, pN, EInode, EImid);
+    const next = withRootRotation(loaded.shape, x, root, loaded.M0, loaded.V0);
     omega2 = G / quotient(x, wNode, wMid, pNode, shape, next);
     shape = next;
   }
@@ -85,6 +96,21 @@ function quotient(
   return bb / ab;
 }
 
+/** Adds the root's rotation theta0 = (M0 + V0 offset) x flexibility as theta0 x x to a shape. */
+function withRootRotation(
+  s: Shape,
+  x: readonly number[],
+  root: RootSpring | undefined,
+  M0: number,
+  V0: number,
+): Shape {
+  if (!root || root.flexibility === 0) return s;
+  const t0 = (M0 + V0 * root.offset) * root.flexibility;
+  for (let i = 0; i < x.length; i++) s.node[i] += t0 * x[i];
+  for (let i = 0; i < s.mid.length; i++) s.mid[i] += t0 * 0.5 * (x[i] + x[i + 1]);
+  return s;
+}
+
 function ones(n: number): Shape {
   return { node: new Float64Array(n).fill(1), mid: new Float64Array(n - 1).fill(1) };
 }
@@ -108,7 +134,7 @@ function shapeUnderLoad(
   pN: Float64Array,
   EIn: Float64Array,
   EIm: Float64Array,
-): Shape {
+): { shape: Shape; M0: number; V0: number } {
   const n = x.length;
   const kN = new Float64Array(n);
   const kM = new Float64Array(n - 1);
@@ -125,7 +151,7 @@ function shapeUnderLoad(
     Vb = Va + pN[i];
     Mb = Ma;
   }
-  return deflectedShape(x, kN, kM);
+  return { shape: deflectedShape(x, kN, kM), M0: Mb, V0: Vb };
 }
 
 function nearest(x: readonly number[], a: number): number {

@@ -1,5 +1,5 @@
 import { useCallback, useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { useLocation, useParams } from 'react-router-dom';
 import { exampleDesign } from '../../../shared/engine/examples';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import { ErrorNote, Loading } from '../../components/ui/status';
@@ -9,9 +9,13 @@ import { AttachmentsPanel } from '../../features/attachments/components/attachme
 import { DeskEditor } from '../../features/desk/components/desk-editor';
 import { prepareDocument } from '../../features/desk/lib/prepare-document';
 import { useRevision } from '../../lib/api/revisions/get-revision';
+import { readProposal } from '../../lib/desk-proposal';
 
 export default function DesignDeskRoute() {
   const cantileverId = Number(useParams().cantileverId);
+  // A point or a section handed over from the reach study, read once when the desk opens.
+  const location = useLocation();
+  const [proposal] = useState(() => readProposal(location.state));
   const me = useMe();
   const cantilever = useCantilever(cantileverId);
   // The revision the desk opened on stays put while later saves move the cantilever's pointer.
@@ -45,6 +49,7 @@ export default function DesignDeskRoute() {
       initialDoc={initialDoc}
       user={me.data}
       toUserUnits={toUserUnits}
+      proposal={proposal}
       files={<AttachmentsPanel cantileverId={cantileverId} />}
     />
   );

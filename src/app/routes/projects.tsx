@@ -8,6 +8,7 @@ import { ErrorNote, Loading } from '../../components/ui/status';
 import { useMe } from '../../lib/api/me/get-me';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { CreateProjectForm } from '../../features/projects/components/create-project-form';
+import { AwaitingReviewList } from '../../features/projects/components/awaiting-review-list';
 
 export default function ProjectsRoute() {
   const projects = useProjects();
@@ -26,6 +27,7 @@ export default function ProjectsRoute() {
           </Button>
         ) : null}
       </div>
+      {me.data?.role === 'engineer' ? <AwaitingReviewList /> : null}
       {projects.isPending ? (
         <Loading />
       ) : projects.isError ? (

@@ -4,6 +4,8 @@ import { revisionQueryOptions } from '../../lib/api/revisions/get-revision';
 import { useMe } from '../../lib/api/me/get-me';
 import { errorText } from '../../lib/error-text';
 import { ReviewView } from '../../features/review/components/review-view';
+import { useRevisions } from '../../lib/api/revisions/get-revisions';
+import { RevisionEvidence } from '../revision-evidence';
 
 /** Review: one revision, for the engineer who decides on it. */
 export default function ReviewRoute() {
@@ -16,6 +18,11 @@ export default function ReviewRoute() {
     staleTime: 0,
   });
   const me = useMe();
+  const list = useRevisions(revision.data?.cantileverId ?? 0);
+  const newerList = revision.data ? (list.data ?? []).filter((r) => r.number > revision.data.number) : [];
+  const newer = newerList.length
+    ? { id: newerList[0].id, number: newerList[0].number, count: newerList.length }
+    : null;
 
   return (
     <div className="mx-auto max-w-5xl space-y-4 p-6">
@@ -34,7 +41,14 @@ export default function ReviewRoute() {
           The revision could not be loaded: {errorText(revision.error)}
         </p>
       )}
-      {revision.data && <ReviewView revision={revision.data} user={me.data} />}
+      {revision.data && (
+        <ReviewView
+          revision={revision.data}
+          user={me.data}
+          newer={newer}
+          evidence={<RevisionEvidence revision={revision.data} />}
+        />
+      )}
     </div>
   );
 }

@@ -6,11 +6,8 @@ import {
   bearingZoneFromResult,
   plateLayout,
 } from '../../../shared/engine/connection/plate-layout';
-import {
-  csvField,
-  plateScheduleCsv,
-  plateScheduleRow,
-} from '../../../shared/engine/connection/plate-schedule';
+import { plateScheduleCsv, plateScheduleRow } from '../../../shared/engine/connection/plate-schedule';
+import { csvField } from '../../../shared/csv/csv-writer';
 import { ROD_SIZES, rodSize } from '../../../shared/engine/connection/rod-data';
 import { rodEdgeMinimum } from '../../../shared/engine/connection/rod-positions';
 import { findShape } from '../../../shared/engine/shapes/table';
@@ -129,5 +126,17 @@ describe('plate schedule CSV (RFC 4180)', () => {
     expect(lines[1].startsWith('"North, ""typ."""')).toBe(true);
     expect(lines[0].split(',').length).toBeGreaterThan(10);
     expect(lines[2]).toMatch(/^BP-2,post-base,/);
+  });
+
+  it('neutralises cells a spreadsheet would run as a formula (= + - @, tab, CR) [OWASP CSV injection advice]', () => {
+    for (const start of ['=', '+', '-', '@', '\t', '\r']) {
+      const cell = csvField(`${start}SUM(A1:A9)`);
+      expect(cell.replace(/^"/, '').startsWith(`'${start}`)).toBe(true);
+    }
+    expect(csvField('=1+2')).toBe("'=1+2");
+    expect(csvField('-3,4')).toBe(`"'-3,4"`);
+    expect(csvField('a=b')).toBe('a=b');
+    const csv = plateScheduleCsv([plateScheduleRow('=HYPERLINK("x")', input, result)]);
+    expect(csv.split('\r\n')[1].startsWith(`"'=HYPERLINK(""x"")"`)).toBe(true);
   });
 });

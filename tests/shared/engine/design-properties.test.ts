@@ -65,6 +65,7 @@ const document = fc
     braced: fc.double({ min: 0.05, max: 1, noNaN: true }),
     frequencyMin: fc.option(fc.double({ min: 1, max: 30, noNaN: true })),
   })
+  .map((d) => ({ ...d, length: Math.max(d.length, taperMinimumFt(d.section)) }))
   .map((d): DesignDocument => ({
     units: d.units,
     method: d.method,
@@ -82,6 +83,20 @@ const document = fc
     },
     ...(d.frequencyMin === null ? {} : { frequencyMin: `${d.frequencyMin.toFixed(2)} Hz` }),
   }));
+
+/** The shortest member that keeps a taper within 1:4 (steeper tapers are refused since issue 10). */
+function taperMinimumFt(s: {
+  shape?: string;
+  tipDepth?: string;
+  plates?: { rootDepth: string; tipDepth: string };
+}): number {
+  const drop = s.plates
+    ? parseFloat(s.plates.rootDepth) - parseFloat(s.plates.tipDepth)
+    : s.tipDepth
+      ? 12.2 - parseFloat(s.tipDepth) // W12X26 d = 12.2 in (AISC Shapes Database v15.0)
+      : 0;
+  return (drop / 0.25 / 12) * 1.001;
+}
 
 function numbers(value: unknown, out: number[] = []): number[] {
   if (typeof value === 'number') out.push(value);

@@ -54,10 +54,12 @@ describe('the result document', () => {
     expect(given.member.steel!.Fy.value).toBeCloseTo(50.04, 2);
   });
 
-  it('without frequencyMin there is no vibration row, and the frequency is still reported', () => {
+  it('without frequencyMin the vibration row uses the 5 Hz default of EN 1990 Annex A2 A2.4.3.2 [mem], named', () => {
     const r = run(memberDoc({ loads: { selfWeight: true, area: [], line: [], point: [] } }));
-    expect(r.checks.find((c) => c.id === 'member.vibration')).toBeUndefined();
-    expect(r.member.frequency.value).toBeGreaterThan(0);
+    const v = check(r, 'member.vibration');
+    expect(v.demand!.value).toBe(5);
+    expect(v.reference).toMatch(/EN 1990 Annex A2/);
+    expect(v.ratio).toBeCloseTo(5 / r.member.frequency.value, 12);
   });
 
   it('a frequency below the stated minimum fails member.vibration', () => {

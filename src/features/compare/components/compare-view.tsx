@@ -62,19 +62,13 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
         <h2 id="compare-curves" className="mb-2 text-lg font-semibold text-concrete-900">
           Moment and deflection curves
         </h2>
-        {stationsA.pending || stationsB.pending ? (
-          <p role="status" className="text-sm text-concrete-600">
-            Computing the curves…
-          </p>
-        ) : (
-          <CompareCurves
-            labelA={labelA}
-            labelB={labelB}
-            stationsA={stationsA.stations}
-            stationsB={stationsB.stations}
-            checksB={b.result.checks}
-          />
-        )}
+        <CompareCurves
+          labelA={labelA}
+          labelB={labelB}
+          stationsA={stationsA.stations}
+          stationsB={stationsB.stations}
+          checksB={b.result.checks}
+        />
       </section>
       <CautionNote />
     </div>

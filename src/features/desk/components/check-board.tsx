@@ -37,7 +37,14 @@ function UtilBar({ ratio, tone }: { ratio: number | null; tone: Tone }) {
 }
 
 /** Every check as a row, worst first; each with its clause, combination, demand, capacity, bar, ratio and word. */
-export function CheckBoard({ checks }: { checks: readonly Check[] }) {
+export function CheckBoard({
+  checks,
+  directions = {},
+}: {
+  checks: readonly Check[];
+  /** Each combination's direction (result.member.combinations): "up" is marked as uplift. */
+  directions?: Readonly<Record<string, 'down' | 'up'>>;
+}) {
   const rows = sortWorstFirst(checks);
   return (
     <table className="w-full border-collapse text-sm" aria-label="Check board">
@@ -71,7 +78,12 @@ export function CheckBoard({ checks }: { checks: readonly Check[] }) {
                 </div>
                 {c.note ? <div className="text-xs text-concrete-700">{c.note}</div> : null}
               </td>
-              <td className="py-1.5 pr-2 text-xs">{c.combination ?? '—'}</td>
+              <td className="py-1.5 pr-2 text-xs">
+                {c.combination ?? '—'}
+                {c.combination && directions[c.combination] === 'up' ? (
+                  <div className="text-concrete-500">uplift: top flange in compression</div>
+                ) : null}
+              </td>
               <td className="num py-1.5 pr-2 text-right whitespace-nowrap">
                 {c.demand ? formatQuantity(c.demand) : '—'}
               </td>

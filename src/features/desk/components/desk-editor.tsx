@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
 import { FormProvider, useForm, useFormState } from 'react-hook-form';
+import { useNavigate } from 'react-router-dom';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { UnitSystem } from '../../../../shared/engine/units';
 import {
@@ -10,7 +11,10 @@ import {
   type UserDto,
 } from '../../../../shared/schemas/api';
 import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
+import { paths } from '../../../config/paths';
 import { useUpdateMe } from '../../../lib/api/me/update-me';
+import type { DeskProposal } from '../../../lib/desk-proposal';
+import { studyState } from '../../../lib/study-handoff';
 import { ShapePickerDialog } from '../../../components/shapes/shape-picker-dialog';
 import { useShapes } from '../../../lib/api/shapes/get-shapes';
 import { useLiveDesign } from '../hooks/use-live-design';
@@ -21,6 +25,8 @@ import { DeskHeader } from './desk-header';
 import { DeskInputs, IssueSummary } from './desk-inputs';
 import { DeskResults } from './desk-results';
 import { PlateScheduleLink } from './plate-schedule-link';
+import { PackageLink } from '../../../components/ui/package-link';
+import { SubmitForReview } from '../../../components/submit-for-review';
 import { DeskSave } from './desk-save';
 import { EngineIssuesContext } from './field-context';
 import { DeskSide } from './desk-side';
@@ -36,10 +42,20 @@ export interface DeskEditorProps {
   toUserUnits: (doc: DesignDocument) => DesignDocument;
   /** The cantilever's files panel (the attachments feature, composed by the route). */
   files: ReactNode;
+  /** A document handed over by the reach study: loaded as unsaved changes on top of the revision. */
+  proposal?: DeskProposal | null;
 }
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
-export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits, files }: DeskEditorProps) {
+export function DeskEditor({
+  cantilever,
+  revision,
+  initialDoc,
+  user,
+  toUserUnits,
+  files,
+  proposal,
+}: DeskEditorProps) {
   const form = useForm<DesignDocument, unknown, DesignInput>({
     resolver: zodResolver(designSchema),
     mode: 'onChange',
@@ -63,6 +79,20 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const updateMe = useUpdateMe();
   const rights = EDIT_RIGHTS[user.role];
 
+  const navigate = useNavigate();
+  const [fromStudy] = useState(() => proposal ?? null);
+  useEffect(() => {
+    // The saved document stays the form's default (so the change reads as unsaved); the values are the proposal's.
+    if (fromStudy) form.reset(toUserUnits(fromStudy.document), { keepDefaultValues: true });
+  }, [form, fromStudy, toUserUnits]);
+  const openStudy = useCallback(
+    () =>
+      navigate(paths.study(cantilever.id), {
+        state: studyState({ document: form.getValues(), unsaved: isDirty }),
+      }),
+    [navigate, cantilever.id, form, isDirty],
+  );
+
   useEffect(() => {
     submit(form.getValues());
     return form.subscribe({ formState: { values: true }, callback: ({ values }) => submit(values) });
@@ -84,8 +114,23 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
   const baseId = baseRevision?.id ?? null;
   // Memoised so that the results (a memo component) skip the re-render of every keystroke.
   const schedule = useMemo(
-    () => <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />,
-    [baseId, isDirty, hasConnection],
+    () => (
+      <>
+        <PlateScheduleLink revisionId={baseId} dirty={isDirty} hasConnection={hasConnection} />
+        {/* The package is made from the saved revision; while changes are unsaved it is of the saved one. */}
+        {baseRevision ? (
+          <p className="mt-2 text-sm">
+            <PackageLink revisionId={baseRevision.id} number={baseRevision.number} />
+            {isDirty ? (
+              <span className="ml-2 text-xs text-concrete-600">
+                of the saved revision, not the inputs on screen
+              </span>
+            ) : null}
+          </p>
+        ) : null}
+      </>
+    ),
+    [baseId, baseRevision, isDirty, hasConnection],
   );
 
   function applyShape(target: 'member' | 'footprint', label: string) {
@@ -119,6 +164,7 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
             live={live}
             units={units}
             onUnits={onUnits}
+            onStudy={openStudy}
             save={
               <DeskSave
                 cantileverId={cantilever.id}
@@ -137,6 +183,16 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
               aria-label="Design inputs"
               className="flex flex-col gap-2"
             >
+              {fromStudy ? (
+                <p
+                  role="status"
+                  className="rounded border border-oxide-300 bg-oxide-50 p-2 text-sm"
+                  data-testid="from-study"
+                >
+                  Loaded from the {fromStudy.source === 'study' ? 'reach study' : 'lightest sections list'}:{' '}
+                  <strong>{fromStudy.label}</strong>. These are unsaved changes; save a revision to keep them.
+                </p>
+              ) : null}
               <IssueSummary issues={live.issues} failure={live.failure} />
               <DeskInputs
                 mayEditMember={rights.member}
@@ -146,6 +202,17 @@ export function DeskEditor({ cantilever, revision, initialDoc, user, toUserUnits
               />
             </form>
             <div className="flex min-w-0 flex-col gap-3">
+              {baseRevision &&
+              !isDirty &&
+              (rights.member || rights.connection) &&
+              (baseRevision.id !== revision?.id || revision.reviewState === 'draft') ? (
+                <SubmitForReview
+                  key={baseRevision.id}
+                  cantileverId={cantilever.id}
+                  revisionId={baseRevision.id}
+                  number={baseRevision.number}
+                />
+              ) : null}
               <DeskResults live={live} doc={live.doc} schedule={schedule} />
               <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>

@@ -23,6 +23,7 @@ export function DeskHeader({
   live,
   units,
   onUnits,
+  onStudy,
   save,
 }: {
   cantilever: CantileverDto;
@@ -32,6 +33,8 @@ export function DeskHeader({
   live: LiveDesign;
   units: UnitSystem;
   onUnits: (to: UnitSystem) => void;
+  /** Opens the reach study with the desk's current document. */
+  onStudy: () => void;
   save: ReactNode;
 }) {
   return (
@@ -74,6 +77,16 @@ export function DeskHeader({
         <Link to={paths.history(cantilever.id)} className="text-sm text-oxide-700 underline">
           History
         </Link>
+        <a
+          href={paths.study(cantilever.id)}
+          onClick={(e) => {
+            e.preventDefault();
+            onStudy();
+          }}
+          className="text-sm text-oxide-700 underline"
+        >
+          Reach study
+        </a>
         {save}
       </div>
     </div>

@@ -5,6 +5,7 @@ import { CheckBoard } from './check-board';
 import { DeskCharts } from './desk-charts';
 import { MemberSketch } from './member-sketch';
 import { PlateSketch } from './plate-sketch';
+import { SteelSummary } from './steel-summary';
 import { Verdict } from './verdict';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
@@ -37,6 +38,7 @@ export const DeskResults = memo(function DeskResults({
       <Verdict checks={result ? result.checks : null} stale={live.stale} />
       {result ? (
         <>
+          <SteelSummary result={result} />
           <Panel title="Moment, shear and deflection along the member">
             <DeskCharts
               result={result}
@@ -46,7 +48,10 @@ export const DeskResults = memo(function DeskResults({
             />
           </Panel>
           <Panel title="Check board">
-            <CheckBoard checks={result.checks} />
+            <CheckBoard
+              checks={result.checks}
+              directions={Object.fromEntries(result.member.combinations.map((c) => [c.name, c.direction]))}
+            />
           </Panel>
           <div className="grid gap-3 2xl:grid-cols-2">
             <Panel title="Member elevation">

@@ -2,11 +2,14 @@ import { useEffect } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
+import { readStudyStart } from '../../../lib/study-handoff';
 
 /** Stops a move away (in the app or by closing the tab) while there is unsaved work. */
 export function LeaveGuard({ dirty }: { dirty: boolean }) {
   const blocker = useBlocker(
-    ({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname,
+    // The reach study takes the unsaved document with it (and hands points back as unsaved changes).
+    ({ currentLocation, nextLocation }) =>
+      dirty && currentLocation.pathname !== nextLocation.pathname && !readStudyStart(nextLocation.state),
   );
 
   useEffect(() => {

@@ -31,7 +31,7 @@ export function ReachGroup({ disabled }: { disabled: boolean }) {
         name="frequencyMin"
         label="Lowest natural frequency"
         optional
-        hint="blank = not checked; 8 Hz is a common floor-vibration threshold (example value, common practice)"
+        hint="blank = 5 Hz, below which EN 1990 Annex A2 asks for a walking-comfort check (footbridges)"
       />
     </Group>
   );

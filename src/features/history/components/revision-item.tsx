@@ -6,6 +6,7 @@ import { paths } from '../../../config/paths';
 import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { VerdictWord } from '../../../components/ui/verdict-word';
 import { CommentsThread } from '../../../components/comments-thread';
+import { PackageLink } from '../../../components/ui/package-link';
 import { formatDateTime } from '../../../lib/format';
 
 interface RevisionItemProps {
@@ -16,7 +17,7 @@ interface RevisionItemProps {
   canReview: boolean;
   canSubmit: boolean;
   submitting: boolean;
-  onSubmit: (revision: RevisionSummaryDto) => void;
+  onSubmit: (revision: RevisionSummaryDto, note: string) => void;
 }
 
 /** One revision in the timeline: who, why, when, its review state, verdict and actions. */
@@ -31,6 +32,7 @@ export function RevisionItem({
   onSubmit,
 }: RevisionItemProps) {
   const [showComments, setShowComments] = useState(false);
+  const [note, setNote] = useState('');
   const pickId = `pick-${revision.id}`;
   const commentsId = `comments-${revision.id}`;
   return (
@@ -71,9 +73,19 @@ export function RevisionItem({
         </div>
         <div className="flex flex-wrap items-center gap-2">
           {canSubmit && (
+            <textarea
+              aria-label={`Note to the reviewer (optional), revision ${revision.number}`}
+              placeholder="Note to the reviewer (optional)"
+              rows={1}
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+              className="w-56 rounded border border-concrete-300 p-1 text-sm"
+            />
+          )}
+          {canSubmit && (
             <button
               type="button"
-              onClick={() => onSubmit(revision)}
+              onClick={() => onSubmit(revision, note.trim())}
               disabled={submitting}
               className="inline-flex items-center gap-1 rounded bg-oxide-600 px-3 py-1 text-sm font-medium text-white hover:bg-oxide-700 disabled:opacity-60"
             >
@@ -97,6 +109,13 @@ export function RevisionItem({
               Review record
             </Link>
           )}
+          <Link
+            to={paths.revision(revision.id)}
+            className="rounded border border-concrete-300 px-3 py-1 text-sm text-concrete-800 hover:bg-concrete-50"
+          >
+            Open revision {revision.number}
+          </Link>
+          <PackageLink revisionId={revision.id} number={revision.number} />
           <button
             type="button"
             aria-expanded={showComments}

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { GitCompare } from 'lucide-react';
 import { EDIT_RIGHTS, type RevisionSummaryDto, type UserDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
-import { useSubmitRevision } from '../api/submit-revision';
+import { useSubmitRevision } from '../../../lib/api/revisions/submit-revision';
 import { RevisionItem } from './revision-item';
 import { errorText } from '../../../lib/error-text';
 
@@ -36,14 +36,10 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
     );
   }
 
-  function onSubmit(revision: RevisionSummaryDto) {
+  function onSubmit(revision: RevisionSummaryDto, note: string) {
     setStatus('');
-    submit.mutate(revision.id, {
-      onSuccess: () =>
-        setStatus(
-          `Revision ${revision.number} was submitted for review. The project's engineers were notified.`,
-        ),
-    });
+    // The server says who was notified, or why nobody could be.
+    submit.mutate({ revisionId: revision.id, note }, { onSuccess: (answer) => setStatus(answer.notice) });
   }
 
   const pair = revisions.filter((r) => picked.includes(r.id)).sort((a, b) => a.number - b.number);
@@ -92,7 +88,7 @@ export function RevisionTimeline({ cantileverId, revisions, user }: RevisionTime
             onPick={onPick}
             canReview={user?.role === 'engineer'}
             canSubmit={revision === latest && revision.reviewState === 'draft' && isDesignRole(user)}
-            submitting={submit.isPending && submit.variables === revision.id}
+            submitting={submit.isPending && submit.variables?.revisionId === revision.id}
             onSubmit={onSubmit}
           />
         ))}

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -19,11 +20,23 @@ interface DecisionFormProps {
   revisionId: number;
   revisionNumber: number;
   cantileverId: number;
+  /** The latest revision's number when a newer one exists (said again in the confirmation). */
+  newerNumber?: number | null;
   onDecided: (message: string) => void;
 }
 
-/** Approve or request changes, with a comment; errors next to the fields. */
-export function DecisionForm({ revisionId, revisionNumber, cantileverId, onDecided }: DecisionFormProps) {
+/**
+ * Approve or request changes, with a comment; errors next to the fields. Approving asks once more,
+ * naming the revision (and any newer one), before anything is recorded.
+ */
+export function DecisionForm({
+  revisionId,
+  revisionNumber,
+  cantileverId,
+  newerNumber = null,
+  onDecided,
+}: DecisionFormProps) {
+  const [confirming, setConfirming] = useState<DecisionOutput | null>(null);
   const review = useCreateReview(revisionId, cantileverId);
   const form = useForm<DecisionInput, unknown, DecisionOutput>({
     resolver: zodResolver(decisionSchema),
@@ -31,14 +44,54 @@ export function DecisionForm({ revisionId, revisionNumber, cantileverId, onDecid
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const record = async (values: DecisionOutput) => {
     await review.mutateAsync(values);
+    setConfirming(null);
     onDecided(
       values.decision === 'approve'
         ? `You approved revision ${revisionNumber}.`
         : `You requested changes on revision ${revisionNumber}.`,
     );
+  };
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    if (values.decision === 'approve') setConfirming(values);
+    else await record(values);
   });
+
+  if (confirming)
+    return (
+      <div
+        role="alertdialog"
+        aria-labelledby="confirm-approval-title"
+        aria-describedby="confirm-approval-text"
+        className="space-y-3 rounded border border-oxide-300 bg-oxide-50 p-3"
+      >
+        <h3 id="confirm-approval-title" className="text-base font-semibold text-concrete-900">
+          Approve revision {revisionNumber}?
+        </h3>
+        <p id="confirm-approval-text" className="text-sm text-concrete-800">
+          Your name and today's date go on revision {revisionNumber}, its calculation package and the plate
+          schedule the shop builds from. An approval cannot be undone.
+          {newerNumber !== null
+            ? ` Revision ${newerNumber} is newer and stays as it is: you are approving revision ${revisionNumber}.`
+            : ''}
+        </p>
+        {review.isError && (
+          <p role="alert" className="text-sm text-util-over">
+            The decision was not recorded: {errorText(review.error)}
+          </p>
+        )}
+        <div className="flex flex-wrap gap-2">
+          <Button variant="primary" disabled={review.isPending} onClick={() => void record(confirming)}>
+            {review.isPending ? 'Recording…' : `Yes, approve revision ${revisionNumber}`}
+          </Button>
+          <Button disabled={review.isPending} onClick={() => setConfirming(null)}>
+            Go back
+          </Button>
+        </div>
+      </div>
+    );
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" aria-label="Review decision">

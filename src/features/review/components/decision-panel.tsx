@@ -9,9 +9,12 @@ import { DecisionForm } from './decision-form';
 export function DecisionPanel({
   revision,
   user,
+  newerNumber = null,
 }: {
   revision: RevisionDto;
   user: UserDto | null | undefined;
+  /** The latest revision's number when a newer one than this exists. */
+  newerNumber?: number | null;
 }) {
   const [status, setStatus] = useState('');
   const access = decisionAccess(user, revision);
@@ -46,6 +49,7 @@ export function DecisionPanel({
           revisionId={revision.id}
           revisionNumber={revision.number}
           cantileverId={revision.cantileverId}
+          newerNumber={newerNumber}
           onDecided={setStatus}
         />
       ) : (

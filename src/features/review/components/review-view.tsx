@@ -1,4 +1,6 @@
 import type { ReactNode } from 'react';
+import { TriangleAlert } from 'lucide-react';
+import { PackageLink } from '../../../components/ui/package-link';
 import { Link } from 'react-router-dom';
 import type { RevisionDto, UserDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
@@ -24,8 +26,29 @@ function Section({ id, title, children }: { id: string; title: string; children:
   );
 }
 
-/** An engineer's view of one revision: verdict, checks, key results, changes, comments, decision. */
-export function ReviewView({ revision, user }: { revision: RevisionDto; user: UserDto | null | undefined }) {
+/** The newest revision of the same cantilever, when it is not this one. */
+export interface NewerRevision {
+  id: number;
+  number: number;
+  count: number;
+}
+
+/**
+ * An engineer's view of one revision, evidence first: the verdict and every check, every input,
+ * the diagrams and sketches (`evidence`, composed by the route from the desk's components), key
+ * results and changes; then the decision, the comments and the record.
+ */
+export function ReviewView({
+  revision,
+  user,
+  evidence,
+  newer,
+}: {
+  revision: RevisionDto;
+  user: UserDto | null | undefined;
+  evidence?: ReactNode;
+  newer?: NewerRevision | null;
+}) {
   const failing = revision.result.checks.filter((c) => !c.ok || c.ratio === null).length;
   return (
     <div className="space-y-4">
@@ -53,9 +76,31 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
         </p>
       </header>
       <CautionNote />
-      <Section id="review-decision" title="Decision">
-        <DecisionPanel revision={revision} user={user} />
-      </Section>
+      {newer ? (
+        <p
+          role="alert"
+          data-testid="newer-revisions"
+          className="flex items-start gap-2 rounded border border-util-near bg-amber-50 p-3 text-sm text-concrete-900"
+        >
+          <TriangleAlert aria-hidden="true" className="mt-0.5 h-4 w-4 shrink-0" />
+          <span>
+            {newer.count === 1 ? 'A newer revision exists' : `${newer.count} newer revisions exist`}: the
+            latest is revision {newer.number}. You are reviewing revision {revision.number}.{' '}
+            <Link to={paths.revision(newer.id)} className="font-medium text-oxide-700 underline">
+              Open revision {newer.number}
+            </Link>
+          </span>
+        </p>
+      ) : null}
+      <div className="flex flex-wrap gap-2">
+        <PackageLink revisionId={revision.id} number={revision.number} />
+        <Link
+          to={paths.revision(revision.id)}
+          className="rounded border border-concrete-300 px-3 py-1 text-sm text-concrete-800 hover:bg-concrete-50"
+        >
+          Open revision {revision.number} read-only
+        </Link>
+      </div>
       <Section id="review-verdict" title="Verdict and checks">
         <p className="mb-2 text-sm">
           <VerdictWord ok={revision.result.ok && failing === 0} />{' '}
@@ -68,6 +113,11 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
         </p>
         <CheckList checks={revision.result.checks} />
       </Section>
+      {evidence ? (
+        <Section id="review-evidence" title="Inputs, diagrams and sketches">
+          {evidence}
+        </Section>
+      ) : null}
       <Section id="review-key" title="Key results">
         <KeyResults result={revision.result} input={revision.input} />
       </Section>
@@ -80,6 +130,9 @@ export function ReviewView({ revision, user }: { revision: RevisionDto; user: Us
         }
       >
         <BaseChanges revision={revision} />
+      </Section>
+      <Section id="review-decision" title="Decision">
+        <DecisionPanel revision={revision} user={user} newerNumber={newer?.number ?? null} />
       </Section>
       <Section id="review-comments" title="Comments">
         <CommentsThread revisionId={revision.id} />

@@ -15,6 +15,7 @@ export function revisionsQueryOptions(cantileverId: number) {
   });
 }
 
+/** A cantilever id of 0 (not known yet) fetches nothing. */
 export function useRevisions(cantileverId: number) {
-  return useQuery(revisionsQueryOptions(cantileverId));
+  return useQuery({ ...revisionsQueryOptions(cantileverId), enabled: cantileverId > 0 });
 }

@@ -9,6 +9,7 @@ import { pulloutStrength } from '../../../../shared/engine/connection/pullout-bl
 import { flexureCheck } from '../../../../shared/engine/checks/flexure-check';
 import { shearCheck } from '../../../../shared/engine/checks/shear-check';
 import type { CheckContext } from '../../../../shared/engine/checks/check-context';
+import { readLateralSupport } from '../../../../shared/engine/checks/lateral-support';
 import type { Response } from '../../../../shared/engine/member/analysis';
 import { analyseMember } from '../../../../shared/engine/member/analysis';
 import { builtUpSection } from '../../../../shared/engine/sections/tapered-section';
@@ -104,7 +105,9 @@ function taperContext(M: (x: number) => number): CheckContext {
     Fy: 50,
     E: 29000,
     Lb: 12,
-    combos: [{ name: '1.6L', response }],
+    combos: [{ name: '1.6L', factors: { L: 1.6 }, response }],
+    signed: false,
+    lateral: readLateralSupport({ length: '1 ft', spacing: '1 ft', section: { shape: 'W12X26' } }),
   };
 }
 
