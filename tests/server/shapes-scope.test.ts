@@ -22,7 +22,7 @@ interface Check {
 interface Revision {
   id: number;
   number: number;
-  result: { checks: Check[]; member: unknown };
+  result: { checks: Check[]; member: { section: unknown; cases: unknown } };
 }
 
 function ratio(rev: Revision, id: string): number | null {
