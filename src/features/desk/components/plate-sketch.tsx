@@ -190,7 +190,7 @@ export const PlateSketch = memo(function PlateSketch({
             stroke="none"
           >{`bearing Y ${t(Yb)}`}</text>
         ) : null}
-        <text x={W - 8} y={14} textAnchor="end" stroke="none" fill="#857d71">
+        <text x={W - 8} y={14} textAnchor="end" stroke="none" fill="#746c61">
           tension row →
         </text>
       </g>
