@@ -54,7 +54,7 @@ export function LoadList({ kind }: { kind: Kind }) {
           key={row.id}
           className="grid grid-cols-[6.5rem_1fr_auto] items-end gap-1.5 rounded bg-concrete-50 p-1.5"
         >
-          <SelectField name={`loads.${kind}.${i}.case`} label="Case">
+          <SelectField name={`loads.${kind}.${i}.case`} label="Case" deps={[`loads.${kind}.${i}.value`]}>
             {LOAD_CASES.map((c) => (
               <option key={c} value={c}>
                 {CASE_WORDS[c]}

@@ -57,7 +57,18 @@ export function NumberField({
   );
 }
 
-export function SelectField({ name, label, children }: { name: string; label: string; children: ReactNode }) {
+export function SelectField({
+  name,
+  label,
+  children,
+  deps,
+}: {
+  name: string;
+  label: string;
+  children: ReactNode;
+  /** Fields whose check depends on this choice (re-checked when it changes). */
+  deps?: string[];
+}) {
   const { register } = useFormContext<DesignDocument>();
   const error = useFieldError(name);
   const id = fieldId(name);
@@ -67,7 +78,7 @@ export function SelectField({ name, label, children }: { name: string; label: st
         id={id}
         className={inputClass(Boolean(error))}
         {...describedBy(id, error)}
-        {...register(name as Name)}
+        {...register(name as Name, deps ? { deps: deps as Name[] } : undefined)}
       >
         {children}
       </select>
