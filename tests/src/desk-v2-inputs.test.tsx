@@ -13,7 +13,9 @@ import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { SteelSummary } from '../../src/features/desk/components/steel-summary';
 import { SupportGroup } from '../../src/features/desk/components/support-group';
 import { TipDeflectionSplit } from '../../src/features/desk/components/tip-deflection-split';
+import { describeSeries } from '../../src/features/desk/lib/chart-data';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
+import { switchUnits } from '../../src/features/desk/lib/switch-units';
 
 let read: UseFormGetValues<DesignDocument> = () => {
   throw new Error('no form');
@@ -242,5 +244,40 @@ describe('tip deflection split and camber', () => {
     const result = evaluateDesign(designSchema.parse(exampleMemberOnly));
     render(<TipDeflectionSplit result={result} />);
     expect(screen.queryByTestId('tip-split')).toBeNull();
+  });
+});
+
+describe('new quantities follow the unit switch', () => {
+  it('rewrites braces, the post height and the weld size in SI and back', () => {
+    const doc: DesignDocument = {
+      ...exampleDesign,
+      member: {
+        length: '9 ft',
+        spacing: '4 ft',
+        section: { shape: 'W8X18' },
+        lateralSupport: { braces: ['3 ft'] },
+      },
+      connection: { ...exampleDesign.connection!, post: { height: '12 in' }, weld: { size: '0.25 in' } },
+    };
+    const { doc: si, record } = switchUnits(doc, 'SI');
+    // 3 ft = 0.9144 m, 12 in = 304.8 mm, 0.25 in = 6.35 mm (exact by definition of the inch).
+    expect(si.member.lateralSupport?.braces).toEqual(['0.9144 m']);
+    expect(si.connection?.post?.height).toBe('304.8 mm');
+    expect(si.connection?.weld?.size).toBe('6.35 mm');
+    const back = switchUnits(si, 'US', record).doc;
+    expect(back.member.lateralSupport?.braces).toEqual(['3 ft']);
+    expect(back.connection?.weld?.size).toBe('0.25 in');
+  });
+});
+
+describe('uplift in words', () => {
+  it('says the tip moves upward under net wind uplift', () => {
+    const doc: DesignDocument = {
+      ...exampleDesign,
+      loads: { ...exampleDesign.loads!, area: [{ case: 'W', value: '-60 psf' }] },
+    };
+    const result = evaluateDesign(designSchema.parse(doc), { stations: true });
+    const wind = result.stations!.cases.find((c) => c.name === 'W')!;
+    expect(describeSeries(result, wind, null).deflection).toMatch(/[\d.]+ in upward at the tip\.$/);
   });
 });

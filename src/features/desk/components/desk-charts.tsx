@@ -53,9 +53,13 @@ export function DeskCharts({
         <p className="text-sm" data-testid="effect-words">
           {summary ? (
             <>
-              Under <strong>{choice.series.name}</strong> the tip moves down{' '}
+              Under <strong>{choice.series.name}</strong> the tip moves{' '}
+              {summary.tipDeflection.value < 0 ? 'up' : 'down'}{' '}
               <strong className="num" data-testid="tip-deflection">
-                {formatQuantity(summary.tipDeflection)}
+                {formatQuantity({
+                  value: Math.abs(summary.tipDeflection.value),
+                  unit: summary.tipDeflection.unit,
+                })}
               </strong>
               {limit ? (
                 <>
