@@ -1,4 +1,5 @@
 import { Plus, Trash2 } from 'lucide-react';
+import { useRef } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
 import { parseQuantity } from '../../../../shared/engine/units';
 import type { DesignDocument } from '../../../../shared/schemas/design';
@@ -76,18 +77,22 @@ function BraceList() {
 export function LateralSupportFields() {
   const { control, getValues, setValue } = useFormContext<DesignDocument>();
   const detailed = useWatch({ control, name: 'member.lateralSupport' }) !== undefined;
+  // The unbraced length as it was before the detailed form, for a length that gave no brace.
+  const lastUnbraced = useRef<string | undefined>(undefined);
 
   function choose(next: boolean) {
     const opts = { shouldDirty: true, shouldValidate: true } as const;
     if (next === detailed) return;
     if (next) {
-      const ls = toDetailed(getValues('member.unbracedLength'), getValues('member.length'));
+      lastUnbraced.current = getValues('member.unbracedLength');
+      const ls = toDetailed(lastUnbraced.current, getValues('member.length'));
       setValue('member.unbracedLength', undefined, opts);
       setValue('member.lateralSupport', ls, opts);
     } else {
       const first = getValues('member.lateralSupport.braces')?.[0];
+      const gaveNoBrace = !toDetailed(lastUnbraced.current, getValues('member.length')).braces;
       setValue('member.lateralSupport', undefined, opts);
-      setValue('member.unbracedLength', first, opts);
+      setValue('member.unbracedLength', first ?? (gaveNoBrace ? lastUnbraced.current : undefined), opts);
     }
   }
 
