@@ -22,6 +22,8 @@ export default defineConfig({
     testTimeout: 30000,
     hookTimeout: 30000,
     unstubGlobals: true,
+    // Servers started by tests log warnings and errors only (JSON request lines would flood the output).
+    env: { LOG_LEVEL: 'warn' },
     projects: [
       {
         extends: true,

@@ -29,9 +29,8 @@ export function httpLogger(logger: Logger) {
       return id;
     },
     customLogLevel(_req, res, err) {
-      if (err || res.statusCode >= 500) return 'error';
-      if (res.statusCode >= 400) return 'warn';
-      return 'info';
+      // A 4xx is the client's business (a wrong password, a stale save): info, like a success.
+      return err || res.statusCode >= 500 ? 'error' : 'info';
     },
     // The health probe of a load balancer every few seconds is not worth a line.
     autoLogging: { ignore: (req) => (req as { originalUrl?: string }).originalUrl === '/api/health' },

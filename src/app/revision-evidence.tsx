@@ -6,9 +6,11 @@
 import type { ReactNode } from 'react';
 import type { RevisionDto } from '../../shared/schemas/api';
 import { DesignInputsList } from '../components/design-inputs-list';
+import { CheckBoard } from '../features/desk/components/check-board';
 import { DeskCharts } from '../features/desk/components/desk-charts';
 import { MemberSketch } from '../features/desk/components/member-sketch';
 import { PlateSketch } from '../features/desk/components/plate-sketch';
+import { Verdict } from '../features/desk/components/verdict';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -16,6 +18,42 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
       <h3 className="mb-2 text-sm font-semibold text-concrete-800">{title}</h3>
       {children}
     </section>
+  );
+}
+
+/** The diagrams and sketches of a stored revision (no inputs; nothing to edit). */
+function DrawnResults({ revision }: { revision: RevisionDto }) {
+  const doc = revision.input;
+  return (
+    <>
+      <Panel title="Moment, shear and deflection along the member">
+        <DeskCharts
+          result={revision.result}
+          resultId={revision.id}
+          liveLimit={doc.deflectionLimits?.live ?? 360}
+          totalLimit={doc.deflectionLimits?.total ?? 240}
+        />
+      </Panel>
+      <Panel title="Member elevation">
+        <MemberSketch result={revision.result} />
+      </Panel>
+      <Panel title="Plate on the pier">
+        <PlateSketch doc={doc} result={revision.result} />
+      </Panel>
+    </>
+  );
+}
+
+/** The desk's right side for a stored revision, read-only: verdict, diagrams, check board, sketches. */
+export function RevisionResults({ revision }: { revision: RevisionDto }) {
+  return (
+    <div className="flex min-w-0 flex-col gap-3">
+      <Verdict checks={revision.result.checks} stale={false} />
+      <Panel title="Check board">
+        <CheckBoard checks={revision.result.checks} />
+      </Panel>
+      <DrawnResults revision={revision} />
+    </div>
   );
 }
 
@@ -30,20 +68,7 @@ export function RevisionEvidence({ revision }: { revision: RevisionDto }) {
         <DesignInputsList doc={doc} />
       </div>
       <div className="flex min-w-0 flex-col gap-3">
-        <Panel title="Moment, shear and deflection along the member">
-          <DeskCharts
-            result={revision.result}
-            resultId={revision.id}
-            liveLimit={doc.deflectionLimits?.live ?? 360}
-            totalLimit={doc.deflectionLimits?.total ?? 240}
-          />
-        </Panel>
-        <Panel title="Member elevation">
-          <MemberSketch result={revision.result} />
-        </Panel>
-        <Panel title="Plate on the pier">
-          <PlateSketch doc={doc} result={revision.result} />
-        </Panel>
+        <DrawnResults revision={revision} />
       </div>
     </div>
   );

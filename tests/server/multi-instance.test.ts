@@ -2,7 +2,7 @@
  * Two app processes on one PostgreSQL database and one storage folder, as behind a
  * load balancer: a session made on A works on B; concurrent saves on A and B give one 201 and one
  * 409; a file uploaded through A downloads identically from B; a submitted revision's e-mail
- * leaves once although both instances run a mail worker; killing A (SIGKILL) during saves loses
+ * leaves once although both instances run a mail worker; failed sign-ins count across both; killing A (SIGKILL) during saves loses
  * no revision it answered 201 for, and B keeps serving. Runs in the PostgreSQL run only
  * (TEST_PG=1); each process is the real server entry (server/index.ts) started with tsx.
  */
@@ -33,7 +33,8 @@ function startInstance(env: TestEnv, smtpUrl: string, name: string): Promise<Ins
       SMTP_URL: smtpUrl,
       SEED_DEMO: '0',
       LOG_LEVEL: 'warn',
-      LOGIN_RATE_LIMIT: '1000',
+      // Three failed sign-ins per account, counted in the database across both instances.
+      LOGIN_RATE_LIMIT: '3',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -119,6 +120,17 @@ describe.runIf(ON_POSTGRES)('two instances on one PostgreSQL and one storage', (
     await other.call(b.url, 'POST', '/api/auth/logout');
     expect((await other.call(a.url, 'GET', '/api/auth/me')).status).toBe(401);
     await engineer.call(b.url, 'POST', '/api/auth/login', { email: TEAM.engineer.email, password: PASSWORD });
+  });
+
+  it('failed sign-ins are counted across instances: two on A and one on B lock the account on both', async () => {
+    const intruder = new Client();
+    const attempt = (on: Instance, password: string) =>
+      intruder.call(on.url, 'POST', '/api/auth/login', { email: TEAM.outsider.email, password });
+    expect((await attempt(a, 'wrong one')).status).toBe(401);
+    expect((await attempt(a, 'wrong two')).status).toBe(401);
+    expect((await attempt(b, 'wrong three')).status).toBe(401);
+    expect((await attempt(a, PASSWORD)).status).toBe(429);
+    expect((await attempt(b, PASSWORD)).status).toBe(429);
   });
 
   it('concurrent saves on A and B from one base: one 201 and one 409, one revision 2', async () => {

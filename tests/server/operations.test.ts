@@ -71,7 +71,7 @@ describe('health and request logs', () => {
       await new Promise((r) => setTimeout(r, 20));
       const logged = lines.filter((l) => (l.req as { id?: string } | undefined)?.id === 'probe-42');
       expect(logged).toHaveLength(1);
-      expect(logged[0]).toMatchObject({ level: 40, res: { statusCode: 401 }, req: { method: 'GET' } });
+      expect(logged[0]).toMatchObject({ level: 30, res: { statusCode: 401 }, req: { method: 'GET' } });
       expect(JSON.stringify(lines)).not.toMatch(/reachline\.sid=/);
     } finally {
       app.closeApp();

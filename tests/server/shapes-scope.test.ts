@@ -22,7 +22,7 @@ interface Check {
 interface Revision {
   id: number;
   number: number;
-  result: { checks: Check[]; member: unknown };
+  result: { checks: Check[]; member: { section: unknown; cases: unknown } };
 }
 
 function ratio(rev: Revision, id: string): number | null {
@@ -124,9 +124,15 @@ describe('imported shapes belong to their project', () => {
       .send({ baseRevision: 2, message: 'Thicker plate', input })
       .expect(201);
     const rev3 = next.body as Revision;
-    expect(rev3.result.member).toEqual(rev2.result.member);
+    // The member is computed with the project's own section: its properties, strength and its own
+    // bending (rigid root) are unchanged. The thicker plate stiffens the flexible root a little, so the
+    // service deflection moves by a few per cent, never the tenfold of the stiff shape.
+    expect(rev3.result.member.section).toEqual(rev2.result.member.section);
+    expect(rev3.result.member.cases).toEqual(rev2.result.member.cases);
     expect(ratio(rev3, 'member.flexure')).toBe(ratio(rev2, 'member.flexure'));
-    expect(ratio(rev3, 'member.deflection.live')).toBe(ratio(rev2, 'member.deflection.live'));
+    const live3 = ratio(rev3, 'member.deflection.live')!;
+    const live2 = ratio(rev2, 'member.deflection.live')!;
+    expect(Math.abs(live3 / live2 - 1)).toBeLessThan(0.05);
     const again = await fabricator.get(`/api/revisions/${rev2.id}`).expect(200);
     expect(again.body.result).toEqual(rev2.result);
     expect((await env.db('revisions').where({ id: rev2.id }).first()).result_json).toBe(stored.result_json);

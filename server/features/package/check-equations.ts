@@ -8,8 +8,8 @@ import { formatQuantity } from '../../../shared/engine/units';
 
 const EQUATIONS: Record<string, { LRFD: string; ASD: string }> = {
   'member.flexure': {
-    LRFD: 'Mu <= φb Mn, φb = 0.90; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling), Cb = 1.0',
-    ASD: 'Ma <= Mn / Ωb, Ωb = 1.67; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling), Cb = 1.0',
+    LRFD: 'Mu <= φb Mn, φb = 0.90; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling) over the governing unbraced segment (see the note)',
+    ASD: 'Ma <= Mn / Ωb, Ωb = 1.67; Mn the governing flexural limit state of the clause (yielding, lateral-torsional or local buckling) over the governing unbraced segment (see the note)',
   },
   'member.flexure.uplift': {
     LRFD: 'Mu <= φb Mn with the top flange in compression (net upward load), φb = 0.90',
@@ -70,6 +70,18 @@ const EQUATIONS: Record<string, { LRFD: string; ASD: string }> = {
   'anchors.interaction': {
     LRFD: 'N = Nua / φNn and V = Vua / φVn of one combination: if either <= 0.2 the other alone, else (N + V) / 1.2',
     ASD: 'N = Na / (φNn / 1.6) and V = Va / (φVn / 1.6) of one combination: if either <= 0.2 the other alone, else (N + V) / 1.2',
+  },
+  'post.combined': {
+    LRFD: 'AISC 360-16 H1-1a (Pr/Pc >= 0.2): Pr/Pc + (8/9) Mr/Mc <= 1.0, else H1-1b: Pr/(2Pc) + Mr/Mc <= 1.0; Pc from E3 with Lc = 2.1 h, Mc from Chapter F with Lb = h, Cb = 1.0',
+    ASD: 'AISC 360-16 H1-1a (Pr/Pc >= 0.2): Pr/Pc + (8/9) Mr/Mc <= 1.0, else H1-1b: Pr/(2Pc) + Mr/Mc <= 1.0; Pc from E3 with Lc = 2.1 h, Mc from Chapter F with Lb = h, Cb = 1.0',
+  },
+  'weld.strength': {
+    LRFD: 'fr = vector sum of M / Sw, P / Lw and V / L_parallel per inch <= φ 0.60 FEXX 0.707 w, φ = 0.75, and not above the base metal 0.6 Fu t (J4.2)',
+    ASD: 'fr = vector sum of M / Sw, P / Lw and V / L_parallel per inch <= 0.60 FEXX 0.707 w / Ω, Ω = 2.00, and not above the base metal 0.6 Fu t (J4.2)',
+  },
+  'weld.flangeToWeb': {
+    LRFD: 'shear flow q = V Q / I at every station <= two fillets of the Table J2.4 minimum size (AISC 360-16 J2.4), and the web base metal (J4.2)',
+    ASD: 'shear flow q = V Q / I at every station <= two fillets of the Table J2.4 minimum size (AISC 360-16 J2.4), and the web base metal (J4.2)',
   },
   'connection.demand': {
     LRFD: 'the forces the member delivers to the pier under the governing combination',

@@ -198,10 +198,10 @@ export function drawSchedule(w: PdfWriter, d: PackageData): void {
 const LIMITS = [
   'The member is analysed as a cantilever fixed at its support face, linear elastic, loads acting downward unless the design gives wind or seismic uplift; shear and moment are reported as magnitudes.',
   'Load combinations are those of ASCE 7-16 2.3.1 (strength) and 2.4.1 (allowable) whose cases are present; deflection uses the service combinations whatever the method, with the span of a cantilever taken as twice its length (IBC Table 1604.3).',
-  'Flexure takes Cb = 1.0; tapered members are checked station by station with the local section (simplified from AISC Design Guide 25).',
+  'Flexure is checked over each unbraced segment of the compression flange: the segment ending at a free tip takes Cb = 1.0, segments between the root and a brace take Cb from AISC 360-16 Eq. F1-1; tapered members are checked station by station with the local section (simplified from AISC Design Guide 25).',
   'Anchor rods: cast-in headed F1554 rods with heavy hex nuts only; no post-installed anchors, hooked rods, shear lugs or designed anchor reinforcement. For ASD the ACI 318 capacities are divided by 1.6.',
   'Moment about one axis (along N) only; the plate and the pier are centred; rod sizes are US inch sizes.',
-  'No minimum frequency is assumed: the vibration check appears only when the design states frequencyMin.',
+  'The vibration check compares the first bending frequency with 5 Hz (EN 1990 Annex A2, A2.4.3.2) unless the design states frequencyMin; occupants add mass and lower the frequency a little.',
   'Only the checks listed in this package were computed. Anything not listed (the supporting structure, the pier reinforcement, welds unless listed) was not checked by Reachline.',
 ];
 

@@ -3,8 +3,8 @@
  * the person is not a member of both answer 404, so existence is never revealed.
  */
 import type { Knex } from 'knex';
-import { notFound } from '../../lib/http-error';
-import { findProject, isMember, type ProjectRow } from './projects.repository';
+import { HttpError, notFound } from '../../lib/http-error';
+import type { ProjectRow } from './projects.repository';
 
 type Db = Knex | Knex.Transaction;
 
@@ -36,9 +36,15 @@ export interface RevisionRow {
   created_at: string;
 }
 
+/** Each gate is one query: the item joined with the person's membership row (none: 404). */
+const memberOf = (userId: number) => (j: Knex.JoinClause) => j.andOnVal('m.user_id', userId);
+
 export async function projectForMember(db: Db, projectId: number, userId: number): Promise<ProjectRow> {
-  const project = await findProject(db, projectId);
-  if (!project || !(await isMember(db, projectId, userId))) throw notFound('project');
+  const project = (await db('projects as p')
+    .join('project_members as m', (j) => memberOf(userId)(j.on('m.project_id', 'p.id')))
+    .where('p.id', projectId)
+    .first('p.*')) as ProjectRow | undefined;
+  if (!project) throw notFound('project');
   return project;
 }
 
@@ -47,8 +53,11 @@ export async function cantileverForMember(
   cantileverId: number,
   userId: number,
 ): Promise<CantileverRow> {
-  const row = await db<CantileverRow>('cantilevers').where({ id: cantileverId }).first();
-  if (!row || !(await isMember(db, row.project_id, userId))) throw notFound('cantilever');
+  const row = (await db('cantilevers as c')
+    .join('project_members as m', (j) => memberOf(userId)(j.on('m.project_id', 'c.project_id')))
+    .where('c.id', cantileverId)
+    .first('c.*')) as CantileverRow | undefined;
+  if (!row) throw notFound('cantilever');
   return row;
 }
 
@@ -59,7 +68,10 @@ export async function revisionForMember(
 ): Promise<{ revision: RevisionRow; cantilever: CantileverRow }> {
   const revision = await db<RevisionRow>('revisions').where({ id: revisionId }).first();
   if (!revision) throw notFound('revision');
-  const cantilever = await db<CantileverRow>('cantilevers').where({ id: revision.cantilever_id }).first();
-  if (!cantilever || !(await isMember(db, cantilever.project_id, userId))) throw notFound('revision');
+  const cantilever = await cantileverForMember(db, revision.cantilever_id, userId).catch((err: unknown) => {
+    if (err instanceof HttpError && err.status === 404) return null;
+    throw err;
+  });
+  if (!cantilever) throw notFound('revision');
   return { revision, cantilever };
 }

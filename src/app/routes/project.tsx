@@ -52,7 +52,7 @@ export default function ProjectRoute() {
           ) : null}
         </div>
       </div>
-      <CantileverTable cantilevers={p.cantilevers} />
+      <CantileverTable cantilevers={p.cantilevers} mayEdit={role ? role !== 'admin' : false} />
       <h2 className="mt-8 mb-2 font-semibold">Team</h2>
       <ul className="flex flex-wrap gap-2 text-sm">
         {p.members.map((m) => (

@@ -8,8 +8,8 @@ import { paths } from '../../config/paths';
 import { formatDateTime } from '../../lib/format';
 import { revisionQueryOptions } from '../../lib/api/revisions/get-revision';
 import { useRevisions } from '../../lib/api/revisions/get-revisions';
-import { DeskResults } from '../../features/desk/components/desk-results';
 import { DesignInputsList } from '../../components/design-inputs-list';
+import { RevisionResults } from '../revision-evidence';
 
 /** Any stored revision, read-only, in the desk's layout: inputs on the left, results on the right. */
 export default function RevisionRoute() {
@@ -90,18 +90,7 @@ export default function RevisionRoute() {
           <CautionNote />
           <DesignInputsList doc={r.input} />
         </div>
-        <DeskResults
-          live={{
-            result: r.result,
-            resultId: r.id,
-            issues: [],
-            failure: null,
-            stale: false,
-            engineMs: 0,
-            doc: r.input,
-          }}
-          doc={r.input}
-        />
+        <RevisionResults revision={r} />
       </div>
     </div>
   );

@@ -213,7 +213,7 @@ export function DeskEditor({
                   number={baseRevision.number}
                 />
               ) : null}
-              <DeskResults live={live} doc={live.doc} schedule={schedule} />
+              <DeskResults live={live} doc={live.doc} schedule={schedule} beams={cantilever.quantity} />
               <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>
           </div>

@@ -25,10 +25,13 @@ export const DeskResults = memo(function DeskResults({
   live,
   doc,
   schedule,
+  beams,
 }: {
   live: LiveDesign;
   doc: DesignDocument | null;
   schedule?: ReactNode;
+  /** The cantilever's number of identical beams, for the steel per deck. */
+  beams?: number;
 }) {
   const result = live.result;
   const liveLimit = doc?.deflectionLimits?.live ?? 360;
@@ -38,7 +41,7 @@ export const DeskResults = memo(function DeskResults({
       <Verdict checks={result ? result.checks : null} stale={live.stale} />
       {result ? (
         <>
-          <SteelSummary result={result} />
+          <SteelSummary result={result} beams={beams} />
           <Panel title="Moment, shear and deflection along the member">
             <DeskCharts
               result={result}

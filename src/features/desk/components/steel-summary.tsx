@@ -1,17 +1,13 @@
-import { useState } from 'react';
 import type { DesignResult } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
 
 /**
- * Steel weight per beam and per deck (beams x weight) and the tip depth, on one line under the
- * verdict. The number of beams is not part of the design document: it is asked here and kept only
- * while the desk is open.
+ * Steel weight per beam and per deck (the cantilever's number of identical beams x the weight)
+ * and the tip depth, on one line under the verdict. Without a known number of beams (a stored
+ * revision shown on its own) only the weight per beam is given.
  */
-export function SteelSummary({ result }: { result: DesignResult }) {
-  const [beams, setBeams] = useState('');
-  const n = Number(beams);
+export function SteelSummary({ result, beams }: { result: DesignResult; beams?: number }) {
   const w = result.member.steelWeight;
-  const valid = Number.isInteger(n) && n > 0 && n <= 500;
   const s = result.member.section;
   const camber = result.member.recommendedCamber;
   return (
@@ -23,24 +19,15 @@ export function SteelSummary({ result }: { result: DesignResult }) {
         </strong>{' '}
         per beam
       </span>
-      <span aria-hidden="true">·</span>
-      <label className="flex items-center gap-1">
-        beams in the deck
-        <input
-          value={beams}
-          onChange={(e) => setBeams(e.target.value)}
-          inputMode="numeric"
-          className="w-14 rounded border border-concrete-300 px-1 py-0.5 text-sm"
-          aria-describedby="steel-per-deck"
-        />
-      </label>
-      <span id="steel-per-deck" className="num" data-testid="steel-per-deck">
-        {valid
-          ? `= ${formatQuantity({ value: w.value * n, unit: w.unit })} per deck`
-          : beams
-            ? '(a whole number, 1 to 500)'
-            : ''}
-      </span>
+      {beams !== undefined && beams > 0 ? (
+        <>
+          <span aria-hidden="true">·</span>
+          <span className="num" data-testid="steel-per-deck">
+            {beams} {beams === 1 ? 'beam' : 'beams'} in the deck ={' '}
+            <strong>{formatQuantity({ value: w.value * beams, unit: w.unit })}</strong> per deck
+          </span>
+        </>
+      ) : null}
       <span aria-hidden="true">·</span>
       <span>
         tip depth{' '}

@@ -3,12 +3,20 @@ import type { CantileverDto } from '../../../../shared/schemas/api';
 import { paths } from '../../../config/paths';
 import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { VerdictWord } from '../../../components/ui/verdict-word';
+import { QuantityCell } from './quantity-cell';
 
 /**
  * The project's cantilevers: the latest revision with its review state and pass/fail word, and
  * the latest approved revision (what the shop builds from), which may be an older one.
  */
-export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] }) {
+export function CantileverTable({
+  cantilevers,
+  mayEdit = false,
+}: {
+  cantilevers: CantileverDto[];
+  /** Design roles may set each cantilever's number of beams. */
+  mayEdit?: boolean;
+}) {
   if (cantilevers.length === 0)
     return <p className="text-sm text-concrete-600">No cantilevers in this project yet.</p>;
   return (
@@ -19,7 +27,7 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
           <th className="py-1.5 pr-3 font-medium">Latest revision</th>
           <th className="py-1.5 pr-3 font-medium">Review</th>
           <th className="py-1.5 pr-3 font-medium">Latest approved</th>
-          <th className="py-1.5 pr-3 font-medium">Qty</th>
+          <th className="py-1.5 pr-3 font-medium">Beams</th>
           <th className="py-1.5 pr-3 font-medium">Checks</th>
           <th className="py-1.5 pr-3 font-medium">Updated</th>
           <th className="py-1.5 font-medium">
@@ -69,7 +77,9 @@ export function CantileverTable({ cantilevers }: { cantilevers: CantileverDto[] 
                 <span className="text-concrete-600">none approved</span>
               )}
             </td>
-            <td className="num py-2 pr-3">{c.quantity}</td>
+            <td className="py-2 pr-3">
+              <QuantityCell cantilever={c} editable={mayEdit} />
+            </td>
             <td className="py-2 pr-3">
               <VerdictWord ok={c.ok} />
             </td>
