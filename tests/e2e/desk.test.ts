@@ -122,6 +122,31 @@ describe('design desk', () => {
     await expect.poll(tip, { timeout: 10_000 }).toBe(before);
   });
 
+  it('Version 2 inputs: the tip split shows beside the deflection; a weld adds its check; lateral support round-trips', async () => {
+    const split = page.getByRole('figure', { name: 'Tip deflection: member and connection' });
+    await expect.poll(() => split.textContent(), { timeout: 10_000 }).toMatch(/Member bending [\d.]+ in/);
+    expect(await split.textContent()).toMatch(/Connection rotation [\d.]+ in/);
+    await field('Fillet weld size').fill('5');
+    await page.getByText('Fillet weld size needs a unit, got "5"').first().waitFor();
+    await field('Fillet weld size').fill('5/16 in');
+    await expect
+      .poll(() => page.locator('tr[data-check="weld.strength"]').count(), { timeout: 10_000 })
+      .toBe(1);
+    await field('Fillet weld size').fill('');
+    await expect
+      .poll(() => page.locator('tr[data-check="weld.strength"]').count(), { timeout: 10_000 })
+      .toBe(0);
+    const before = await tip();
+    await page.getByLabel('Lateral support', { exact: true }).selectOption('detailed');
+    await page.getByLabel('Top flange', { exact: true }).selectOption('free');
+    await settled();
+    expect(await page.getByTestId('issue-summary').count()).toBe(0);
+    await page.getByLabel('Top flange', { exact: true }).selectOption('braced');
+    await page.getByLabel('Lateral support', { exact: true }).selectOption('simple');
+    await settled();
+    expect(await tip()).toBe(before);
+  });
+
   it('Section: picks a shape from the shapes browser for the member', async () => {
     await page.getByRole('button', { name: 'Browse shapes for the member' }).click();
     const dialog = page.getByRole('dialog', { name: 'Pick a shape' });

@@ -10,6 +10,7 @@ import {
 } from '../lib/chart-data';
 import { noteChartsCommitted } from '../lib/redraw-measure';
 import { DiagramChart } from './diagram-chart';
+import { TipDeflectionSplit } from './tip-deflection-split';
 
 /** Moment, shear and deflection along the member for a chosen case or combination. */
 export function DeskCharts({
@@ -52,9 +53,13 @@ export function DeskCharts({
         <p className="text-sm" data-testid="effect-words">
           {summary ? (
             <>
-              Under <strong>{choice.series.name}</strong> the tip moves down{' '}
+              Under <strong>{choice.series.name}</strong> the tip moves{' '}
+              {summary.tipDeflection.value < 0 ? 'up' : 'down'}{' '}
               <strong className="num" data-testid="tip-deflection">
-                {formatQuantity(summary.tipDeflection)}
+                {formatQuantity({
+                  value: Math.abs(summary.tipDeflection.value),
+                  unit: summary.tipDeflection.unit,
+                })}
               </strong>
               {limit ? (
                 <>
@@ -117,17 +122,20 @@ export function DeskCharts({
           summary={words.shear}
           color="#56504a"
         />
-        <DiagramChart
-          title="Deflection (down)"
-          rows={rows}
-          dataKey="d"
-          unit={s.units.deflection}
-          xUnit={s.units.x}
-          summary={words.deflection}
-          color="#5b8a72"
-          limitValue={limit?.value ?? null}
-          limitLabel={`span/${ratio}`}
-        />
+        <div className="flex flex-col gap-2">
+          <DiagramChart
+            title="Deflection (down)"
+            rows={rows}
+            dataKey="d"
+            unit={s.units.deflection}
+            xUnit={s.units.x}
+            summary={words.deflection}
+            color="#5b8a72"
+            limitValue={limit?.value ?? null}
+            limitLabel={`span/${ratio}`}
+          />
+          <TipDeflectionSplit result={result} />
+        </div>
       </div>
     </section>
   );

@@ -10,6 +10,15 @@ import { SelectField } from './plain-fields';
 type Kind = 'area' | 'line' | 'point';
 
 const TITLES: Record<Kind, string> = { area: 'Area loads', line: 'Line loads', point: 'Point loads' };
+/** What each case letter stands for, in the choices. */
+const CASE_WORDS: Record<(typeof LOAD_CASES)[number], string> = {
+  D: 'D, dead',
+  L: 'L, live',
+  Lr: 'Lr, roof live',
+  S: 'S, snow',
+  W: 'W, wind (− lifts)',
+};
+
 const NOUN: Record<Kind, string> = { area: 'area load', line: 'line load', point: 'point load' };
 
 /** One kind of load by case, each row with its own remove button. */
@@ -34,15 +43,21 @@ export function LoadList({ kind }: { kind: Kind }) {
         </Button>
       </div>
       {fields.length === 0 ? <p className="text-xs text-concrete-500">none</p> : null}
+      {fields.length > 0 && kind === 'area' ? (
+        <p className="text-[11px] text-concrete-500">
+          Case W is wind on the deck: a negative value is net uplift (the tip is lifted); other cases are
+          downward and not negative.
+        </p>
+      ) : null}
       {fields.map((row, i) => (
         <div
           key={row.id}
-          className="grid grid-cols-[4rem_1fr_auto] items-end gap-1.5 rounded bg-concrete-50 p-1.5"
+          className="grid grid-cols-[6.5rem_1fr_auto] items-end gap-1.5 rounded bg-concrete-50 p-1.5"
         >
-          <SelectField name={`loads.${kind}.${i}.case`} label="Case">
+          <SelectField name={`loads.${kind}.${i}.case`} label="Case" deps={[`loads.${kind}.${i}.value`]}>
             {LOAD_CASES.map((c) => (
               <option key={c} value={c}>
-                {c}
+                {CASE_WORDS[c]}
               </option>
             ))}
           </SelectField>

@@ -7,6 +7,7 @@ import { LOAD_PRESETS, presetValueText, type LoadPreset } from '../lib/load-pres
 import { plainNumber, rewriteQuantity } from '../lib/quantity-text';
 import { CheckField, Group, SelectField } from './plain-fields';
 import { LoadList } from './load-list';
+import { SeismicFields } from './seismic-fields';
 
 /** Loads: self-weight, loads by case (area, line, point), presets with their source, the method. */
 export function LoadsGroup({ disabled }: { disabled: boolean }) {
@@ -50,6 +51,10 @@ export function LoadsGroup({ disabled }: { disabled: boolean }) {
       <LoadList kind="area" />
       <LoadList kind="line" />
       <LoadList kind="point" />
+      <div className="mt-1 border-t border-concrete-200 pt-2">
+        <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-concrete-600">Seismic</h3>
+        <SeismicFields />
+      </div>
       <div className="mt-1 border-t border-concrete-200 pt-2">
         <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-concrete-600">
           Common deck loads

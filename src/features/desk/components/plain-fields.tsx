@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { useFormContext, useFormState, type FieldPath } from 'react-hook-form';
+import { useFormContext, useFormState, useWatch, type FieldPath } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
 import { fieldId, useEngineIssue } from './field-context';
@@ -26,31 +26,49 @@ export function NumberField({
   label,
   hint,
   step = 1,
+  optional = false,
 }: {
   name: string;
   label: string;
   hint?: string;
   step?: number;
+  /** Blank means "not given" (the engine's default applies) instead of "not a number". */
+  optional?: boolean;
 }) {
   const { register } = useFormContext<DesignDocument>();
   const error = useFieldError(name);
   const id = fieldId(name);
+  const options = optional
+    ? { setValueAs: (v: unknown) => (v === '' || v === undefined || v === null ? undefined : Number(v)) }
+    : { valueAsNumber: true as const };
   return (
     <Field id={id} label={label} error={error} hint={hint}>
       <input
         id={id}
         type="number"
         step={step}
-        inputMode="numeric"
+        inputMode={optional || step < 1 ? 'decimal' : 'numeric'}
+        placeholder={optional ? 'blank = default' : undefined}
         className={inputClass(Boolean(error), 'font-mono')}
         {...describedBy(id, error, Boolean(hint))}
-        {...register(name as Name, { valueAsNumber: true })}
+        {...register(name as Name, options)}
       />
     </Field>
   );
 }
 
-export function SelectField({ name, label, children }: { name: string; label: string; children: ReactNode }) {
+export function SelectField({
+  name,
+  label,
+  children,
+  deps,
+}: {
+  name: string;
+  label: string;
+  children: ReactNode;
+  /** Fields whose check depends on this choice (re-checked when it changes). */
+  deps?: string[];
+}) {
   const { register } = useFormContext<DesignDocument>();
   const error = useFieldError(name);
   const id = fieldId(name);
@@ -60,11 +78,74 @@ export function SelectField({ name, label, children }: { name: string; label: st
         id={id}
         className={inputClass(Boolean(error))}
         {...describedBy(id, error)}
-        {...register(name as Name)}
+        {...register(name as Name, deps ? { deps: deps as Name[] } : undefined)}
       >
         {children}
       </select>
     </Field>
+  );
+}
+
+/**
+ * A choice whose key is left out of the document until the person picks one: the select shows the
+ * engine's default (`fallback`) while the key is absent, so an untouched field never writes a key.
+ */
+export function ChoiceField({
+  name,
+  label,
+  fallback,
+  choices,
+  hint,
+}: {
+  name: string;
+  label: string;
+  fallback: string;
+  choices: readonly (readonly [value: string, words: string])[];
+  hint?: string;
+}) {
+  const { control, setValue } = useFormContext<DesignDocument>();
+  const value = useWatch({ control, name: name as Name }) as unknown;
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <Field id={id} label={label} error={error} hint={hint}>
+      <select
+        id={id}
+        value={typeof value === 'string' ? value : fallback}
+        onChange={(e) =>
+          setValue(name as Name, e.target.value as never, { shouldDirty: true, shouldValidate: true })
+        }
+        className={inputClass(Boolean(error))}
+        {...describedBy(id, error, Boolean(hint))}
+      >
+        {choices.map(([v, words]) => (
+          <option key={v} value={v}>
+            {words}
+          </option>
+        ))}
+      </select>
+    </Field>
+  );
+}
+
+/** A yes/no key with an engine default: absent reads as `fallback`; a key is written only when ticked or unticked. */
+export function SwitchField({ name, label, fallback }: { name: string; label: string; fallback: boolean }) {
+  const { control, setValue } = useFormContext<DesignDocument>();
+  const value = useWatch({ control, name: name as Name }) as unknown;
+  const id = fieldId(name);
+  return (
+    <label htmlFor={id} className="flex items-center gap-2 text-sm">
+      <input
+        id={id}
+        type="checkbox"
+        className="h-4 w-4 accent-oxide-500"
+        checked={typeof value === 'boolean' ? value : fallback}
+        onChange={(e) =>
+          setValue(name as Name, e.target.checked as never, { shouldDirty: true, shouldValidate: true })
+        }
+      />
+      {label}
+    </label>
   );
 }
 

@@ -16,26 +16,30 @@ export interface QuantityFieldProps {
 }
 
 /**
- * A quantity typed with its unit ("10 ft"), with a small chooser that rewrites the same physical
- * value in another unit. The error (schema or engine) sits right under it in plain words.
+ * The text box and unit chooser of a quantity, without the form wiring: `name` gives the DOM id and
+ * the field's unit; `onText` receives the text typed or rewritten (undefined when an optional field
+ * is left blank).
  */
-export function QuantityField({
+export function QuantityInput({
   name,
   label,
   hint,
   optional = false,
   placeholder,
   className,
-}: QuantityFieldProps) {
-  const { control } = useFormContext<DesignDocument>();
-  const {
-    field: { value, onChange, onBlur, ref },
-    fieldState,
-  } = useController({ control, name: name as FieldPath<DesignDocument> });
-  const engineIssue = useEngineIssue(name);
-  const error = fieldState.error?.message ?? engineIssue;
+  text,
+  error,
+  onText,
+  onBlur,
+  inputRef,
+}: QuantityFieldProps & {
+  text: string;
+  error?: string;
+  onText: (text: string | undefined) => void;
+  onBlur?: () => void;
+  inputRef?: (el: HTMLInputElement | null) => void;
+}) {
   const id = fieldId(name);
-  const text = typeof value === 'string' ? value : '';
   const unit = fieldUnit(name);
   const choices = unit ? UNIT_CHOICES[unit.dimension] : [];
   const current = unitOfText(text);
@@ -44,7 +48,7 @@ export function QuantityField({
   function choose(next: string) {
     if (!unit || !next) return;
     const rewritten = rewriteQuantity(text, unit.dimension, next);
-    if (rewritten !== null) onChange(rewritten);
+    if (rewritten !== null) onText(rewritten);
   }
 
   return (
@@ -53,11 +57,11 @@ export function QuantityField({
         <input
           id={id}
           name={name}
-          ref={ref}
+          ref={inputRef}
           value={text}
           placeholder={placeholder ?? (optional ? 'blank = default' : undefined)}
           onBlur={onBlur}
-          onChange={(e) => onChange(optional && e.target.value.trim() === '' ? undefined : e.target.value)}
+          onChange={(e) => onText(optional && e.target.value.trim() === '' ? undefined : e.target.value)}
           autoComplete="off"
           spellCheck={false}
           className={inputClass(Boolean(error), 'font-mono')}
@@ -81,5 +85,23 @@ export function QuantityField({
         ) : null}
       </div>
     </Field>
+  );
+}
+
+/**
+ * A quantity typed with its unit ("10 ft"), with a small chooser that rewrites the same physical
+ * value in another unit. The error (schema or engine) sits right under it in plain words.
+ */
+export function QuantityField(props: QuantityFieldProps) {
+  const { control } = useFormContext<DesignDocument>();
+  const {
+    field: { value, onChange, onBlur, ref },
+    fieldState,
+  } = useController({ control, name: props.name as FieldPath<DesignDocument> });
+  const engineIssue = useEngineIssue(props.name);
+  const error = fieldState.error?.message ?? engineIssue;
+  const text = typeof value === 'string' ? value : '';
+  return (
+    <QuantityInput {...props} text={text} error={error} onText={onChange} onBlur={onBlur} inputRef={ref} />
   );
 }

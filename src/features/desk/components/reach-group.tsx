@@ -1,3 +1,4 @@
+import { LateralSupportFields } from './lateral-support-fields';
 import { QuantityField } from './quantity-field';
 import { Group, NumberField } from './plain-fields';
 
@@ -9,12 +10,7 @@ export function ReachGroup({ disabled }: { disabled: boolean }) {
         <QuantityField name="member.length" label="Length (root to tip)" />
         <QuantityField name="member.spacing" label="Spacing" hint="tributary width" />
       </div>
-      <QuantityField
-        name="member.unbracedLength"
-        label="Unbraced length, bottom flange"
-        optional
-        hint="blank = the whole length (unbraced)"
-      />
+      <LateralSupportFields />
       <div className="grid grid-cols-2 gap-2">
         <NumberField
           name="deflectionLimits.live"

@@ -9,6 +9,7 @@ import { formatQuantity } from '../../../../shared/engine/units';
 export function SteelSummary({ result, beams }: { result: DesignResult; beams?: number }) {
   const w = result.member.steelWeight;
   const s = result.member.section;
+  const camber = result.member.recommendedCamber;
   return (
     <p className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm" data-testid="steel-summary">
       <span>
@@ -35,6 +36,18 @@ export function SteelSummary({ result, beams }: { result: DesignResult; beams?: 
         </strong>
         {s.tipDepth.value < s.rootDepth.value ? ` (root ${formatQuantity(s.rootDepth)})` : ''}
       </span>
+      {camber ? (
+        <>
+          <span aria-hidden="true">·</span>
+          <span title={camber.basis}>
+            recommended camber{' '}
+            <strong className="num" data-testid="summary-camber">
+              {formatQuantity({ value: camber.value, unit: camber.unit })}
+            </strong>{' '}
+            <span className="text-xs text-concrete-500">(for the dead load; no camber for live load)</span>
+          </span>
+        </>
+      ) : null}
     </p>
   );
 }

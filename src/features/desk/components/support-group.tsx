@@ -9,6 +9,7 @@ import { DEFAULT_CONNECTION } from '../lib/default-connection';
 import { switchUnits } from '../lib/switch-units';
 import { fieldId } from './field-context';
 import { QuantityField } from './quantity-field';
+import { RootFields } from './root-fields';
 import { CheckField, Group, NumberField, SelectField, useFieldError } from './plain-fields';
 
 type Arrangement = 'post-base' | 'face-plate' | 'none';
@@ -128,6 +129,7 @@ export function SupportGroup({ disabled, onBrowse }: { disabled: boolean; onBrow
             <QuantityField name="connection.pier.length" label="Pier length, along N" />
             <QuantityField name="connection.pier.width" label="Pier width, along B" />
           </div>
+          <RootFields />
         </>
       ) : null}
     </Group>

@@ -84,7 +84,7 @@ export function describeSeries(result: DesignResult, series: StationSeries, limi
   return {
     moment: `Moment for ${series.name}: largest ${q(m.value, u.M)} at ${q(m.at, u.x)} from the root, falling to ${q(series.M[series.M.length - 1] ?? 0, u.M)} at the tip.`,
     shear: `Shear for ${series.name}: largest ${q(v.value, u.V)} at ${q(v.at, u.x)} from the root, ${q(series.V[series.V.length - 1] ?? 0, u.V)} at the tip.`,
-    deflection: `Deflection for ${series.name}: zero at the root, ${q(tip, u.deflection)} downward at the tip${
+    deflection: `Deflection for ${series.name}: zero at the root, ${q(Math.abs(tip), u.deflection)} ${tip < 0 ? 'upward' : 'downward'} at the tip${
       limit ? `, against a limit of ${formatQuantity(limit)}` : ''
     }.`,
   };

@@ -20,6 +20,7 @@ const FIELD_UNITS: Record<string, FieldUnit> = {
   'member.length': long(),
   'member.spacing': long(),
   'member.unbracedLength': long(),
+  'member.lateralSupport.braces.#': long(),
   'member.section.tipDepth': small(),
   'member.section.plates.rootDepth': small(),
   'member.section.plates.tipDepth': small(),
@@ -44,11 +45,13 @@ const FIELD_UNITS: Record<string, FieldUnit> = {
   'connection.concrete.fc': { dimension: 'stress', US: 'psi', SI: 'MPa' },
   'connection.pier.length': small(),
   'connection.pier.width': small(),
+  'connection.post.height': small(),
+  'connection.weld.size': small(),
 };
 
 /** The unit description of a field name written the react-hook-form way ("loads.area.0.value"). */
 export function fieldUnit(name: string): FieldUnit | undefined {
-  return FIELD_UNITS[name.replace(/\.\d+\./g, '.#.')];
+  return FIELD_UNITS[name.replace(/\.\d+(?=\.|$)/g, '.#')];
 }
 
 export function customaryUnit(name: string, system: UnitSystem): string | undefined {
