@@ -1,7 +1,6 @@
+import { documentLeaves } from '../../shared/schemas/document-leaves';
 import type { DesignDocument } from '../../shared/schemas/design';
 import { pathWords, valueWords } from '../../shared/words/field-words';
-
-type Leaf = string | number | boolean | null;
 
 const GROUP_ORDER = ['Reach', 'Section', 'Loads', 'Support', 'Limits', 'Settings'];
 
@@ -10,22 +9,11 @@ function rank(group: string): number {
   return i < 0 ? GROUP_ORDER.length : i;
 }
 
-function leaves(value: unknown, prefix: string, out: [string, Leaf][]): void {
-  if (Array.isArray(value)) {
-    if (value.length === 0) out.push([prefix, '(none)']);
-    value.forEach((item, i) => leaves(item, `${prefix}[${i}]`, out));
-  } else if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value as Record<string, unknown>))
-      leaves(v, prefix ? `${prefix}.${k}` : k, out);
-  } else if (value !== undefined) out.push([prefix, value as Leaf]);
-}
-
 /** Every input of a stored design, grouped as the desk groups them, as read-only text. */
 export function groupedInputs(
   doc: DesignDocument,
 ): { group: string; rows: { label: string; value: string; path: string }[] }[] {
-  const all: [string, Leaf][] = [];
-  leaves(doc, '', all);
+  const all = documentLeaves(doc);
   const groups = new Map<string, { label: string; value: string; path: string }[]>();
   for (const [path, value] of all) {
     const words = pathWords(path);

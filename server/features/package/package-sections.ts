@@ -1,4 +1,5 @@
 /** The text sections of the package: cover, caution, inputs, loads, checks, schedule, notes. */
+import { documentLeaves } from '../../../shared/schemas/document-leaves';
 import { plateScheduleHeaders } from '../../../shared/engine/connection/plate-schedule';
 import { CAUTION } from '../../../shared/engine/types';
 import { formatQuantity, type Quantity } from '../../../shared/engine/units';
@@ -63,26 +64,13 @@ export function drawCaution(w: PdfWriter): void {
   );
 }
 
-type Leaf = string | number | boolean | null;
-
-function leaves(value: unknown, prefix: string, out: [string, Leaf][]): void {
-  if (Array.isArray(value)) {
-    if (value.length === 0) out.push([prefix, '(none)']);
-    value.forEach((item, i) => leaves(item, `${prefix}[${i}]`, out));
-  } else if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value as Record<string, unknown>))
-      leaves(v, prefix ? `${prefix}.${k}` : k, out);
-  } else if (value !== undefined) out.push([prefix, value as Leaf]);
-}
-
 export function drawInputs(w: PdfWriter, d: PackageData): void {
   w.heading('Inputs');
   w.para('Every input of the stored design document, as saved (each quantity with its unit).', {
     size: 9,
     color: MUTED,
   });
-  const rows: [string, Leaf][] = [];
-  leaves(d.input, '', rows);
+  const rows = documentLeaves(d.input);
   const order = ['Settings', 'Reach', 'Section', 'Loads', 'Limits', 'Support'];
   const words = rows.map(([path, v]) => ({ path, label: pathWords(path), value: valueWords(v) }));
   const group = (label: string) => label.split(':')[0];
