@@ -50,7 +50,12 @@ export function RevisionResults({ revision }: { revision: RevisionDto }) {
     <div className="flex min-w-0 flex-col gap-3">
       <Verdict checks={revision.result.checks} stale={false} />
       <Panel title="Check board">
-        <CheckBoard checks={revision.result.checks} />
+        <CheckBoard
+          checks={revision.result.checks}
+          directions={Object.fromEntries(
+            revision.result.member.combinations.map((c) => [c.name, c.direction]),
+          )}
+        />
       </Panel>
       <DrawnResults revision={revision} />
     </div>
