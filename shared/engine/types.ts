@@ -10,7 +10,12 @@
 import type { Quantity, UnitSystem } from './units';
 import type { LoadCase } from '../schemas/member';
 
-export const ENGINE_VERSION = '1.0.0';
+/**
+ * Stored with every revision. 2.0.0: the Version 2 keys, and results that change on purpose for older
+ * documents (the flexible root by default, the 5 Hz vibration row, the rods' spread strip, ASD anchors
+ * on strength combinations; METHOD.md).
+ */
+export const ENGINE_VERSION = '2.0.0';
 
 export const CAUTION =
   'Reachline is a design aid. Final design, detailing and sealed calculations are by a licensed engineer under the locally adopted codes.';
