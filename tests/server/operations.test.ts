@@ -1,5 +1,5 @@
 /**
- * Operations (issue 12): /api/health reports the database and the storage (503 naming what is
+ * Operations: /api/health reports the database and the storage (503 naming what is
  * unreachable); JSON request logs carry a request id, echoed in X-Request-Id; shutdown finishes a
  * request in flight and the mail worker's send in hand; `reachline db backup` writes a consistent
  * copy (SQLite backup API; pg_dump on PostgreSQL; a clear message without pg_dump).

@@ -225,7 +225,7 @@ describe('the same face plate in ASD (ASCE 7-16 2.4.1, Omega factors, ACI phi/1.
   });
 
   it('rod steel in an ASD design is checked on the strength combinations: AISC 0.75 x 0.75 x 58 x 0.7854 = 25.62 kip governs over ACI 0.75 x 0.606 x 58 = 26.36 kip', () => {
-    // ACI 318 ch. 17 is strength design; since issue 10 the rods of an ASD design are checked with phi on
+    // ACI 318 ch. 17 is strength design; since engine 2.0.0 the rods of an ASD design are checked with phi on
     // the ASCE 7 strength combinations (the older phi Rn / 1.6 was not conservative for every combination).
     const aisc = 0.75 * 0.75 * 58 * Ab;
     const aci = 0.75 * Ase * 58;

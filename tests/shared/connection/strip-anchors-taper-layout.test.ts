@@ -1,5 +1,5 @@
 /**
- * The smaller items of issue 10: the tension-side strip from the rods' spread, channels loaded on a
+ * Smaller limit items of engine 2.0.0: the tension-side strip from the rods' spread, channels loaded on a
  * free top flange, ASD anchors on the strength combinations, tapers steeper than 1:4, checks that rest
  * on an impossible layout, and the default vibration threshold. Hand values beside each assertion.
  */

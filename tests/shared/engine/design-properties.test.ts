@@ -84,7 +84,7 @@ const document = fc
     ...(d.frequencyMin === null ? {} : { frequencyMin: `${d.frequencyMin.toFixed(2)} Hz` }),
   }));
 
-/** The shortest member that keeps a taper within 1:4 (steeper tapers are refused since issue 10). */
+/** The shortest member that keeps a taper within 1:4 (steeper tapers are refused since engine 2.0.0). */
 function taperMinimumFt(s: {
   shape?: string;
   tipDepth?: string;
