@@ -10,7 +10,6 @@
  * Options: --duration <s> per measurement (default 5), --connections <n> (default 10),
  * --only sqlite|pg1|pg2.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -18,6 +17,7 @@ import autocannon from 'autocannon';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../server/db/seed';
 import { startFakeSmtp } from '../server/mail/fake-smtp';
 import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
+import { startServerProcess, type ServerProcess } from './lib/server-process';
 
 const args = process.argv.slice(2);
 const option = (name: string, fallback: string) => {
@@ -40,30 +40,8 @@ interface Figure {
   ratio?: number;
 }
 
-interface Instance {
-  url: string;
-  child: ChildProcess;
-}
-
-function startInstance(env: Record<string, string>, name: string): Promise<Instance> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, ...env },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let output = '';
-  return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`${name} did not start:\n${output}`)), 90_000);
-    child.stderr!.on('data', (c: Buffer) => (output += c.toString()));
-    child.stdout!.on('data', (c: Buffer) => {
-      output += c.toString();
-      const m = /running at (http:\/\/\S+)/.exec(output);
-      if (m) {
-        clearTimeout(timer);
-        resolve({ url: m[1], child });
-      }
-    });
-    child.once('exit', (code) => reject(new Error(`${name} exited (${code}):\n${output}`)));
-  });
+function startInstance(env: Record<string, string>, name: string): Promise<ServerProcess> {
+  return startServerProcess(env, name, 90_000);
 }
 
 async function signIn(url: string): Promise<string> {
@@ -88,7 +66,7 @@ type Req = { method: 'GET' | 'POST'; path: string; body?: string };
 /** One autocannon run per instance at once (the connections split between them); figures merged. */
 async function measure(
   name: string,
-  instances: Instance[],
+  instances: ServerProcess[],
   cookie: string,
   requests: Req[],
   connections: number,
@@ -133,7 +111,7 @@ async function runSetup(label: string, databaseUrl: string, count: number): Prom
     LOG_LEVEL: 'warn',
     LOGIN_RATE_LIMIT: '1000',
   };
-  const instances: Instance[] = [];
+  const instances: ServerProcess[] = [];
   try {
     // The first instance migrates and seeds; the second starts on the ready database.
     instances.push(await startInstance({ ...base, DATA_DIR: join(dir, 'a') }, `${label} A`));

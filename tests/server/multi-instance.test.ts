@@ -6,23 +6,18 @@
  * no revision it answered 201 for, and B keeps serving. Runs in the PostgreSQL run only
  * (TEST_PG=1); each process is the real server entry (server/index.ts) started with tsx.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startServerProcess, type ServerProcess } from '../../scripts/lib/server-process';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { baseDesign, createTestEnv, PASSWORD, TEAM, type TestEnv } from '../helpers/api';
 import { ON_POSTGRES } from '../helpers/test-db';
 
-interface Instance {
-  url: string;
-  child: ChildProcess;
-  output: string[];
-}
+type Instance = ServerProcess;
 
 function startInstance(env: TestEnv, smtpUrl: string, name: string): Promise<Instance> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: {
-      ...process.env,
+  return startServerProcess(
+    {
       NODE_ENV: 'test',
       PORT: '0',
       HOST: '127.0.0.1',
@@ -36,25 +31,9 @@ function startInstance(env: TestEnv, smtpUrl: string, name: string): Promise<Ins
       // Three failed sign-ins per account, counted in the database across both instances.
       LOGIN_RATE_LIMIT: '3',
     },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  const output: string[] = [];
-  return new Promise((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`${name} did not start:\n${output.join('')}`)), 45_000);
-    child.stderr!.on('data', (c: Buffer) => output.push(c.toString()));
-    child.stdout!.on('data', (c: Buffer) => {
-      output.push(c.toString());
-      const m = /running at (http:\/\/\S+)/.exec(output.join(''));
-      if (m) {
-        clearTimeout(timer);
-        resolve({ url: m[1], child, output });
-      }
-    });
-    child.once('exit', (code) => {
-      clearTimeout(timer);
-      reject(new Error(`${name} exited (${code}):\n${output.join('')}`));
-    });
-  });
+    name,
+    45_000,
+  );
 }
 
 /** fetch with one cookie jar (the session cookie) that can be sent to either instance. */
