@@ -199,15 +199,23 @@ export interface ApprovedRevision {
   approvedAt: string;
 }
 
+export interface LatestApproval {
+  revisionId: number;
+  number: number;
+  approvedBy: string;
+  approvedAt: string;
+}
+
 /**
- * The latest approved revision of each cantilever. An approved revision stays approved (no review
- * may follow an approval), so an 'approved' review row is enough.
+ * The latest approval of each cantilever, without the revisions' documents and results (tens of
+ * kilobytes each, and the project list needs only the number). An approved revision stays
+ * approved (no review may follow an approval), so an 'approved' review row is enough.
  */
-export async function latestApprovedRevisions(
+export async function latestApprovals(
   db: Db,
   cantileverIds: readonly number[],
-): Promise<Map<number, ApprovedRevision>> {
-  const out = new Map<number, ApprovedRevision>();
+): Promise<Map<number, LatestApproval>> {
+  const out = new Map<number, LatestApproval>();
   if (cantileverIds.length === 0) return out;
   const rows = (await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
@@ -215,16 +223,45 @@ export async function latestApprovedRevisions(
     .where('v.state', 'approved')
     .whereIn('r.cantilever_id', [...cantileverIds])
     .orderBy('r.number')
-    .select('r.*', 'u.display_name as approver_name', 'v.created_at as approved_at')) as (RevisionRow & {
+    .select(
+      'r.id',
+      'r.number',
+      'r.cantilever_id',
+      'u.display_name as approver_name',
+      'v.created_at as approved_at',
+    )) as {
+    id: number;
+    number: number;
+    cantilever_id: number;
     approver_name: string;
     approved_at: string;
-  })[];
-  for (const { approver_name, approved_at, ...revision } of rows) {
-    out.set(revision.cantilever_id, {
-      revision,
-      approvedBy: approver_name,
-      approvedAt: toIso(approved_at),
+  }[];
+  for (const row of rows) {
+    out.set(row.cantilever_id, {
+      revisionId: row.id,
+      number: row.number,
+      approvedBy: row.approver_name,
+      approvedAt: toIso(row.approved_at),
     });
+  }
+  return out;
+}
+
+/** The latest approved revision of each cantilever, whole (the plate schedule reads its results). */
+export async function latestApprovedRevisions(
+  db: Db,
+  cantileverIds: readonly number[],
+): Promise<Map<number, ApprovedRevision>> {
+  const approvals = await latestApprovals(db, cantileverIds);
+  const out = new Map<number, ApprovedRevision>();
+  if (approvals.size === 0) return out;
+  const rows = (await db('revisions').whereIn(
+    'id',
+    [...approvals.values()].map((a) => a.revisionId),
+  )) as RevisionRow[];
+  for (const revision of rows) {
+    const a = approvals.get(revision.cantilever_id)!;
+    out.set(revision.cantilever_id, { revision, approvedBy: a.approvedBy, approvedAt: a.approvedAt });
   }
   return out;
 }
