@@ -114,6 +114,22 @@ export function isUniqueViolation(err: unknown): boolean {
   );
 }
 
+/**
+ * Inserts one row and answers its id. PostgreSQL and SQLite (through Knex's RETURNING) both answer
+ * [{ id }]; an older SQLite path answered the bare number, which is still accepted.
+ */
+export async function insertReturningId(
+  db: Knex | Knex.Transaction,
+  table: string,
+  row: Record<string, unknown>,
+): Promise<number> {
+  const rows = (await db(table).insert(row).returning('id')) as unknown[];
+  const first = rows[0];
+  const id = typeof first === 'object' && first !== null ? (first as { id?: unknown }).id : first;
+  if (typeof id !== 'number' || !Number.isInteger(id)) throw new Error(`${table}: the insert answered no id`);
+  return id;
+}
+
 /** Timestamps are stored as ISO strings in UTC; PostgreSQL hands back Date objects. */
 export function nowIso(): string {
   return new Date().toISOString();

@@ -1,7 +1,7 @@
 /** Cantilevers (Knex only). */
 import type { Knex } from 'knex';
 import type { CantileverDto } from '../../../shared/schemas/api';
-import { nowIso, toBool, toIso } from '../../db/knex';
+import { nowIso, toBool, toIso, insertReturningId } from '../../db/knex';
 import type { CantileverRow } from '../projects/project-access';
 import { latestApprovals, reviewStates } from '../revisions/revisions.repository';
 
@@ -48,18 +48,15 @@ export async function insertCantilever(
   c: { projectId: number; name: string; description: string; quantity?: number },
 ): Promise<number> {
   const now = nowIso();
-  const [row] = await db('cantilevers')
-    .insert({
-      project_id: c.projectId,
-      name: c.name,
-      description: c.description,
-      quantity: c.quantity ?? 1,
-      current_revision_id: null,
-      created_at: now,
-      updated_at: now,
-    })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'cantilevers', {
+    project_id: c.projectId,
+    name: c.name,
+    description: c.description,
+    quantity: c.quantity ?? 1,
+    current_revision_id: null,
+    created_at: now,
+    updated_at: now,
+  });
 }
 
 export async function updateCantileverQuantity(db: Db, id: number, quantity: number): Promise<void> {

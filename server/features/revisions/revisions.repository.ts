@@ -9,7 +9,7 @@ import type {
 } from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
-import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
+import { isPostgres, nowIso, toBool, toIso, insertReturningId } from '../../db/knex';
 import type { RevisionRow } from '../projects/project-access';
 
 type Db = Knex | Knex.Transaction;
@@ -158,22 +158,19 @@ export async function insertRevision(
     sections?: readonly unknown[];
   },
 ): Promise<number> {
-  const [row] = await db('revisions')
-    .insert({
-      cantilever_id: r.cantileverId,
-      number: r.number,
-      author_id: r.authorId,
-      message: r.message,
-      input_json: JSON.stringify(r.input),
-      result_json: JSON.stringify(r.result),
-      engine_version: r.result.engineVersion,
-      base_revision_id: r.baseRevisionId,
-      ok: r.result.ok,
-      sections_json: r.sections ? JSON.stringify(r.sections) : null,
-      created_at: nowIso(),
-    })
-    .returning('id');
-  const id = typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  const id = await insertReturningId(db, 'revisions', {
+    cantilever_id: r.cantileverId,
+    number: r.number,
+    author_id: r.authorId,
+    message: r.message,
+    input_json: JSON.stringify(r.input),
+    result_json: JSON.stringify(r.result),
+    engine_version: r.result.engineVersion,
+    base_revision_id: r.baseRevisionId,
+    ok: r.result.ok,
+    sections_json: r.sections ? JSON.stringify(r.sections) : null,
+    created_at: nowIso(),
+  });
   await db('cantilevers')
     .where({ id: r.cantileverId })
     .update({ current_revision_id: id, updated_at: nowIso() });
