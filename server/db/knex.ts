@@ -84,7 +84,7 @@ export function createDb(databaseUrl: string, options: DbOptions = {}): Knex {
  * a migration or a statement written for these two can never run half-applied elsewhere.
  */
 export function dialectOf(db: Knex, what = 'Reachline'): Dialect {
-  const client = String(db.client.config.client);
+  const client = String((db.client as { config: Knex.Config }).config.client);
   if (client === 'better-sqlite3' || client === 'sqlite3') return 'sqlite';
   if (client === 'pg' || client === 'postgres' || client === 'postgresql') return 'postgres';
   throw new Error(
