@@ -4,11 +4,13 @@ import {
   getCoreRowModel,
   getSortedRowModel,
   useReactTable,
+  type Row,
   type SortingState,
 } from '@tanstack/react-table';
-import { useState } from 'react';
+import { memo, useEffect, useMemo, useRef, useState } from 'react';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { shapeDepth } from '../../lib/shape-filter';
+import { useRowKeys } from './use-row-keys';
 
 const col = createColumnHelper<ShapeRecord>();
 const num = (v: number | undefined) => (v === undefined ? '—' : String(v));
@@ -30,17 +32,28 @@ const COLUMNS = [
   col.accessor('ry', { header: 'ry (in)', cell: (c) => num(c.getValue()) }),
 ];
 
-/** The shapes, sortable by any column; a row is chosen with a click or Enter. */
+/**
+ * The shapes as a grid, sortable by any column, that is one Tab stop: the active row carries the
+ * only tabindex 0 (roving tabindex). ArrowUp/Down, Page Up/Down, Home/End and typing the start of
+ * a label ("W12") move it and choose that shape; Enter activates it (the picker's main action).
+ */
 export function ShapesTable({
   shapes,
   selected,
   onSelect,
+  onActivate,
+  describedBy,
 }: {
   shapes: ShapeRecord[];
   selected: string | null;
   onSelect: (label: string) => void;
+  /** Enter on a row: the main action of the screen, if it has one. */
+  onActivate?: (label: string) => void;
+  /** The id of the words that say how the keys move through the list. */
+  describedBy?: string;
 }) {
   const [sorting, setSorting] = useState<SortingState>([]);
+  const body = useRef<HTMLTableSectionElement>(null);
   // TanStack Table returns fresh functions each render; the compiler skips this component, which is fine here.
   // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({
@@ -51,9 +64,28 @@ export function ShapesTable({
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
   });
+  const rows = table.getRowModel().rows;
+  const labels = useMemo(() => rows.map((r) => r.original.label), [rows]);
+  const selectedIndex = selected === null ? -1 : labels.indexOf(selected);
+  const active = Math.max(0, selectedIndex);
+  const keys = useRowKeys({ labels, active, onMove: onSelect, onActivate, body });
+
+  // Opened on a chosen shape (the member's), the list starts scrolled to it.
+  useEffect(() => {
+    const box = body.current?.closest<HTMLElement>('[data-scroll]');
+    const row = body.current?.querySelector<HTMLElement>('tr[tabindex="0"]');
+    if (!box || !row) return;
+    const offset = row.getBoundingClientRect().top - box.getBoundingClientRect().top;
+    box.scrollTop += offset - box.clientHeight / 2;
+  }, []);
   return (
-    <table className="w-full border-collapse text-sm" aria-label="Shapes">
-      <thead className="sticky top-0 bg-concrete-100">
+    <table
+      role="grid"
+      className="w-full border-collapse text-sm"
+      aria-label="Shapes"
+      aria-describedby={describedBy}
+    >
+      <thead className="sticky top-0 z-10 bg-concrete-100">
         {table.getHeaderGroups().map((g) => (
           <tr key={g.id}>
             {g.headers.map((h) => {
@@ -79,40 +111,53 @@ export function ShapesTable({
           </tr>
         ))}
       </thead>
-      <tbody>
-        {table.getRowModel().rows.map((row) => {
-          const label = row.original.label;
-          const isSelected = label === selected;
-          return (
-            <tr
-              key={row.id}
-              tabIndex={0}
-              aria-selected={isSelected}
-              data-shape={label}
-              onClick={() => onSelect(label)}
-              onKeyDown={(e) => {
-                if (e.key === 'Enter' || e.key === ' ') {
-                  e.preventDefault();
-                  onSelect(label);
-                }
-              }}
-              className={`cursor-pointer border-b border-concrete-200 focus-visible:outline-2 focus-visible:outline-oxide-500 ${isSelected ? 'bg-oxide-50' : 'hover:bg-concrete-100'}`}
-            >
-              {row.getVisibleCells().map((cell) => (
-                <td
-                  key={cell.id}
-                  className={`num px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
-                >
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  {cell.column.id === 'label' && row.original.custom ? (
-                    <span className="ml-1 text-[10px] text-oxide-700">imported</span>
-                  ) : null}
-                </td>
-              ))}
-            </tr>
-          );
-        })}
+      <tbody ref={body} onKeyDown={keys.onKeyDown}>
+        {rows.map((row, i) => (
+          <ShapeRow
+            key={row.id}
+            row={row}
+            selected={i === selectedIndex}
+            tabbable={i === active}
+            onSelect={onSelect}
+          />
+        ))}
       </tbody>
     </table>
   );
 }
+
+/** One row; memoised so that moving through 600 rows re-renders two of them, not all. */
+const ShapeRow = memo(function ShapeRow({
+  row,
+  selected,
+  tabbable,
+  onSelect,
+}: {
+  row: Row<ShapeRecord>;
+  selected: boolean;
+  tabbable: boolean;
+  onSelect: (label: string) => void;
+}) {
+  const label = row.original.label;
+  return (
+    <tr
+      tabIndex={tabbable ? 0 : -1}
+      aria-selected={selected}
+      data-shape={label}
+      onClick={() => onSelect(label)}
+      className={`scroll-mt-8 cursor-pointer border-b border-concrete-200 focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-oxide-500 ${selected ? 'bg-oxide-50' : 'hover:bg-concrete-100'}`}
+    >
+      {row.getVisibleCells().map((cell) => (
+        <td
+          key={cell.id}
+          className={`num px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
+        >
+          {flexRender(cell.column.columnDef.cell, cell.getContext())}
+          {cell.column.id === 'label' && row.original.custom ? (
+            <span className="ml-1 text-[10px] text-oxide-700">imported</span>
+          ) : null}
+        </td>
+      ))}
+    </tr>
+  );
+});
