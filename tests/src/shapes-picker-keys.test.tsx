@@ -6,6 +6,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { SHAPES, SHAPES_SOURCE } from '../../shared/engine/shapes/table';
 import { ShapesBrowser, type ShapeAction } from '../../src/components/shapes/shapes-browser';
 import { typeAheadMatch } from '../../src/components/shapes/use-row-keys';
+import { windowPieces } from '../../src/components/shapes/use-row-window';
 import { shapeKeys } from '../../src/lib/api/shapes/shape-keys';
 
 /**
@@ -134,5 +135,33 @@ describe('shapes picker: one Tab stop with list keys', () => {
     expect(typeAheadMatch(list, 'W', 3)).toBe(0);
     expect(typeAheadMatch(list, 'w8', 0)).toBe(3);
     expect(typeAheadMatch(list, 'X', 0)).toBe(-1);
+  });
+
+  it('draws only the rows in view and the active one; gaps keep the full height; no layout draws all', () => {
+    // 600 rows of 30 px, a 300 px box scrolled to row 100, overscan 5: rows 95-115 drawn
+    expect(windowPieces(600, 100, 3000, 300, 30, 5)).toEqual([
+      { kind: 'gap', rows: 95 },
+      { kind: 'rows', from: 95, to: 115 },
+      { kind: 'gap', rows: 485 },
+    ]);
+    // the active row far below is drawn in its place, between two gaps
+    expect(windowPieces(600, 400, 0, 300, 30, 5)).toEqual([
+      { kind: 'rows', from: 0, to: 15 },
+      { kind: 'gap', rows: 385 },
+      { kind: 'rows', from: 400, to: 401 },
+      { kind: 'gap', rows: 199 },
+    ]);
+    const pieces = windowPieces(653, 652, 6000, 420, 29);
+    const total = pieces.reduce((n, p) => n + (p.kind === 'gap' ? p.rows : p.to - p.from), 0);
+    expect(total).toBe(653);
+    expect(windowPieces(50, 3, 0, 0, 29)).toEqual([{ kind: 'rows', from: 0, to: 50 }]);
+    // not measured yet: the first 40 rows and the active one
+    expect(windowPieces(600, 300, 0, -1, 29)).toEqual([
+      { kind: 'rows', from: 0, to: 40 },
+      { kind: 'gap', rows: 260 },
+      { kind: 'rows', from: 300, to: 301 },
+      { kind: 'gap', rows: 299 },
+    ]);
+    expect(windowPieces(0, 0, 0, 300, 29)).toEqual([]);
   });
 });

@@ -7,10 +7,11 @@ import {
   type Row,
   type SortingState,
 } from '@tanstack/react-table';
-import { memo, useEffect, useMemo, useRef, useState } from 'react';
+import { memo, useMemo, useRef, useState } from 'react';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { shapeDepth } from '../../lib/shape-filter';
 import { useRowKeys } from './use-row-keys';
+import { useRowWindow, useScrollToRowOnce, windowPieces } from './use-row-window';
 
 const col = createColumnHelper<ShapeRecord>();
 const num = (v: number | undefined) => (v === undefined ? '—' : String(v));
@@ -36,6 +37,7 @@ const COLUMNS = [
  * The shapes as a grid, sortable by any column, that is one Tab stop: the active row carries the
  * only tabindex 0 (roving tabindex). ArrowUp/Down, Page Up/Down, Home/End and typing the start of
  * a label ("W12") move it and choose that shape; Enter activates it (the picker's main action).
+ * Only the rows in view (and the active one) are drawn; the others are gaps of their height.
  */
 export function ShapesTable({
   shapes,
@@ -70,24 +72,21 @@ export function ShapesTable({
   const active = Math.max(0, selectedIndex);
   const keys = useRowKeys({ labels, active, onMove: onSelect, onActivate, body });
 
-  // Opened on a chosen shape (the member's), the list starts scrolled to it.
-  useEffect(() => {
-    const box = body.current?.closest<HTMLElement>('[data-scroll]');
-    const row = body.current?.querySelector<HTMLElement>('tr[tabindex="0"]');
-    if (!box || !row) return;
-    const offset = row.getBoundingClientRect().top - box.getBoundingClientRect().top;
-    box.scrollTop += offset - box.clientHeight / 2;
-  }, []);
+  const view = useRowWindow(body);
+  useScrollToRowOnce(body, selectedIndex, view.rowPx);
+  const pieces = windowPieces(rows.length, active, view.scrollPx, view.viewPx, view.rowPx);
+
   return (
     <table
       role="grid"
       className="w-full border-collapse text-sm"
       aria-label="Shapes"
       aria-describedby={describedBy}
+      aria-rowcount={rows.length + 1}
     >
       <thead className="sticky top-0 z-10 bg-concrete-100">
         {table.getHeaderGroups().map((g) => (
-          <tr key={g.id}>
+          <tr key={g.id} aria-rowindex={1}>
             {g.headers.map((h) => {
               const sorted = h.column.getIsSorted();
               return (
@@ -112,28 +111,42 @@ export function ShapesTable({
         ))}
       </thead>
       <tbody ref={body} onKeyDown={keys.onKeyDown}>
-        {rows.map((row, i) => (
-          <ShapeRow
-            key={row.id}
-            row={row}
-            selected={i === selectedIndex}
-            tabbable={i === active}
-            onSelect={onSelect}
-          />
-        ))}
+        {pieces.map((piece, n) =>
+          piece.kind === 'gap' ? (
+            <tr key={`gap-${n}`} aria-hidden="true">
+              <td colSpan={COLUMNS.length} style={{ height: piece.rows * view.rowPx, padding: 0 }} />
+            </tr>
+          ) : (
+            rows.slice(piece.from, piece.to).map((row, k) => {
+              const i = piece.from + k;
+              return (
+                <ShapeRow
+                  key={row.id}
+                  row={row}
+                  index={i}
+                  selected={i === selectedIndex}
+                  tabbable={i === active}
+                  onSelect={onSelect}
+                />
+              );
+            })
+          ),
+        )}
       </tbody>
     </table>
   );
 }
 
-/** One row; memoised so that moving through 600 rows re-renders two of them, not all. */
+/** One row; memoised so that a move re-renders the two rows whose state changes. */
 const ShapeRow = memo(function ShapeRow({
   row,
+  index,
   selected,
   tabbable,
   onSelect,
 }: {
   row: Row<ShapeRecord>;
+  index: number;
   selected: boolean;
   tabbable: boolean;
   onSelect: (label: string) => void;
@@ -142,6 +155,7 @@ const ShapeRow = memo(function ShapeRow({
   return (
     <tr
       tabIndex={tabbable ? 0 : -1}
+      aria-rowindex={index + 2}
       aria-selected={selected}
       data-shape={label}
       onClick={() => onSelect(label)}
@@ -150,7 +164,7 @@ const ShapeRow = memo(function ShapeRow({
       {row.getVisibleCells().map((cell) => (
         <td
           key={cell.id}
-          className={`num px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
+          className={`num whitespace-nowrap px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
         >
           {flexRender(cell.column.columnDef.cell, cell.getContext())}
           {cell.column.id === 'label' && row.original.custom ? (
