@@ -7,7 +7,7 @@ import {
   type Row,
   type SortingState,
 } from '@tanstack/react-table';
-import { memo, useMemo, useRef, useState } from 'react';
+import { memo, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { shapeDepth } from '../../lib/shape-filter';
 import { useRowKeys } from './use-row-keys';
@@ -75,6 +75,36 @@ export function ShapesTable({
   const view = useRowWindow(body);
   useScrollToRowOnce(body, selectedIndex, view.rowPx);
   const pieces = windowPieces(rows.length, active, view.scrollPx, view.viewPx, view.rowPx);
+  // One flat keyed list: a drawn row keeps its place among the others as the window moves, so
+  // React never re-creates or moves it (a focused row would lose the focus). A gap is named by
+  // the row it starts at.
+  const drawn: ReactNode[] = [];
+  let at = 0;
+  for (const piece of pieces) {
+    if (piece.kind === 'gap') {
+      drawn.push(
+        <tr key={`gap-${at}`} aria-hidden="true">
+          <td colSpan={COLUMNS.length} style={{ height: piece.rows * view.rowPx, padding: 0 }} />
+        </tr>,
+      );
+      at += piece.rows;
+      continue;
+    }
+    for (let i = piece.from; i < piece.to; i++) {
+      const row = rows[i]!;
+      drawn.push(
+        <ShapeRow
+          key={row.id}
+          row={row}
+          index={i}
+          selected={i === selectedIndex}
+          tabbable={i === active}
+          onSelect={onSelect}
+        />,
+      );
+    }
+    at = piece.to;
+  }
 
   return (
     <table
@@ -111,27 +141,7 @@ export function ShapesTable({
         ))}
       </thead>
       <tbody ref={body} onKeyDown={keys.onKeyDown}>
-        {pieces.map((piece, n) =>
-          piece.kind === 'gap' ? (
-            <tr key={`gap-${n}`} aria-hidden="true">
-              <td colSpan={COLUMNS.length} style={{ height: piece.rows * view.rowPx, padding: 0 }} />
-            </tr>
-          ) : (
-            rows.slice(piece.from, piece.to).map((row, k) => {
-              const i = piece.from + k;
-              return (
-                <ShapeRow
-                  key={row.id}
-                  row={row}
-                  index={i}
-                  selected={i === selectedIndex}
-                  tabbable={i === active}
-                  onSelect={onSelect}
-                />
-              );
-            })
-          ),
-        )}
+        {drawn}
       </tbody>
     </table>
   );
