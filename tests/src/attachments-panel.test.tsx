@@ -16,6 +16,9 @@ const drawing: AttachmentDto = {
   uploaderId: 3,
   uploaderName: 'Fern Fabricator',
   createdAt: '2026-11-02T10:00:00.000Z',
+  description: '',
+  revisionId: null,
+  revisionNumber: null,
 };
 const photo: AttachmentDto = {
   ...drawing,
