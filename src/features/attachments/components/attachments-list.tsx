@@ -100,7 +100,7 @@ export function AttachmentsList({
       ) : (
         <ul className="divide-y divide-concrete-100">
           {attachments.map((a) => (
-            <li key={a.id} className="flex flex-wrap items-center gap-3 py-2 text-sm">
+            <li key={a.id} className="flex flex-wrap items-start gap-x-3 gap-y-1 py-2 text-sm">
               {isImage(a) && (
                 <img
                   src={attachmentUrl(a.id, true)}
@@ -109,7 +109,7 @@ export function AttachmentsList({
                   className="h-12 w-16 rounded border border-concrete-200 object-cover"
                 />
               )}
-              <div className="min-w-0 flex-1">
+              <div className="min-w-0 flex-1 basis-40">
                 <p className="truncate font-medium text-concrete-900">
                   {a.originalName}
                   {a.revisionNumber !== null ? (
@@ -139,55 +139,58 @@ export function AttachmentsList({
                   />
                 ) : null}
               </div>
-              {(a.mimeType === 'application/pdf' || isImage(a)) && (
+              {/* The actions on their own line, so a narrow panel keeps the name and words readable. */}
+              <div className="flex basis-full flex-wrap items-center gap-x-3 gap-y-1">
+                {(a.mimeType === 'application/pdf' || isImage(a)) && (
+                  <a
+                    href={attachmentUrl(a.id, true)}
+                    target="_blank"
+                    rel="noopener noreferrer"
+                    aria-label={`Open ${a.originalName} in a new tab`}
+                    className="inline-flex items-center gap-1 text-oxide-700 underline"
+                  >
+                    <Eye aria-hidden="true" className="h-4 w-4" />
+                    Open
+                  </a>
+                )}
                 <a
-                  href={attachmentUrl(a.id, true)}
-                  target="_blank"
-                  rel="noopener noreferrer"
-                  aria-label={`Open ${a.originalName} in a new tab`}
+                  href={attachmentUrl(a.id)}
+                  download={a.originalName}
+                  aria-label={`Download ${a.originalName}`}
                   className="inline-flex items-center gap-1 text-oxide-700 underline"
                 >
-                  <Eye aria-hidden="true" className="h-4 w-4" />
-                  Open
+                  <Download aria-hidden="true" className="h-4 w-4" />
+                  Download
                 </a>
-              )}
-              <a
-                href={attachmentUrl(a.id)}
-                download={a.originalName}
-                aria-label={`Download ${a.originalName}`}
-                className="inline-flex items-center gap-1 text-oxide-700 underline"
-              >
-                <Download aria-hidden="true" className="h-4 w-4" />
-                Download
-              </a>
-              {me?.id === a.uploaderId && editing !== a.id ? (
-                <Button
-                  size="sm"
-                  variant="ghost"
-                  aria-label={`Edit the description of ${a.originalName}`}
-                  onClick={() => {
-                    setEditing(a.id);
-                    setStatus('');
-                  }}
-                >
-                  <Pencil aria-hidden="true" className="h-4 w-4" />
-                  Describe
-                </Button>
-              ) : null}
-              {mayDelete(a) ? (
-                <Button
-                  size="sm"
-                  variant="ghost"
-                  aria-label={`Delete ${a.originalName}`}
-                  onClick={() => {
-                    remove.reset();
-                    setConfirming(a);
-                  }}
-                >
-                  <Trash2 aria-hidden="true" className="h-4 w-4" />
-                  Delete
-                </Button>
-              ) : null}
+                {me?.id === a.uploaderId && editing !== a.id ? (
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    aria-label={`Edit the description of ${a.originalName}`}
+                    onClick={() => {
+                      setEditing(a.id);
+                      setStatus('');
+                    }}
+                  >
+                    <Pencil aria-hidden="true" className="h-4 w-4" />
+                    Describe
+                  </Button>
+                ) : null}
+                {mayDelete(a) ? (
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    aria-label={`Delete ${a.originalName}`}
+                    onClick={() => {
+                      remove.reset();
+                      setConfirming(a);
+                    }}
+                  >
+                    <Trash2 aria-hidden="true" className="h-4 w-4" />
+                    Delete
+                  </Button>
+                ) : null}
+              </div>
             </li>
           ))}
         </ul>
