@@ -78,7 +78,7 @@ export function UploadControl({ cantileverId }: { cantileverId: number }) {
           />
         </div>
       </div>
-      <div className="grid gap-2 sm:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid gap-2">
         <div className="flex flex-col gap-0.5">
           <label htmlFor={descriptionId} className="text-xs font-medium text-concrete-700">
             Description (optional)
