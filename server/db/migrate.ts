@@ -10,6 +10,7 @@ import * as filesMailShapes from '../../migrations/20261202010300_files_mail_sha
 import * as security from '../../migrations/20261203020000_security';
 import * as outboxClaim from '../../migrations/20261203030000_outbox_claim';
 import * as cantileverQuantity from '../../migrations/20261203040000_cantilever_quantity';
+import * as attachmentDetails from '../../migrations/20261203100000_attachment_details';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -24,6 +25,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261203020000_security': security,
   '20261203030000_outbox_claim': outboxClaim,
   '20261203040000_cantilever_quantity': cantileverQuantity,
+  '20261203100000_attachment_details': attachmentDetails,
 };
 
 const migrationSource: Knex.MigrationSource<string> = {

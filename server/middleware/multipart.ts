@@ -14,6 +14,8 @@ export interface UploadLimits {
   maxBytes: number;
   /** Text fields allowed beside the file (e.g. projectId). */
   fields?: number;
+  /** Bytes allowed in one text field (default 1024). */
+  fieldBytes?: number;
 }
 
 function mib(bytes: number): string {
@@ -24,11 +26,18 @@ function hasControlCharacter(name: string): boolean {
   return [...name].some((ch) => ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f);
 }
 
-export function singleFileUpload({ maxBytes, fields = 4 }: UploadLimits): RequestHandler {
+export function singleFileUpload({ maxBytes, fields = 4, fieldBytes = 1024 }: UploadLimits): RequestHandler {
   const upload = multer({
     storage: multer.memoryStorage(),
     defParamCharset: 'utf8',
-    limits: { fileSize: maxBytes, files: 1, fields, fieldSize: 1024, fieldNameSize: 100, parts: fields + 1 },
+    limits: {
+      fileSize: maxBytes,
+      files: 1,
+      fields,
+      fieldSize: fieldBytes,
+      fieldNameSize: 100,
+      parts: fields + 1,
+    },
   }).single('file');
   return (req, res, next) => {
     upload(req, res, (err: unknown) => {

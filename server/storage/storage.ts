@@ -25,6 +25,7 @@ export interface Storage {
   put(key: string, bytes: Buffer, contentType: string): Promise<void>;
   /** The bytes under the key, verified against the SHA-256 given; throws ChecksumError when they differ. */
   get(key: string, sha256: string): Promise<Buffer>;
+  /** Removes the bytes under the key; a key that is already gone is no error. */
   delete(key: string): Promise<void>;
   /** Resolves when the store is reachable (and writable for the local folder). */
   check(): Promise<void>;
@@ -67,7 +68,10 @@ export function localStorage(dir: string): Storage {
     },
     async delete(key) {
       assertKey(key);
-      await unlink(join(dir, key)).catch(() => undefined);
+      // Already gone counts as deleted; any other failure (permissions, a lost mount) is the caller's.
+      await unlink(join(dir, key)).catch((err: NodeJS.ErrnoException) => {
+        if (err.code !== 'ENOENT') throw err;
+      });
     },
     async check() {
       await mkdir(dir, { recursive: true });

@@ -35,7 +35,10 @@ export interface UserDto {
   role: Role;
   units: 'US' | 'SI';
   active: boolean;
-  /** Set by an admin's reset: nothing but changing the password works until it is changed (always sent). */
+  /**
+   * Set when an admin created the account or reset its password: nothing but changing the password
+   * works until it is changed (always sent).
+   */
   mustChangePassword?: boolean;
 }
 export { changePasswordSchema, type ChangePasswordBody, type ChangePasswordRequest } from './auth';
@@ -214,7 +217,37 @@ export interface AttachmentDto {
   uploaderId: number;
   uploaderName: string;
   createdAt: string;
+  /** What the file shows, in the uploader's words ('' when none). */
+  description: string;
+  /** The revision of the same cantilever the file belongs to, or null. */
+  revisionId: number | null;
+  revisionNumber: number | null;
 }
+export const ATTACHMENT_DESCRIPTION_MAX = 500;
+const attachmentDescription = z
+  .string()
+  .trim()
+  .max(ATTACHMENT_DESCRIPTION_MAX, `must be at most ${ATTACHMENT_DESCRIPTION_MAX} characters`);
+const attachmentRevision = z.coerce
+  .number({ error: 'must be a revision id' })
+  .int('must be a revision id')
+  .positive('must be a revision id');
+/** The text parts of an upload (multipart fields beside `file`); empty strings mean "none". */
+export const attachmentFieldsSchema = z.object({
+  description: attachmentDescription.optional(),
+  revisionId: z.union([z.literal(''), attachmentRevision]).optional(),
+});
+/** The uploader's later changes: the description, and the revision it belongs to (null: none). */
+export const updateAttachmentSchema = z
+  .object({
+    description: attachmentDescription.optional(),
+    revisionId: attachmentRevision.nullable().optional(),
+  })
+  .refine((v) => v.description !== undefined || v.revisionId !== undefined, {
+    message: 'give a description or a revisionId',
+  });
+export type UpdateAttachmentRequest = z.output<typeof updateAttachmentSchema>;
+export type UpdateAttachmentBody = z.input<typeof updateAttachmentSchema>;
 export const shapesQuerySchema = z.object({
   family: z.enum(['W', 'HSS', 'PIPE', 'C']).optional(),
   q: z.string().trim().max(40).optional(),

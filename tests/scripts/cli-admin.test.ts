@@ -34,7 +34,14 @@ describe('reachline admin create', () => {
     try {
       const row = await db('users').where({ email: 'boss@example.test' }).first();
       expect(row).toMatchObject({ role: 'admin', display_name: 'The Boss' });
+      expect(Boolean(row.must_change_password)).toBe(true);
       expect(await verifyPassword('slate quarry beneath 12 oaks', row.password_hash)).toBe(true);
+      // One welcome mail, to the new address, with the sign-in address and no password.
+      const mails = await db('outbox');
+      expect(mails).toHaveLength(1);
+      expect(JSON.parse(mails[0].to_json)).toEqual(['boss@example.test']);
+      expect(mails[0].text).toContain('/sign-in with the e-mail address boss@example.test');
+      expect(mails[0].text).not.toContain('slate quarry');
     } finally {
       await db.destroy();
     }

@@ -101,6 +101,16 @@ async function freshRevision(env: MatrixEnv, submitted: boolean): Promise<number
   return saved.body.id as number;
 }
 
+/** A new attachment of the test cantilever, uploaded by the member engineer. */
+async function freshAttachment(env: MatrixEnv): Promise<number> {
+  const engineer = await env.login('engineer');
+  const up = await engineer
+    .post(`/api/cantilevers/${env.cantileverId}/attachments`)
+    .attach('file', PNG, 'dot.png')
+    .expect(201);
+  return up.body.id as number;
+}
+
 async function latestNumber(env: MatrixEnv): Promise<number> {
   const rows = await env.db('revisions').where({ cantilever_id: env.cantileverId }).max({ n: 'number' });
   return Number(rows[0]!.n);
@@ -262,6 +272,19 @@ const POLICY: Record<string, Policy> = {
         .expect(201);
       return { path: `/api/attachments/${up.body.id}` };
     },
+  },
+  // The uploader only (the engineer uploads a fresh file per call); admins may delete but not describe.
+  'PATCH /attachments/:attachmentId': {
+    expect: members('engineer'),
+    target: async (e) => ({
+      path: `/api/attachments/${await freshAttachment(e)}`,
+      body: { description: unique('matrix ') },
+    }),
+  },
+  // The uploader or an admin of the project; outside it, 404 (existence is not revealed).
+  'DELETE /attachments/:attachmentId': {
+    expect: members('engineer', 'admin'),
+    target: async (e) => ({ path: `/api/attachments/${await freshAttachment(e)}` }),
   },
   'GET /shapes': { expect: signedIn, target: () => ({ path: '/api/shapes?family=HSS' }) },
   // Into a project: its members with a design role (shapes.service importScope).

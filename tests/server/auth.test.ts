@@ -168,3 +168,46 @@ describe('sign-in rate limit', () => {
       .expect(200);
   });
 });
+
+describe('the sign-in limiter counts failures only', () => {
+  let env: TestEnv;
+  beforeAll(async () => {
+    // The production defaults: 10 failures per account, 30 per address, in the window.
+    env = await createTestEnv({ config: { loginRateLimit: 10, loginRateWindowMs: 15 * 60_000 } });
+  });
+  afterAll(async () => env.close());
+
+  it('lets 15 correct sign-ins in a row through and writes nothing to the failure table', async () => {
+    for (let i = 0; i < 15; i += 1) {
+      const res = await request(env.app)
+        .post('/api/auth/login')
+        .send({ email: TEAM.architect.email, password: PASSWORD });
+      expect(res.status, `sign-in ${i + 1}`).toBe(200);
+    }
+    expect(await env.db('sign_in_failures')).toEqual([]);
+    expect(await env.db('audit').where({ kind: 'sign-in', user_id: env.ids.architect })).toHaveLength(15);
+  });
+
+  it('limits failures per address across accounts, and correct sign-ins before them did not count', async () => {
+    const limited = await createTestEnv({ config: { loginRateLimit: 10, loginAddressRateLimit: 4 } });
+    try {
+      for (let i = 0; i < 15; i += 1)
+        await request(limited.app)
+          .post('/api/auth/login')
+          .send({ email: TEAM.engineer.email, password: PASSWORD })
+          .expect(200);
+      for (const person of ['architect', 'fabricator', 'engineer2', 'outsider'] as const)
+        await request(limited.app)
+          .post('/api/auth/login')
+          .send({ email: TEAM[person].email, password: 'wrong' })
+          .expect(401);
+      const res = await request(limited.app)
+        .post('/api/auth/login')
+        .send({ email: TEAM.engineer.email, password: PASSWORD });
+      expect(res.status).toBe(429);
+      expect(res.body.error.code).toBe('too_many_attempts');
+    } finally {
+      await limited.close();
+    }
+  });
+});

@@ -115,3 +115,36 @@ describe('attachments in an S3-compatible store (STORAGE_URL)', () => {
     expect(bad.body.error.code).toBe('checksum_mismatch');
   });
 });
+
+describe('deleting an attachment through the API, with either driver', () => {
+  it.each(['local', 's3'] as const)('removes the stored bytes and the row (%s)', async (kind) => {
+    const env = await createTestEnv(
+      kind === 's3'
+        ? {
+            config: {
+              storageUrl: 's3://reachline-files/deleting',
+              s3: { endpoint: fake.url, region: 'us-east-1', forcePathStyle: true },
+            },
+          }
+        : {},
+    );
+    try {
+      const architect = await env.login('architect');
+      const up = await architect
+        .post(`/api/cantilevers/${env.cantileverId}/attachments`)
+        .attach('file', CSV, 'schedule.csv')
+        .expect(201);
+      const row = await env.db('attachments').where({ id: up.body.id }).first();
+      const present = () =>
+        kind === 's3'
+          ? fake.objects.has(`reachline-files/deleting/${row.stored_name}`)
+          : readdirSync(env.config.uploadDir).includes(row.stored_name as string);
+      expect(present()).toBe(true);
+      await architect.delete(`/api/attachments/${up.body.id}`).expect(204);
+      expect(present()).toBe(false);
+      expect(await env.db('attachments').where({ id: up.body.id }).first()).toBeUndefined();
+    } finally {
+      await env.close();
+    }
+  });
+});

@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { useQuery } from '@tanstack/react-query';
+import { Route, Routes } from 'react-router-dom';
+import { apiGet } from '../../src/lib/api-client';
 import AccountRoute from '../../src/app/routes/account';
 import { RequireAuth } from '../../src/features/auth/components/require-auth';
 import { renderAt, stubFetch, users } from './history-fixtures';
@@ -69,5 +72,71 @@ describe('changing a password', () => {
     renderAt(<RequireAuth />, { route: '/projects', path: '/projects' });
     expect(await screen.findByRole('heading', { name: 'Choose a new password' })).toBeInTheDocument();
     expect(screen.getByRole('form', { name: 'Change password' })).toBeInTheDocument();
+  });
+
+  it('says why for a new account, and lets the person in once the first password is changed', async () => {
+    const user = userEvent.setup();
+    const calls = stubFetch(({ path, method }) => {
+      if (path === '/api/auth/me') return { body: { ...users.engineer, mustChangePassword: true } };
+      if (path === '/api/auth/password' && method === 'POST')
+        return { body: { ...users.engineer, mustChangePassword: false } };
+      return undefined;
+    });
+    renderAt(
+      <Routes>
+        <Route element={<RequireAuth />}>
+          <Route path="*" element={<p>the projects page</p>} />
+        </Route>
+      </Routes>,
+      { route: '/projects', path: '/*' },
+    );
+    expect(
+      await screen.findByText(/The password of .* was set by an admin, for a new account or after a reset/),
+    ).toBeInTheDocument();
+    expect(screen.queryByText('the projects page')).not.toBeInTheDocument();
+    const form = screen.getByRole('form', { name: 'Change password' });
+    await user.type(within(form).getByLabelText('Current password'), 'granite ladder under 9 gulls');
+    await user.type(within(form).getByLabelText('New password'), 'copper kettle on the north pier');
+    await user.type(within(form).getByLabelText('New password again'), 'copper kettle on the north pier');
+    await user.click(within(form).getByRole('button', { name: 'Change password' }));
+    expect(await screen.findByText('the projects page')).toBeInTheDocument();
+    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({
+      currentPassword: 'granite ladder under 9 gulls',
+      newPassword: 'copper kettle on the north pier',
+    });
+  });
+
+  it('turns to the change-password form when any request is refused with password_change_required', async () => {
+    let gated = false;
+    stubFetch(({ path }) => {
+      if (path === '/api/auth/me') return { body: { ...users.engineer, mustChangePassword: gated } };
+      if (path === '/api/projects') {
+        gated = true;
+        return {
+          status: 403,
+          body: {
+            error: {
+              code: 'password_change_required',
+              message: 'Choose a new password first: the one you signed in with was set by an admin.',
+              issues: [],
+            },
+          },
+        };
+      }
+      return undefined;
+    });
+    function Projects() {
+      const projects = useQuery({ queryKey: ['projects'], queryFn: () => apiGet('/api/projects') });
+      return <p>{projects.isError ? 'refused' : 'loading projects'}</p>;
+    }
+    renderAt(
+      <Routes>
+        <Route element={<RequireAuth />}>
+          <Route path="*" element={<Projects />} />
+        </Route>
+      </Routes>,
+      { route: '/projects', path: '/*' },
+    );
+    expect(await screen.findByRole('heading', { name: 'Choose a new password' })).toBeInTheDocument();
   });
 });

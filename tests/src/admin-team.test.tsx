@@ -11,7 +11,7 @@ import { renderAt, stubFetch, users } from './history-fixtures';
 const everyone: UserDto[] = [
   users.admin,
   users.architect,
-  users.engineer,
+  { ...users.engineer, mustChangePassword: true },
   { ...users.engineer2, active: false },
 ];
 
@@ -27,6 +27,10 @@ describe('Team', () => {
     const accounts = await screen.findByRole('table', { name: 'Accounts' });
     expect(within(accounts).getAllByRole('row')).toHaveLength(everyone.length + 1);
     expect(within(accounts).getByRole('row', { name: /Eli Second/ })).toHaveTextContent('deactivated');
+    expect(within(accounts).getByRole('row', { name: /Enid Engineer/ })).toHaveTextContent(
+      'first password not yet changed',
+    );
+    expect(within(accounts).getAllByText('first password not yet changed')).toHaveLength(1);
 
     const form = screen.getByRole('form', { name: 'Create an account' });
     await user.type(within(form).getByLabelText('E-mail'), 'not-an-address');

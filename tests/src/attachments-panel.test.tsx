@@ -3,7 +3,7 @@ import { act, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { AttachmentsPanel } from '../../src/features/attachments/components/attachments-panel';
-import type { AttachmentDto, UserDto } from '../../shared/schemas/api';
+import type { AttachmentDto, RevisionSummaryDto, UserDto } from '../../shared/schemas/api';
 import { stubFetch, users } from './history-fixtures';
 
 const drawing: AttachmentDto = {
@@ -16,6 +16,9 @@ const drawing: AttachmentDto = {
   uploaderId: 3,
   uploaderName: 'Fern Fabricator',
   createdAt: '2026-11-02T10:00:00.000Z',
+  description: '',
+  revisionId: null,
+  revisionNumber: null,
 };
 const photo: AttachmentDto = {
   ...drawing,
@@ -61,13 +64,34 @@ function fakeXhr(reply: { status: number; body: unknown }, controls: Controls) {
   };
 }
 
-function setup(me: UserDto, list: AttachmentDto[]) {
-  stubFetch(({ path }) =>
-    path === '/api/auth/me'
+const summary = (id: number, number: number, message: string): RevisionSummaryDto => ({
+  id,
+  cantileverId: 7,
+  number,
+  authorId: users.architect.id,
+  authorName: users.architect.displayName,
+  message,
+  engineVersion: '2.0.0',
+  baseRevisionNumber: number > 1 ? number - 1 : null,
+  createdAt: `2026-11-0${number}T10:00:00.000Z`,
+  ok: true,
+  reviewState: 'draft',
+});
+const revisionsOf7 = [summary(12, 2, 'Deeper tip'), summary(11, 1, 'First design')];
+
+function setup(
+  me: UserDto,
+  list: AttachmentDto[],
+  more?: (call: { method: string; path: string }) => object | undefined,
+) {
+  const calls = stubFetch((call) =>
+    call.path === '/api/auth/me'
       ? { body: me }
-      : path === '/api/cantilevers/7/attachments'
+      : call.path === '/api/cantilevers/7/attachments'
         ? { body: list }
-        : undefined,
+        : call.path === '/api/cantilevers/7/revisions'
+          ? { body: revisionsOf7 }
+          : more?.(call),
   );
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   render(
@@ -75,6 +99,7 @@ function setup(me: UserDto, list: AttachmentDto[]) {
       <AttachmentsPanel cantileverId={7} />
     </QueryClientProvider>,
   );
+  return calls;
 }
 
 describe('AttachmentsPanel', () => {
@@ -174,7 +199,9 @@ describe('AttachmentsPanel', () => {
         ? { body: users.architect }
         : path === '/api/cantilevers/7/attachments'
           ? { body: stored }
-          : undefined,
+          : path === '/api/cantilevers/7/revisions'
+            ? { body: revisionsOf7 }
+            : undefined,
     );
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
     render(
@@ -187,11 +214,81 @@ describe('AttachmentsPanel', () => {
       screen.getByLabelText(/Add a file/),
       new File(['%PDF-1.7'], 'plate-detail.pdf', { type: 'application/pdf' }),
     );
+    await user.type(screen.getByLabelText('Description (optional)'), 'Base plate, sheet 2');
+    await screen.findByRole('option', { name: 'revision 2: Deeper tip' });
+    await user.selectOptions(screen.getByLabelText('Belongs to'), 'revision 2: Deeper tip');
     await user.click(screen.getByRole('button', { name: 'Upload' }));
+    expect(controls.sent[0].get('description')).toBe('Base plate, sheet 2');
+    expect(controls.sent[0].get('revisionId')).toBe(String(revisionsOf7[0].id));
     stored.push(drawing);
     controls.finish();
     expect(await screen.findByText('Uploaded “plate-detail.pdf”.')).toBeInTheDocument();
     expect(await screen.findByRole('link', { name: 'Download plate-detail.pdf' })).toBeInTheDocument();
+  });
+
+  it('shows the description and the revision a file belongs to', async () => {
+    setup(users.architect, [
+      { ...drawing, description: 'Base plate, sheet 2', revisionId: 12, revisionNumber: 2 },
+    ]);
+    expect(await screen.findByText('Base plate, sheet 2')).toBeInTheDocument();
+    expect(screen.getByText('revision 2')).toBeInTheDocument();
+  });
+
+  it('offers neither delete nor describe to a member who did not upload the file', async () => {
+    setup(users.engineer, [drawing]);
+    await screen.findByText('plate-detail.pdf');
+    expect(screen.queryByRole('button', { name: /Delete/ })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Edit the description/ })).not.toBeInTheDocument();
+  });
+
+  it('deletes a file only after the confirmation, and says so', async () => {
+    const user = userEvent.setup();
+    const mine = { ...drawing, uploaderId: users.architect.id };
+    let listed: AttachmentDto[] = [mine];
+    const calls = stubFetch((call) =>
+      call.path === '/api/auth/me'
+        ? { body: users.architect }
+        : call.path === '/api/cantilevers/7/attachments'
+          ? { body: listed }
+          : call.path === '/api/cantilevers/7/revisions'
+            ? { body: revisionsOf7 }
+            : call.method === 'DELETE' && call.path === '/api/attachments/5'
+              ? ((listed = []), { status: 204 })
+              : undefined,
+    );
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    render(
+      <QueryClientProvider client={client}>
+        <AttachmentsPanel cantileverId={7} />
+      </QueryClientProvider>,
+    );
+    await user.click(await screen.findByRole('button', { name: 'Delete plate-detail.pdf' }));
+    const dialog = screen.getByRole('dialog', { name: 'Delete this file?' });
+    expect(dialog).toHaveTextContent('“plate-detail.pdf” and its record are removed for everyone');
+    await user.click(screen.getByRole('button', { name: 'Keep the file' }));
+    expect(calls.some((c) => c.method === 'DELETE')).toBe(false);
+    await user.click(screen.getByRole('button', { name: 'Delete plate-detail.pdf' }));
+    await user.click(screen.getByRole('button', { name: 'Delete the file' }));
+    expect(await screen.findByText('Deleted “plate-detail.pdf”.')).toBeInTheDocument();
+    expect(calls.filter((c) => c.method === 'DELETE').map((c) => c.path)).toEqual(['/api/attachments/5']);
+    expect(await screen.findByText('No files yet.')).toBeInTheDocument();
+  });
+
+  it('lets the uploader edit the description', async () => {
+    const user = userEvent.setup();
+    const mine = { ...drawing, uploaderId: users.architect.id, description: 'old words' };
+    const calls = setup(users.architect, [mine], (call) =>
+      call.method === 'PATCH' && call.path === '/api/attachments/5'
+        ? { body: { ...mine, description: 'Pier elevation' } }
+        : undefined,
+    );
+    await user.click(await screen.findByRole('button', { name: 'Edit the description of plate-detail.pdf' }));
+    const field = screen.getByLabelText('Description of plate-detail.pdf');
+    await user.clear(field);
+    await user.type(field, 'Pier elevation');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+    expect(await screen.findByText('The description of “plate-detail.pdf” was saved.')).toBeInTheDocument();
+    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ description: 'Pier elevation' });
   });
 
   it('offers no upload to an admin', async () => {
@@ -200,5 +297,8 @@ describe('AttachmentsPanel', () => {
       await screen.findByText('Your role (admin) may look at files but not add them.'),
     ).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Upload' })).not.toBeInTheDocument();
+    // An admin may delete any file, but not describe another's.
+    expect(screen.getByRole('button', { name: 'Delete plate-detail.pdf' })).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Edit the description/ })).not.toBeInTheDocument();
   });
 });

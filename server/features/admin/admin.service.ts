@@ -6,6 +6,7 @@ import { hashPassword } from '../../lib/password';
 import { assertStrongPassword } from '../auth/auth.service';
 import { listOutbox, retryNow, toOutboxDto, type OutboxEntryDto } from '../../mail/outbox.repository';
 import { listAudit, recordAudit } from '../audit/audit.repository';
+import { queueWelcomeMail } from './welcome-mail';
 import {
   findUserByEmail,
   findUserById,
@@ -31,18 +32,31 @@ export async function createAccount(
     ]);
   }
   assertStrongPassword(body.password, [body.email, body.displayName], 'password');
-  const id = await insertUser(ctx.db, {
-    email: body.email,
-    displayName: body.displayName,
-    role: body.role,
-    passwordHash: await hashPassword(body.password, ctx.config.passwordCost),
+  const passwordHash = await hashPassword(body.password, ctx.config.passwordCost);
+  // The account, its first-password flag, the audit row and the welcome mail commit together.
+  const id = await ctx.db.transaction(async (trx) => {
+    const newId = await insertUser(trx, {
+      email: body.email,
+      displayName: body.displayName,
+      role: body.role,
+      passwordHash,
+      mustChangePassword: true,
+    });
+    await recordAudit(trx, {
+      kind: 'account-created',
+      userId: admin.id,
+      subject: body.email,
+      detail: `role ${body.role}`,
+    });
+    await queueWelcomeMail(
+      trx,
+      ctx.config,
+      { email: body.email.trim().toLowerCase(), displayName: body.displayName, role: body.role },
+      admin.displayName,
+    );
+    return newId;
   });
-  await recordAudit(ctx.db, {
-    kind: 'account-created',
-    userId: admin.id,
-    subject: body.email,
-    detail: `role ${body.role}`,
-  });
+  ctx.mail.kick();
   const row = await findUserById(ctx.db, id);
   return toUserDto(row!);
 }

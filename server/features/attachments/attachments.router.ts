@@ -1,12 +1,20 @@
-/** Drawings and photos kept with a cantilever. */
+/** Drawings and photos kept with a cantilever: list, upload, download, describe, delete. */
 import { Router } from 'express';
 import { z } from 'zod';
+import { updateAttachmentSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { idParams } from '../../lib/params';
 import { typedRoute } from '../../lib/route';
 import { singleFileUpload } from '../../middleware/multipart';
 import { currentUser } from '../../middleware/require-auth';
-import { assertMayUpload, attachmentForMember, attachmentsOf, storeAttachment } from './attachments.service';
+import {
+  assertMayUpload,
+  attachmentForMember,
+  attachmentsOf,
+  editAttachment,
+  removeAttachment,
+  storeAttachment,
+} from './attachments.service';
 
 const INLINE_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
 
@@ -27,9 +35,12 @@ export function attachmentsRouter(ctx: AppContext): Router {
       await assertMayUpload(ctx, currentUser(req), params.cantileverId);
       next();
     }),
-    singleFileUpload({ maxBytes: ctx.config.attachmentMaxBytes, fields: 2 }),
+    // `description` (up to 500 characters, so 2000 bytes of UTF-8) and `revisionId` beside the file.
+    singleFileUpload({ maxBytes: ctx.config.attachmentMaxBytes, fields: 2, fieldBytes: 2048 }),
     typedRoute({ params }, async ({ params }, req, res) => {
-      res.status(201).json(await storeAttachment(ctx, currentUser(req), params.cantileverId, req.file));
+      res
+        .status(201)
+        .json(await storeAttachment(ctx, currentUser(req), params.cantileverId, req.file, req.body));
     }),
   );
 
@@ -64,6 +75,24 @@ export function attachmentsRouter(ctx: AppContext): Router {
         res.end(bytes);
       },
     ),
+  );
+
+  router.patch(
+    '/attachments/:attachmentId',
+    typedRoute(
+      { params: idParams('attachmentId'), body: updateAttachmentSchema },
+      async ({ params, body }, req, res) => {
+        res.json(await editAttachment(ctx, currentUser(req), params.attachmentId, body));
+      },
+    ),
+  );
+
+  router.delete(
+    '/attachments/:attachmentId',
+    typedRoute({ params: idParams('attachmentId') }, async ({ params }, req, res) => {
+      await removeAttachment(ctx, currentUser(req), params.attachmentId);
+      res.status(204).end();
+    }),
   );
   return router;
 }

@@ -1,15 +1,25 @@
 /**
  * Decides an upload's type from its content, never from its name or the browser's claim.
  * Binary types (PDF, PNG, JPEG) by their signatures (file-type); DXF and CSV are text, so they get
- * a careful structural sniff, and the name must agree (a text file called .png is a disguise).
+ * a careful structural sniff. The name's extension must agree with the content either way (a PNG
+ * called .pdf or a text file called .png is refused), so the kept name never misleads. Reasons
+ * name no list of accepted types: the caller adds that once (ACCEPTED_TYPES_TEXT).
  */
 import { fileTypeFromBuffer } from 'file-type';
 
 export type SniffResult = { ok: true; mime: string } | { ok: false; reason: string };
 
-const BINARY_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
+/** The accepted types in words, for the one sentence of a refusal that lists them. */
+export const ACCEPTED_TYPES_TEXT = 'PDF, PNG, JPEG, DXF or CSV';
 
-function extension(name: string): string {
+/** Each binary type the content may be, with the extensions a name of that type may carry. */
+const BINARY_TYPES: ReadonlyMap<string, { words: string; extensions: readonly string[] }> = new Map([
+  ['application/pdf', { words: 'a PDF document', extensions: ['pdf'] }],
+  ['image/png', { words: 'a PNG image', extensions: ['png'] }],
+  ['image/jpeg', { words: 'a JPEG image', extensions: ['jpg', 'jpeg'] }],
+]);
+
+export function extension(name: string): string {
   const dot = name.lastIndexOf('.');
   return dot >= 0 ? name.slice(dot + 1).toLowerCase() : '';
 }
@@ -70,18 +80,20 @@ export function looksLikeCsv(text: string): boolean {
 export async function sniffAttachment(buffer: Buffer, originalName: string): Promise<SniffResult> {
   if (buffer.length === 0) return { ok: false, reason: 'the file is empty' };
   const ext = extension(originalName);
+  const named = ext ? `.${ext}` : 'no extension';
   const detected = await fileTypeFromBuffer(buffer);
   if (detected) {
-    if (!BINARY_TYPES.has(detected.mime)) {
+    const known = BINARY_TYPES.get(detected.mime);
+    if (!known) return { ok: false, reason: `its content is ${detected.mime}, a type that is not accepted` };
+    if (!known.extensions.includes(ext))
       return {
         ok: false,
-        reason: `its content is ${detected.mime}; allowed are PDF, PNG, JPEG, DXF and CSV`,
+        reason: `its content is ${known.words} but its name has ${named}; rename it to .${known.extensions[0]}`,
       };
-    }
     return { ok: true, mime: detected.mime };
   }
   const text = buffer.includes(0) ? null : decodeUtf8(buffer);
-  if (text === null) return { ok: false, reason: 'its content is not a PDF, PNG, JPEG, DXF or CSV file' };
+  if (text === null) return { ok: false, reason: 'its content is none of the accepted types' };
   if (ext === 'dxf') {
     return looksLikeDxf(text)
       ? { ok: true, mime: 'image/vnd.dxf' }
@@ -92,8 +104,5 @@ export async function sniffAttachment(buffer: Buffer, originalName: string): Pro
       ? { ok: true, mime: 'text/csv' }
       : { ok: false, reason: 'it is named .csv but its content is not comma-separated values' };
   }
-  return {
-    ok: false,
-    reason: `its content does not match its name (.${ext || 'no extension'}); allowed are PDF, PNG, JPEG, DXF and CSV`,
-  };
+  return { ok: false, reason: `its content does not match its name (${named})` };
 }

@@ -15,7 +15,8 @@ export type AuditKind =
   | 'member-added'
   | 'member-removed'
   | 'password-changed'
-  | 'password-reset';
+  | 'password-reset'
+  | 'attachment-deleted';
 
 export interface AuditRow {
   id: number;
@@ -27,7 +28,7 @@ export interface AuditRow {
 }
 
 export async function recordAudit(
-  db: Knex,
+  db: Knex | Knex.Transaction,
   entry: { kind: AuditKind; userId: number | null; subject: string; detail?: string },
 ): Promise<void> {
   await db('audit').insert({

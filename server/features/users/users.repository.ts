@@ -33,7 +33,10 @@ export function normalizeEmail(email: string): string {
   return email.trim().toLowerCase();
 }
 
-export async function findUserByEmail(db: Knex, email: string): Promise<UserRow | undefined> {
+export async function findUserByEmail(
+  db: Knex | Knex.Transaction,
+  email: string,
+): Promise<UserRow | undefined> {
   return db<UserRow>('users')
     .where({ email: normalizeEmail(email) })
     .first();
@@ -48,8 +51,16 @@ export async function listUsers(db: Knex): Promise<UserRow[]> {
 }
 
 export async function insertUser(
-  db: Knex,
-  user: { email: string; displayName: string; passwordHash: string; role: Role; units?: 'US' | 'SI' },
+  db: Knex | Knex.Transaction,
+  user: {
+    email: string;
+    displayName: string;
+    passwordHash: string;
+    role: Role;
+    units?: 'US' | 'SI';
+    /** An admin chose the password: the person must choose their own at the first sign-in. */
+    mustChangePassword?: boolean;
+  },
 ): Promise<number> {
   const [row] = await db('users')
     .insert({
@@ -59,6 +70,7 @@ export async function insertUser(
       role: user.role,
       units: user.units ?? 'US',
       active: true,
+      must_change_password: user.mustChangePassword ?? false,
       created_at: nowIso(),
     })
     .returning('id');
@@ -87,7 +99,7 @@ export async function updateUser(
 
 /**
  * Sets a new password hash and ends every session signed in with the old one (the session
- * version goes up); `mustChange` marks an admin's reset.
+ * version goes up); `mustChange` marks an admin's reset (cleared by the person's own change).
  */
 export async function setPassword(
   db: Knex | Knex.Transaction,

@@ -54,18 +54,18 @@ export default function ProjectRoute() {
       </div>
       <CantileverTable cantilevers={p.cantilevers} mayEdit={role ? role !== 'admin' : false} />
       <h2 className="mt-8 mb-2 font-semibold">Team</h2>
-      <ul className="flex flex-wrap gap-2 text-sm">
-        {p.members.map((m) => (
-          <li key={m.userId} className="rounded border border-concrete-300 bg-white px-2 py-1">
-            {m.displayName} <span className="text-xs text-concrete-500">{m.role}</span>
-          </li>
-        ))}
-      </ul>
+      {/* An admin gets the one list with adding and removing; everyone else the plain list. */}
       {role === 'admin' ? (
-        <div className="mt-4">
-          <ProjectMembersPanel projectId={p.id} />
-        </div>
-      ) : null}
+        <ProjectMembersPanel projectId={p.id} />
+      ) : (
+        <ul className="flex flex-wrap gap-2 text-sm">
+          {p.members.map((m) => (
+            <li key={m.userId} className="rounded border border-concrete-300 bg-white px-2 py-1">
+              {m.displayName} <span className="text-xs text-concrete-500">{m.role}</span>
+            </li>
+          ))}
+        </ul>
+      )}
       <Dialog open={creating} title="New cantilever" onClose={() => setCreating(false)}>
         <CreateCantileverForm
           projectId={p.id}

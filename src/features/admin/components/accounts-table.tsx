@@ -102,6 +102,9 @@ export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number 
                     deactivated
                   </span>
                 )}
+                {user.mustChangePassword ? (
+                  <span className="block text-xs text-concrete-600">first password not yet changed</span>
+                ) : null}
               </td>
               <td className="flex gap-1 py-1">
                 {user.id !== meId && (

@@ -12,10 +12,15 @@ type InviteInput = z.input<typeof createUserSchema>;
 type InviteOutput = z.output<typeof createUserSchema>;
 const FIELDS = ['email', 'displayName', 'role', 'password'] as const;
 
-/** Creates an account; the admin passes the first password on to the person. */
+/**
+ * Creates an account. The server mails the person a welcome with the sign-in address (never the
+ * password); the admin passes the first password on another way, and the person must choose their
+ * own at the first sign-in.
+ */
 export function InviteForm() {
   const create = useCreateUser();
   const [status, setStatus] = useState('');
+  const [welcome, setWelcome] = useState('');
   const form = useForm<InviteInput, unknown, InviteOutput>({
     resolver: zodResolver(createUserSchema),
     defaultValues: { email: '', displayName: '', role: 'architect', password: '' },
@@ -24,9 +29,13 @@ export function InviteForm() {
 
   const onSubmit = form.handleSubmit(async (values) => {
     setStatus('');
+    setWelcome('');
     try {
       const user = await create.mutateAsync(values);
       setStatus(`Account created for ${user.displayName} (${user.email}) as ${user.role}.`);
+      setWelcome(
+        'A welcome e-mail with the sign-in address is queued (the password is not in it): give the first password to the person yourself. They choose their own at the first sign-in.',
+      );
       form.reset();
     } catch (error) {
       if (error instanceof ApiError) {
@@ -78,7 +87,7 @@ export function InviteForm() {
         id="invite-password"
         label="First password"
         error={errors.password?.message}
-        hint="At least 10 characters; the person changes it later."
+        hint="At least 10 characters. It is not e-mailed; the person must replace it at the first sign-in."
       >
         <input
           id="invite-password"
@@ -94,7 +103,7 @@ export function InviteForm() {
           {create.isPending ? 'Creating…' : 'Create account'}
         </Button>
         <p role="status" aria-live="polite" className="text-sm text-concrete-800">
-          {status}
+          <span>{status}</span> {welcome ? <span className="text-concrete-700">{welcome}</span> : null}
         </p>
         {refused && refused.issues.length === 0 && (
           <p role="alert" className="text-sm text-util-over">

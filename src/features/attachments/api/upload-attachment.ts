@@ -24,14 +24,21 @@ function failure(status: number, text: string): ApiError {
   );
 }
 
+/** What goes with the file: an optional description and the revision it belongs to (null: none). */
+export interface UploadDetails {
+  description: string;
+  revisionId: number | null;
+}
+
 /**
- * Uploads one file as multipart field `file`. fetch cannot report upload progress, so this is the one
+ * Uploads one file as multipart field `file`, with `description` and `revisionId` beside it. fetch cannot report upload progress, so this is the one
  * request that uses XMLHttpRequest; errors come back as the same ApiError as everywhere else.
  */
 export function uploadAttachment(
   cantileverId: number,
   file: File,
   onProgress: (fraction: number) => void,
+  details: UploadDetails = { description: '', revisionId: null },
 ): Promise<AttachmentDto> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
@@ -62,6 +69,9 @@ export function uploadAttachment(
         new ApiError(0, 'network', 'The server could not be reached. Check the connection and try again.'),
       );
     const form = new FormData();
+    // The text parts first, so the server has them before the file's bytes.
+    if (details.description.trim()) form.append('description', details.description.trim());
+    if (details.revisionId !== null) form.append('revisionId', String(details.revisionId));
     form.append('file', file);
     xhr.send(form);
   });
@@ -70,8 +80,15 @@ export function uploadAttachment(
 export function useUploadAttachment(cantileverId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) =>
-      uploadAttachment(cantileverId, file, onProgress),
+    mutationFn: ({
+      file,
+      onProgress,
+      details,
+    }: {
+      file: File;
+      onProgress: (fraction: number) => void;
+      details?: UploadDetails;
+    }) => uploadAttachment(cantileverId, file, onProgress, details),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.list(cantileverId) }),
   });
 }

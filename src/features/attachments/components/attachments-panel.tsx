@@ -5,7 +5,10 @@ import { errorText } from '../../../lib/error-text';
 import { AttachmentsList } from './attachments-list';
 import { UploadControl } from './upload-control';
 
-/** The drawings and photos kept with one cantilever; design roles may add files. */
+/**
+ * The drawings and photos kept with one cantilever; design roles may add files, their uploader
+ * describes them, the uploader or an admin deletes them.
+ */
 export function AttachmentsPanel({ cantileverId }: { cantileverId: number }) {
   const me = useMe();
   const attachments = useAttachments(cantileverId);
@@ -22,7 +25,13 @@ export function AttachmentsPanel({ cantileverId }: { cantileverId: number }) {
           Files could not be loaded: {errorText(attachments.error)}
         </p>
       )}
-      {attachments.data && <AttachmentsList attachments={attachments.data} />}
+      {attachments.data && (
+        <AttachmentsList
+          attachments={attachments.data}
+          cantileverId={cantileverId}
+          me={me.data ?? undefined}
+        />
+      )}
       {mayUpload ? (
         <UploadControl cantileverId={cantileverId} />
       ) : (

@@ -25,8 +25,8 @@ export function uploadHint(file: File): string | null {
 export function uploadErrorText(error: unknown): string {
   if (error instanceof ApiError) {
     if (error.status === 413) return `The file is too large. ${error.message}`;
-    if (error.status === 400)
-      return `This file is not allowed. ${error.message} Allowed: PDF, PNG, JPEG, DXF and CSV.`;
+    // The server's refusal already lists the accepted types once.
+    if (error.status === 400) return `This file is not allowed. ${error.message}`;
     if (error.status === 403) return `You may not upload here. ${error.message}`;
     return error.message;
   }
