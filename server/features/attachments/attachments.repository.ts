@@ -1,7 +1,7 @@
 /** Attachment records (Knex only); the bytes live in the storage (local folder or S3) under random names. */
 import type { Knex } from 'knex';
 import type { AttachmentDto } from '../../../shared/schemas/api';
-import { nowIso, toIso } from '../../db/knex';
+import { nowIso, toIso, insertReturningId } from '../../db/knex';
 
 export interface AttachmentRow {
   id: number;
@@ -65,10 +65,7 @@ export async function insertAttachment(
   db: Knex,
   a: Omit<AttachmentRow, 'id' | 'created_at'>,
 ): Promise<number> {
-  const [row] = await db('attachments')
-    .insert({ ...a, created_at: nowIso() })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'attachments', { ...a, created_at: nowIso() });
 }
 
 export async function updateAttachment(

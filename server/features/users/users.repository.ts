@@ -1,7 +1,7 @@
 /** Accounts (Knex only). */
 import type { Knex } from 'knex';
 import type { Role, UserDto } from '../../../shared/schemas/api';
-import { nowIso, toBool } from '../../db/knex';
+import { nowIso, toBool, insertReturningId } from '../../db/knex';
 
 export interface UserRow {
   id: number;
@@ -62,19 +62,16 @@ export async function insertUser(
     mustChangePassword?: boolean;
   },
 ): Promise<number> {
-  const [row] = await db('users')
-    .insert({
-      email: normalizeEmail(user.email),
-      display_name: user.displayName,
-      password_hash: user.passwordHash,
-      role: user.role,
-      units: user.units ?? 'US',
-      active: true,
-      must_change_password: user.mustChangePassword ?? false,
-      created_at: nowIso(),
-    })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'users', {
+    email: normalizeEmail(user.email),
+    display_name: user.displayName,
+    password_hash: user.passwordHash,
+    role: user.role,
+    units: user.units ?? 'US',
+    active: true,
+    must_change_password: user.mustChangePassword ?? false,
+    created_at: nowIso(),
+  });
 }
 
 export async function updateUser(
