@@ -38,8 +38,10 @@ export interface DiagramStripProps {
 }
 
 const PLOT_HEIGHT = 112;
-const TOP = 18;
+const TOP = 22;
 const X_AXIS_HEIGHT = 40;
+/** Room under a strip without the distance axis, for its lowest value label. */
+const BOTTOM = 10;
 const TICK = <AxisTick />;
 const INK = '#3d3935';
 const ACCENT = '#b34d16';
@@ -106,8 +108,11 @@ export const DiagramStrip = memo(function DiagramStrip({
   mark,
   limit = null,
 }: DiagramStripProps) {
-  const height = PLOT_HEIGHT + TOP + (xLabel ? X_AXIS_HEIGHT : 4);
-  const margin = useMemo(() => ({ top: TOP, right: RIGHT_GAP, bottom: 0, left: 0 }), []);
+  const height = PLOT_HEIGHT + TOP + (xLabel ? X_AXIS_HEIGHT : BOTTOM);
+  const margin = useMemo(
+    () => ({ top: TOP, right: RIGHT_GAP, bottom: xLabel ? 0 : BOTTOM, left: 0 }),
+    [xLabel],
+  );
   const domain = useMemo(() => [frame.from, frame.to] as [number, number], [frame.from, frame.to]);
   const axisLabel = useMemo(
     () =>

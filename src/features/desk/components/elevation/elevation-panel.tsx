@@ -39,7 +39,7 @@ export function ElevationPanel({
   if (!s || !choice || !shape)
     return <p className="text-sm text-concrete-600">No station data in this result.</p>;
   const ratio = choice.limit?.which === 'live-load' ? liveLimit : totalLimit;
-  const limitLabel = choice.limit ? `limit ${formatQuantity(choice.limit)} (span/${ratio})` : null;
+  const limitLabel = choice.limit ? `limit ${formatQuantity(choice.limit)} = span/${ratio}` : null;
   const words = describeSeries(result, choice.series, choice.limit ?? null);
   const limitKey = limitSeriesKey(choices);
   const limitChoice = choices.find((c) => c.key === limitKey);

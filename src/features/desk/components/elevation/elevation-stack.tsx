@@ -53,7 +53,7 @@ export const ElevationStack = memo(function ElevationStack({
   stations: Stations;
   choice: SeriesChoice;
   shape: ElevationShape;
-  /** The words beside the limit marker, e.g. "limit 0.9 in (span/240)". */
+  /** The words beside the limit marker, e.g. "limit 0.9 in = span/240". */
   limitLabel: string | null;
 }) {
   const { ref, width } = useWidth<HTMLDivElement>();
