@@ -48,8 +48,11 @@ export function elevationShape(result: DesignResult, doc: DesignDocument | null)
   const s = result.stations;
   if (!s || s.x.length < 2) return null;
   const small = s.units.deflection;
-  const x = s.x.map((v) => convert(v, s.units.x, 'in'));
-  const depth = s.depth.map((d) => convert(d, small, 'in'));
+  // One factor per unit (a mathjs conversion per station costs more than the rest of the drawing).
+  const fx = convert(1, s.units.x, 'in');
+  const fd = convert(1, small, 'in');
+  const x = s.x.map((v) => v * fx);
+  const depth = s.depth.map((d) => d * fd);
   const length = x[x.length - 1];
   const root = depth[0];
   const base: ElevationShape = {

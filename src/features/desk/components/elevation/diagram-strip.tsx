@@ -1,9 +1,10 @@
 import { memo, useMemo } from 'react';
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, XAxis, YAxis } from 'recharts';
+import { CartesianGrid, Line, LineChart, XAxis, YAxis, type LineDrawShapeProps } from 'recharts';
+
 import type { AxisTicks } from '../../lib/chart-ticks';
 import type { ChartRow } from '../../lib/chart-data';
 import { AxisTick } from '../axis-tick';
-import { AXIS_WIDTH, RIGHT_GAP, type Frame } from './frame';
+import { AXIS_WIDTH, pixelOf, RIGHT_GAP, type Frame } from './frame';
 
 /** A governing value marked on the curve: a dot and its value in words. */
 export interface StripMark {
@@ -95,6 +96,28 @@ function LimitShape({ cx, cy, limit, down }: { cx?: number; cy?: number; limit: 
   );
 }
 
+/**
+ * The line through recharts' points as one plain path. recharts' own line shape takes the path's ref,
+ * and the line then measures the path (getTotalLength, a forced layout) on every render to animate
+ * it, even with animation off; without the ref there is nothing to measure.
+ */
+function StripCurve({ points, stroke, strokeWidth, clipPath }: LineDrawShapeProps) {
+  if (!points || points.length < 2) return null;
+  let d = '';
+  for (const p of points) if (p.x != null && p.y != null) d += `${d ? 'L' : 'M'}${p.x},${p.y}`;
+  return (
+    <path
+      className="recharts-curve recharts-line-curve"
+      d={d}
+      fill="none"
+      stroke={stroke}
+      strokeWidth={strokeWidth}
+      clipPath={clipPath}
+    />
+  );
+}
+const CURVE = (props: LineDrawShapeProps) => <StripCurve {...props} />;
+
 /** One diagram along the member (recharts) on the elevation's shared frame; hidden from assistive tech. */
 export const DiagramStrip = memo(function DiagramStrip({
   title,
@@ -121,20 +144,16 @@ export const DiagramStrip = memo(function DiagramStrip({
         : undefined,
     [xLabel],
   );
-  const markShape = useMemo(
-    () =>
-      mark
-        ? (p: { cx?: number; cy?: number }) => <MarkLabel {...p} label={mark.label} side={mark.side} />
-        : undefined,
-    [mark],
-  );
-  const limitShape = useMemo(
-    () =>
-      limit
-        ? (p: { cx?: number; cy?: number }) => <LimitShape {...p} limit={limit} down={limit.y >= 0} />
-        : undefined,
-    [limit],
-  );
+  // The marks and the zero line are drawn over the chart in its own frame (the plot area recharts
+  // lays out from the same margins and axis width), not as recharts reference elements: each of
+  // those re-registers in the chart's store whenever its props change, a few ms per strip per result.
+  const bottom = height - (xLabel ? X_AXIS_HEIGHT : BOTTOM);
+  const [lo, hi] = yAxis.domain;
+  const yOf = (v: number) => {
+    const t = (v - lo) / (hi - lo || 1);
+    return reversed ? TOP + t * (bottom - TOP) : bottom - t * (bottom - TOP);
+  };
+  const xOf = (x: number) => pixelOf(frame, x);
   return (
     <div className="relative" data-testid={`strip-${dataKey}`}>
       <p
@@ -167,7 +186,6 @@ export const DiagramStrip = memo(function DiagramStrip({
           niceTicks="none"
           tick={TICK}
         />
-        <ReferenceLine y={0} stroke="#a39b8f" />
         <Line
           type="linear"
           dataKey={dataKey}
@@ -176,14 +194,16 @@ export const DiagramStrip = memo(function DiagramStrip({
           dot={false}
           activeDot={false}
           isAnimationActive={false}
+          shape={CURVE}
         />
-        {mark && markShape ? (
-          <ReferenceDot x={mark.x} y={mark.y} shape={markShape} ifOverflow="visible" />
-        ) : null}
-        {limit && limitShape ? (
-          <ReferenceDot x={frame.to} y={limit.y} shape={limitShape} ifOverflow="visible" />
-        ) : null}
       </LineChart>
+      <svg width={frame.width} height={height} className="pointer-events-none absolute left-0 top-0">
+        {lo < 0 && hi > 0 ? (
+          <line x1={xOf(0)} x2={xOf(frame.to)} y1={yOf(0)} y2={yOf(0)} stroke="#a39b8f" />
+        ) : null}
+        {mark ? <MarkLabel cx={xOf(mark.x)} cy={yOf(mark.y)} label={mark.label} side={mark.side} /> : null}
+        {limit ? <LimitShape cx={xOf(frame.to)} cy={yOf(limit.y)} limit={limit} down={limit.y >= 0} /> : null}
+      </svg>
     </div>
   );
 });

@@ -22,7 +22,7 @@ import {
 import type { ElevationShape } from '../../lib/elevation-geometry';
 import { BeamDrawing, DRAWING_TOP, drawingScale } from './beam-drawing';
 import { DiagramStrip, type StripLimit, type StripMark } from './diagram-strip';
-import { pixelOf, useWidth, xOfPixel, type Frame } from './frame';
+import { pixelOf, useSameAxis, useSameNumbers, useWidth, xOfPixel, type Frame } from './frame';
 
 const q = (value: number, unit: string) => formatQuantity({ value, unit });
 
@@ -60,12 +60,13 @@ export const ElevationStack = memo(function ElevationStack({
   const series = choice.series;
   const length = s.x[s.x.length - 1];
   const inchesPerUnit = useMemo(() => convert(1, s.units.x, 'in'), [s.units.x]);
+  const depthToInches = useMemo(() => convert(1, s.units.deflection, 'in'), [s.units.deflection]);
   const frame: Frame = useMemo(
     () => ({ width, from: -shape.behind / inchesPerUnit, to: length }),
     [width, shape.behind, inchesPerUnit, length],
   );
   const rows = useMemo(() => chartRows(s.x, series), [s.x, series]);
-  const xTicks = useMemo(() => positionTicks(length).ticks, [length]);
+  const xTicks = useSameNumbers(useMemo(() => positionTicks(length).ticks, [length]));
   const strips = useMemo(() => {
     const v = peak(series.V, s.x);
     const m = peak(series.M, s.x);
@@ -103,6 +104,10 @@ export const ElevationStack = memo(function ElevationStack({
     };
     return { yV: valueTicks(series.V), yM: valueTicks(series.M), yD, markV, markM, markD, limit };
   }, [series, s.x, s.units, length, choice.limit, limitLabel]);
+
+  const yV = useSameAxis(strips.yV);
+  const yM = useSameAxis(strips.yM);
+  const yD = useSameAxis(strips.yD);
 
   const [cursor, setCursor] = useState<number | null>(null);
   const [announced, setAnnounced] = useState('');
@@ -151,7 +156,7 @@ export const ElevationStack = memo(function ElevationStack({
   };
   const scale = drawingScale(frame, inchesPerUnit);
   const lengthText = q(length, s.units.x);
-  const depthInches = values ? convert(values.depth, s.units.deflection, 'in') : 0;
+  const depthInches = values ? values.depth * depthToInches : 0;
 
   return (
     <div className="flex flex-col gap-1">
@@ -214,7 +219,7 @@ export const ElevationStack = memo(function ElevationStack({
             dataKey="V"
             frame={frame}
             xTicks={xTicks}
-            yAxis={strips.yV}
+            yAxis={yV}
             mark={strips.markV}
           />
           <DiagramStrip
@@ -223,7 +228,7 @@ export const ElevationStack = memo(function ElevationStack({
             dataKey="M"
             frame={frame}
             xTicks={xTicks}
-            yAxis={strips.yM}
+            yAxis={yM}
             mark={strips.markM}
           />
           <DiagramStrip
@@ -232,7 +237,7 @@ export const ElevationStack = memo(function ElevationStack({
             dataKey="d"
             frame={frame}
             xTicks={xTicks}
-            yAxis={strips.yD}
+            yAxis={yD}
             reversed
             xLabel={`Distance from the root (${s.units.x})`}
             mark={strips.markD}

@@ -43,3 +43,27 @@ export function useWidth<T extends HTMLElement>(fallback = 720) {
   }, []);
   return { ref, width };
 }
+
+const sameNumbers = (a: readonly number[], b: readonly number[]) =>
+  a.length === b.length && a.every((v, i) => v === b[i]);
+
+/**
+ * The previous axis (domain and ticks) while a new result gives the same one: an axis prop with a
+ * new identity makes recharts register the axis again and recompute every selector of the chart.
+ */
+export function useSameAxis<T extends { domain: [number, number]; ticks: number[] }>(axis: T): T {
+  const [kept, setKept] = useState(axis);
+  if (kept === axis || (sameNumbers(kept.domain, axis.domain) && sameNumbers(kept.ticks, axis.ticks)))
+    return kept;
+  // A new axis: kept from here on (React renders again at once with the stored value).
+  setKept(axis);
+  return axis;
+}
+
+/** The previous list while a new one holds the same numbers. */
+export function useSameNumbers(values: number[]): number[] {
+  const [kept, setKept] = useState(values);
+  if (kept === values || sameNumbers(kept, values)) return kept;
+  setKept(values);
+  return values;
+}

@@ -8,7 +8,8 @@ export function supportWords(
   smallUnit: string,
   depth: readonly number[],
 ): string {
-  const q = (inches: number) => formatQuantity({ value: convert(inches, 'in', smallUnit), unit: smallUnit });
+  const f = convert(1, 'in', smallUnit);
+  const q = (inches: number) => formatQuantity({ value: inches * f, unit: smallUnit });
   const root = depth[0] ?? 0;
   const tip = depth[depth.length - 1] ?? 0;
   const member = `Drawn to scale: ${label}, ${formatQuantity({ value: root, unit: smallUnit })} deep at the root, ${formatQuantity({ value: tip, unit: smallUnit })} at the tip${root !== tip ? ' (tapered underneath)' : ''}`;
