@@ -63,6 +63,8 @@ function expected(series: StationSeries, i: number) {
 
 /** The panel cut from a full-page shot (an element shot would show the sticky desk header over it). */
 async function panelShot(name: string) {
+  // At the top of the page the sticky desk header sits above the results, not over the panel.
+  await page.evaluate(() => window.scrollTo(0, 0));
   const clip = await page.locator(PANEL).evaluate((el) => {
     const r = el.getBoundingClientRect();
     return { x: r.left + window.scrollX, y: r.top + window.scrollY, width: r.width, height: r.height };
