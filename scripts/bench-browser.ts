@@ -156,6 +156,8 @@ async function main() {
     databaseUrl: join(dir, 'bench.sqlite'),
     uploadDir,
     dataDir: dir,
+    // Warnings and errors only: the request log of every call would bury the figures on stdout.
+    logLevel: 'warn',
     ...(distDir ? { distDir } : {}),
   });
   const context = await launchChromium(join(dir, 'profile'), server.url);

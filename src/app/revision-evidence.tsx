@@ -1,14 +1,13 @@
 /**
  * The evidence of a stored revision, drawn with the desk's own components (composed here because
- * features do not import one another): every input grouped as on the desk, the diagrams, the
- * member elevation and the plate on the pier.
+ * features do not import one another): every input grouped as on the desk, the member elevation
+ * with its diagrams and the plate on the pier.
  */
 import type { ReactNode } from 'react';
 import type { RevisionDto } from '../../shared/schemas/api';
 import { DesignInputsList } from '../components/design-inputs-list';
 import { CheckBoard } from '../features/desk/components/check-board';
-import { DeskCharts } from '../features/desk/components/desk-charts';
-import { MemberSketch } from '../features/desk/components/member-sketch';
+import { ElevationPanel } from '../features/desk/components/elevation/elevation-panel';
 import { PlateSketch } from '../features/desk/components/plate-sketch';
 import { Verdict } from '../features/desk/components/verdict';
 
@@ -26,16 +25,14 @@ function DrawnResults({ revision }: { revision: RevisionDto }) {
   const doc = revision.input;
   return (
     <>
-      <Panel title="Moment, shear and deflection along the member">
-        <DeskCharts
+      <Panel title="Member elevation and diagrams">
+        <ElevationPanel
           result={revision.result}
+          doc={doc}
           resultId={revision.id}
           liveLimit={doc.deflectionLimits?.live ?? 360}
           totalLimit={doc.deflectionLimits?.total ?? 240}
         />
-      </Panel>
-      <Panel title="Member elevation">
-        <MemberSketch result={revision.result} />
       </Panel>
       <Panel title="Plate on the pier">
         <PlateSketch doc={doc} result={revision.result} />

@@ -62,17 +62,16 @@ describe('design desk', () => {
     await expect.poll(() => link.getAttribute('href')).toBe(href);
   });
 
-  it('Diagrams: hovering a chart shows the readout with its unit', async () => {
-    const chart = page.getByTestId('chart-M');
-    const box = await chart.boundingBox();
-    if (!box) throw new Error('the moment chart has no box');
+  it('Elevation: pointing along the member shows the readout with its units', async () => {
+    const elevation = page.getByTestId('elevation');
+    const box = await elevation.boundingBox();
+    if (!box) throw new Error('the elevation has no box');
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
     await page.mouse.move(box.x + box.width / 2 + 5, box.y + box.height / 2);
-    const tooltip = chart.locator('.recharts-tooltip-wrapper');
+    const readout = page.getByTestId('elevation-readout');
     await expect
-      .poll(async () => (await tooltip.textContent()) ?? '', { timeout: 5_000 })
-      .toMatch(/^x = [\d.]+ ft from the root/);
-    expect(await tooltip.textContent()).toMatch(/Moment : -?[\d.]+ kip[·\s]ft/);
+      .poll(async () => (await readout.textContent()) ?? '', { timeout: 5_000 })
+      .toMatch(/^At [\d.]+ ft from the root: shear -?[\d.]+ kip, moment -?[\d.]+ kip·ft, deflection/);
     await page.mouse.move(0, 0);
   });
 
@@ -162,7 +161,7 @@ describe('design desk', () => {
     await field('Depth at the root').waitFor();
     await field('Web thickness').fill('0.3125 in');
     await settled();
-    expect(await page.locator('#member-sketch-desc').textContent()).toMatch(/built-up/i);
+    expect(await page.getByTestId('elevation-support').textContent()).toMatch(/built-up/i);
   });
 
   it('Units: SI shows the same physical values, and US again restores the text', async () => {

@@ -198,7 +198,8 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     expect(await ratios.locator('tr[data-check="member.flexure"]').textContent()).toContain('better');
     expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
     await page.locator('.recharts-line').first().waitFor();
-    expect(await page.locator('.recharts-line').count()).toBe(4);
+    // moment, shear and deflection, each for both revisions
+    expect(await page.locator('.recharts-line').count()).toBe(6);
     expect(await page.getByText(/^Moment under .+\. Revision 2: reach 8\.00 ft, root moment /).count()).toBe(
       1,
     );

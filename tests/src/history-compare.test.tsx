@@ -125,10 +125,10 @@ describe('Compare screen', () => {
     expect(summary.textContent).toContain(`tip deflection ${tipA.toPrecision(3)} in. Revision 2`);
     expect(summary.textContent).toContain(`tip deflection ${tipB.toPrecision(3)} in.`);
     expect(summary.textContent).toContain(
-      `Revision 1: reach 9.00 ft, root moment ${rootA.toPrecision(3)} kip ft`,
+      `Revision 1: reach 9.00 ft, root moment ${rootA.toPrecision(3)} kip·ft`,
     );
     expect(summary.textContent).toContain(
-      `Revision 2: reach 10.0 ft, root moment ${rootB.toPrecision(3)} kip ft`,
+      `Revision 2: reach 10.0 ft, root moment ${rootB.toPrecision(3)} kip·ft`,
     );
   });
 

@@ -59,7 +59,7 @@ describe('Review holds the whole design', () => {
     expect(within(inputs).getByRole('region', { name: 'Reach inputs' })).toHaveTextContent('length');
     expect(within(inputs).getByRole('region', { name: 'Support inputs' })).toBeInTheDocument();
     expect(screen.getByRole('region', { name: 'Plate on the pier' })).toBeInTheDocument();
-    expect(screen.getByRole('region', { name: 'Member elevation' })).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'Member elevation and diagrams' })).toBeInTheDocument();
     const form = screen.getByRole('form', { name: 'Review decision' });
     expect(inputs.compareDocumentPosition(form) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
     expect(screen.getByTestId('package-link')).toHaveAttribute('href', '/api/revisions/21/package.pdf');

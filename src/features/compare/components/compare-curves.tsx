@@ -14,8 +14,9 @@ interface CompareCurvesProps {
 }
 
 /**
- * The moment and deflection curves of both revisions. Moment defaults to the combination that governs
- * bending; deflection to the service combination of the total-load check, the one its limit line is for.
+ * The moment, shear and deflection curves of both revisions. Moment and shear default to the
+ * combination that governs bending; deflection to the service combination of the total-load check,
+ * the one its limit line is for.
  */
 export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }: CompareCurvesProps) {
   const names = seriesNames(stationsB, stationsA);
@@ -37,7 +38,7 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
       </p>
     );
   }
-  const points = (s: Stations | undefined, name: string, curve: 'M' | 'deflection') =>
+  const points = (s: Stations | undefined, name: string, curve: 'V' | 'M' | 'deflection') =>
     s ? curvePoints(s, name, curve, target.units) : null;
   const limit = deflectionName === service ? deflectionLimit(checksB, target.units.deflection) : null;
 
@@ -45,13 +46,27 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
     <div className="space-y-3">
       <div className="grid gap-4 lg:grid-cols-2">
         <div className="space-y-2 text-sm">
-          <SeriesSelect label="Moment under" value={momentName} names={names} onChange={setMomentChoice} />
+          <SeriesSelect
+            label="Moment and shear under"
+            value={momentName}
+            names={names}
+            onChange={setMomentChoice}
+          />
           <CurvesChart
-            title={`Moment, ${momentName}`}
+            quantity="Moment"
+            under={momentName}
             xUnit={target.units.x}
             yUnit={target.units.M}
             a={{ label: labelA, points: points(stationsA, momentName, 'M') }}
             b={{ label: labelB, points: points(stationsB, momentName, 'M') }}
+          />
+          <CurvesChart
+            quantity="Shear"
+            under={momentName}
+            xUnit={target.units.x}
+            yUnit={target.units.V}
+            a={{ label: labelA, points: points(stationsA, momentName, 'V') }}
+            b={{ label: labelB, points: points(stationsB, momentName, 'V') }}
           />
         </div>
         <div className="space-y-2 text-sm">
@@ -62,7 +77,9 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
             onChange={setDeflectionChoice}
           />
           <CurvesChart
-            title={`Deflection (downward), ${deflectionName}`}
+            quantity="Deflection"
+            under={deflectionName}
+            note="drawn downward"
             xUnit={target.units.x}
             yUnit={target.units.deflection}
             a={{ label: labelA, points: points(stationsA, deflectionName, 'deflection') }}
@@ -73,7 +90,7 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
                 ? null
                 : {
                     value: limit,
-                    label: `${labelB} total-load limit ${limit.toPrecision(3)} ${target.units.deflection}`,
+                    label: `${labelB} total-load limit ${Number(limit.toPrecision(3))} ${target.units.deflection}`,
                   }
             }
           />

@@ -60,7 +60,7 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
       </section>
       <section aria-labelledby="compare-curves" className="rounded border border-concrete-200 bg-white p-4">
         <h2 id="compare-curves" className="mb-2 text-lg font-semibold text-concrete-900">
-          Moment and deflection curves
+          Moment, shear and deflection curves
         </h2>
         <CompareCurves
           labelA={labelA}

@@ -29,7 +29,7 @@ export function curveSummary(
   const eb = ends(b, momentName, deflectionName, target);
   const one = (label: string, e: ReturnType<typeof ends>) =>
     e
-      ? `${label}: reach ${e.reach.toPrecision(3)} ${target.x}, root moment ${e.rootMoment.toPrecision(3)} ${target.M}, tip deflection ${e.tipDeflection.toPrecision(3)} ${target.deflection}`
+      ? `${label}: reach ${e.reach.toPrecision(3)} ${target.x}, root moment ${e.rootMoment.toPrecision(3)} ${target.M.replace(/ /g, '·')}, tip deflection ${e.tipDeflection.toPrecision(3)} ${target.deflection}`
       : `${label}: no curve`;
   return `Moment under ${momentName}, deflection under ${deflectionName}. ${one(labelA, ea)}. ${one(labelB, eb)}.`;
 }

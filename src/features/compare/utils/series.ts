@@ -1,7 +1,7 @@
 import type { Check, Stations, StationSeries } from '../../../../shared/engine/types';
 import { convert } from '../../../../shared/engine/units';
 
-export type Curve = 'M' | 'deflection';
+export type Curve = 'V' | 'M' | 'deflection';
 
 export interface Point {
   x: number;

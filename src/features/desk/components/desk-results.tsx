@@ -2,8 +2,7 @@ import { memo, type ReactNode } from 'react';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import type { LiveDesign } from '../hooks/use-live-design';
 import { CheckBoard } from './check-board';
-import { DeskCharts } from './desk-charts';
-import { MemberSketch } from './member-sketch';
+import { ElevationPanel } from './elevation/elevation-panel';
 import { PlateSketch } from './plate-sketch';
 import { SteelSummary } from './steel-summary';
 import { Verdict } from './verdict';
@@ -42,9 +41,10 @@ export const DeskResults = memo(function DeskResults({
       {result ? (
         <>
           <SteelSummary result={result} beams={beams} />
-          <Panel title="Moment, shear and deflection along the member">
-            <DeskCharts
+          <Panel title="Member elevation and diagrams">
+            <ElevationPanel
               result={result}
+              doc={doc}
               resultId={live.resultId}
               liveLimit={liveLimit}
               totalLimit={totalLimit}
@@ -57,9 +57,6 @@ export const DeskResults = memo(function DeskResults({
             />
           </Panel>
           <div className="grid gap-3 2xl:grid-cols-2">
-            <Panel title="Member elevation">
-              <MemberSketch result={result} />
-            </Panel>
             <Panel title="Plate on the pier">
               {doc ? <PlateSketch doc={doc} result={result} /> : null}
               {schedule}

@@ -1,31 +1,100 @@
-/** Chart rows and plain-words summaries from the station arrays of a result. */
-import type { DesignResult, StationSeries } from '../../../../shared/engine/types';
+/** The series the elevation can show, its rows and plain-words summaries, from a result's stations. */
+import type { Check, DesignResult, Stations, StationSeries } from '../../../../shared/engine/types';
 import { convert, formatQuantity, type Quantity } from '../../../../shared/engine/units';
+
+/** A deflection check's limit, for the marker at the tip. */
+export interface SeriesLimit {
+  value: number;
+  unit: string;
+  /** "total-load" or "live-load". */
+  which: string;
+}
 
 export interface SeriesChoice {
   key: string;
   label: string;
-  kind: 'case' | 'combination';
+  /** A strength (or ASD) combination, a service combination of a deflection check, or one case. */
+  kind: 'case' | 'combination' | 'service';
   series: StationSeries;
+  /** Set when the series is the combination a deflection check uses: its limit applies to this curve. */
+  limit?: SeriesLimit;
 }
+
+/**
+ * A combination as the engine names its service combinations ("D + 0.75L + 0.75S") summed from the
+ * unfactored case series; undefined when a term does not read or no case of it is present.
+ */
+export function seriesFromCases(stations: Stations, name: string): StationSeries | undefined {
+  const terms = name.split('+').map((t) => /^\s*(\d*\.?\d*)\s*([A-Za-z]+)\s*$/.exec(t));
+  if (terms.length === 0 || terms.some((t) => t === null)) return undefined;
+  const n = stations.x.length;
+  const out: StationSeries = {
+    name,
+    V: new Array<number>(n).fill(0),
+    M: new Array<number>(n).fill(0),
+    deflection: new Array<number>(n).fill(0),
+  };
+  let used = 0;
+  for (const t of terms as RegExpExecArray[]) {
+    const series = stations.cases.find((c) => c.name === t[2]);
+    if (!series) continue;
+    used += 1;
+    const factor = t[1] ? Number(t[1]) : 1;
+    for (let i = 0; i < n; i += 1) {
+      out.V[i] += factor * series.V[i];
+      out.M[i] += factor * series.M[i];
+      out.deflection[i] += factor * series.deflection[i];
+    }
+  }
+  return used > 0 ? out : undefined;
+}
+
+function checkLimit(check: Check, unit: string, which: string): SeriesLimit | undefined {
+  if (!check.capacity) return undefined;
+  return { value: convert(check.capacity.value, check.capacity.unit, unit), unit, which };
+}
+
+const DEFLECTION_CHECKS = [
+  { id: 'member.deflection.total', which: 'total-load' },
+  { id: 'member.deflection.live', which: 'live-load' },
+] as const;
 
 export function seriesChoices(result: DesignResult): SeriesChoice[] {
   const s = result.stations;
   if (!s) return [];
-  return [
-    ...s.combinations.map((series) => ({
-      key: `combination:${series.name}`,
-      label: series.name,
-      kind: 'combination' as const,
-      series,
-    })),
-    ...s.cases.map((series) => ({
-      key: `case:${series.name}`,
-      label: `${series.name} alone (unfactored)`,
-      kind: 'case' as const,
-      series,
-    })),
-  ];
+  const choices: SeriesChoice[] = s.combinations.map((series) => ({
+    key: `combination:${series.name}`,
+    label: series.name,
+    kind: 'combination' as const,
+    series,
+  }));
+  const cases: SeriesChoice[] = s.cases.map((series) => ({
+    key: `case:${series.name}`,
+    label: `${series.name} alone (unfactored)`,
+    kind: 'case' as const,
+    series,
+  }));
+  for (const { id, which } of DEFLECTION_CHECKS) {
+    const check = result.checks.find((c) => c.id === id);
+    const name = check?.combination;
+    if (!check || !name) continue;
+    const limit = checkLimit(check, s.units.deflection, which);
+    const existing = [...choices, ...cases].find((c) => c.series.name === name);
+    if (existing) {
+      existing.limit ??= limit;
+      continue;
+    }
+    const series = seriesFromCases(s, name);
+    if (series)
+      choices.push({
+        key: `service:${name}`,
+        label: `${name} (service, ${which} deflection)`,
+        kind: 'service',
+        series,
+        limit,
+      });
+  }
+  return [...choices, ...cases];
 }
 
 /** The default series: the combination that governs bending, else the first. */
@@ -36,27 +105,22 @@ export function defaultSeriesKey(result: DesignResult): string {
   return (governing ?? choices[0])?.key ?? '';
 }
 
+/** The series a deflection check's limit belongs to (the total-load check first). */
+export function limitSeriesKey(choices: readonly SeriesChoice[]): string | null {
+  return (
+    choices.find((c) => c.limit?.which === 'total-load')?.key ?? choices.find((c) => c.limit)?.key ?? null
+  );
+}
+
 export interface ChartRow {
   x: number;
   M: number;
   V: number;
   d: number;
-  /** The deflection limit, the same at every station (drawn as a dashed line). */
-  limit?: number;
 }
 
-export function chartRows(
-  x: readonly number[],
-  series: StationSeries,
-  limit: number | null = null,
-): ChartRow[] {
-  return x.map((xi, i) => ({
-    x: xi,
-    M: series.M[i],
-    V: series.V[i],
-    d: series.deflection[i],
-    ...(limit !== null ? { limit } : {}),
-  }));
+export function chartRows(x: readonly number[], series: StationSeries): ChartRow[] {
+  return x.map((xi, i) => ({ x: xi, M: series.M[i], V: series.V[i], d: series.deflection[i] }));
 }
 
 /** The deflection limit (span = 2 × length) in the chart's deflection unit. */
@@ -67,7 +131,8 @@ export function deflectionLimit(result: DesignResult, ratio: number): Quantity |
   return { value: (2 * convert(length, s.units.x, s.units.deflection)) / ratio, unit: s.units.deflection };
 }
 
-function peak(values: readonly number[], x: readonly number[]): { value: number; at: number } {
+/** The station with the largest magnitude: its value (signed) and its x. */
+export function peak(values: readonly number[], x: readonly number[]): { value: number; at: number } {
   let best = 0;
   for (let i = 1; i < values.length; i += 1) if (Math.abs(values[i]) > Math.abs(values[best])) best = i;
   return { value: values[best] ?? 0, at: x[best] ?? 0 };
