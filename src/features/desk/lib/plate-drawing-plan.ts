@@ -7,7 +7,7 @@ import type { PlateLayout, Rect } from '../../../../shared/engine/connection/pla
 import type { UnitSystem } from '../../../../shared/engine/units';
 import { chain, type Station } from './plate-drawing-dims';
 import { FONT, lengthText, textWidth, washerText } from './plate-drawing-format';
-import { rodChecks, segmentFor, type RodRoles } from './plate-drawing-rules';
+import { plateOverhang, rodChecks, segmentFor, type RodRoles } from './plate-drawing-rules';
 import type { Box, Callout, Dimension, DrawingView, Label, Shape } from './plate-drawing-types';
 
 export const PLAN_WIDTH = 620;
@@ -313,12 +313,13 @@ export function planView(p: PlanInput): DrawingView {
       'muted',
     ),
   );
-  const seen = new Set<string>();
-  for (const d of dims) {
-    if (!d.problem || seen.has(d.problem)) continue;
-    seen.add(d.problem);
+  const problems = [
+    ...plateOverhang(L, p.units),
+    ...dims.filter((d) => d.problem).map((d) => `${d.what}: ${d.problem}`),
+  ];
+  for (const words of new Set(problems)) {
     y += LINE;
-    notes.push(note(`⚠ ${d.what}: ${d.problem}`, 4, y, 'warn'));
+    notes.push(note(`⚠ ${words}`, 4, y, 'warn'));
   }
   return {
     id: face ? 'face' : 'plan',

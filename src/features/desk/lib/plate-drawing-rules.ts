@@ -111,3 +111,17 @@ export function rodChecks(L: PlateLayout, pierMin: number): RodCheck[] {
     return { problems };
   });
 }
+
+/** The plate must sit on the pier (plate.geometry): words for each direction it overhangs. */
+export function plateOverhang(L: PlateLayout, units: UnitSystem): string[] {
+  const out: string[] = [];
+  if (L.plate.N > L.pier.length + EPS)
+    out.push(
+      `Plate N ${lengthText(L.plate.N, units)} > pier ${lengthText(L.pier.length, units)}: the plate overhangs the pier`,
+    );
+  if (L.plate.B > L.pier.width + EPS)
+    out.push(
+      `Plate B ${lengthText(L.plate.B, units)} > pier ${lengthText(L.pier.width, units)}: the plate overhangs the pier`,
+    );
+  return out;
+}

@@ -15,7 +15,7 @@ import { connectionSchema } from '../../../../shared/schemas/connection';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { lengthText, washerText } from './plate-drawing-format';
 import { planView } from './plate-drawing-plan';
-import { pierEdgeMinimum, rodChecks, type RodRoles } from './plate-drawing-rules';
+import { pierEdgeMinimum, plateOverhang, rodChecks, type RodRoles } from './plate-drawing-rules';
 import { sectionView } from './plate-drawing-section';
 import type { DrawingView, ShapeRole, Tone } from './plate-drawing-types';
 
@@ -137,6 +137,7 @@ export function plateDrawing(
       tone: 'muted',
     });
   const problems = [
+    ...plateOverhang(L, units),
     ...new Set(
       [...plan.dims, ...section.dims].filter((d) => d.problem).map((d) => `${d.what}: ${d.problem}`),
     ),
@@ -168,8 +169,8 @@ export function plateDrawing(
     `Plate N ${len(L.plate.N)} by B ${len(L.plate.B)}, ${len(L.plate.thickness)} thick; pier ${len(L.pier.length)} by ${len(L.pier.width)}; ` +
     `${rodRow.text}, offset f ${len(geo.f)} from the plate centre${geo.perSide > 1 ? `, gauge ${len(geo.g)}` : ''}, embedment hef ${len(geo.hef)}; ` +
     `rod to plate edge ${len(e.rodToPlateAlongN)} along N and ${len(e.rodToPlateAlongB)} along B; rod to pier edge ${len(e.rodToPierAlongN)} along N and ${len(e.rodToPierAlongB)} along B. ` +
-    (offending
-      ? `${offending} of ${L.rods.length} rods are marked: ${problems.join('; ')}.`
+    (problems.length
+      ? `Marked in red (${offending} of ${L.rods.length} rods): ${problems.join('; ')}.`
       : 'Every rod is on the pier and clear of the edges.');
   return { arrangement: L.arrangement, title, desc, views: [plan, section], legend, rows, problems };
 }
