@@ -10,7 +10,7 @@ import { rootOutline } from '../../../../shared/engine/connection/root-outline';
 import { lookupWith } from '../../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { DesignResult } from '../../../../shared/engine/types';
-import { convert, toInternal, type Quantity, type UnitSystem } from '../../../../shared/engine/units';
+import { formatQuantity, toInternal, type Quantity, type UnitSystem } from '../../../../shared/engine/units';
 import { connectionSchema } from '../../../../shared/schemas/connection';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { lengthText, washerText } from './plate-drawing-format';
@@ -129,11 +129,12 @@ export function plateDrawing(
     },
   );
   const Y = result?.connection?.bearingLength as Quantity | undefined;
+  // Y is a result, not a cut length: written as the desk writes results (3 significant figures).
   if (Y)
     rows.push({
       id: 'bearing',
       what: `Bearing length Y from the compression edge (${result?.connection?.combination})`,
-      text: len(convert(Y.value, Y.unit, 'in')),
+      text: formatQuantity(Y),
       tone: 'muted',
     });
   const problems = [
