@@ -243,3 +243,40 @@ describe('lengthText', () => {
     expect(lengthText(0.25, 'SI')).toBe('6.4 mm');
   });
 });
+
+describe('hole and washer sizes on the sketch, against AISC Design Guide 1 (2nd ed.) Table 2.3', () => {
+  // Source: AISC DG1 2nd ed. Table 2.3 as /work/shared/REFERENCES.md lists it [pub]; the same values
+  // from memory of the table (no copy of it was at hand). Rod, hole, washer side x thickness, in.
+  const TABLE_2_3: [string, string, string][] = [
+    ['3/4 in', '1-5/16 in', '2 x 2 x 1/4 in'],
+    ['7/8 in', '1-9/16 in', '2-1/2 x 2-1/2 x 5/16 in'],
+    ['1 in', '1-13/16 in', '3 x 3 x 3/8 in'],
+    ['1-1/4 in', '2-1/16 in', '3 x 3 x 1/2 in'],
+    ['1-1/2 in', '2-5/16 in', '3-1/2 x 3-1/2 x 1/2 in'],
+    ['1-3/4 in', '2-3/4 in', '4 x 4 x 5/8 in'],
+    ['2 in', '3-1/4 in', '5 x 5 x 3/4 in'],
+  ];
+  it.each(TABLE_2_3)('a %s rod: hole %s, plate washer %s', (rod, hole, washer) => {
+    const doc = withConnection((c) => ({
+      ...c,
+      plate: { ...c.plate, N: '30 in', B: '24 in' },
+      anchors: { ...c.anchors, diameter: rod, offset: '10 in', gauge: '12 in' },
+      pier: { length: '48 in', width: '40 in' },
+    }));
+    const d = plateDrawing(doc, null)!;
+    expect(d.rows.find((r) => r.id === 'holes')?.text).toBe(hole);
+    expect(d.rows.find((r) => r.id === 'washers')?.text).toBe(washer);
+    expect(d.views[0].callouts[0].labels.map((l) => l.text)).toContain(`holes ${hole} (DG1 Table 2.3)`);
+  });
+
+  it('says so when the rod size is not in the table (1-1/8 in)', () => {
+    const d = plateDrawing(
+      withConnection((c) => ({ ...c, anchors: { ...c.anchors, diameter: '1-1/8 in' } })),
+      null,
+    )!;
+    expect(d.rows.find((r) => r.id === 'holes')).toMatchObject({
+      text: 'rod size not in the table',
+      tone: 'warn',
+    });
+  });
+});
