@@ -135,6 +135,20 @@ describe('plate sketch', () => {
     expect((await measure()).onPlate).toEqual([]);
     await assertAccessible(page, 'plate sketch (10 in pier)', PANEL);
     await panel.screenshot({ path: 'tests/output/screens/plate-sketch-1440-narrow-pier.png' });
+    // On paper: black on white, the red marks black (their words stay).
+    await page.emulateMedia({ media: 'print' });
+    const paints = await page.evaluate((sel) => {
+      const svg = document.querySelector(`${sel} svg.plate-sketch-svg`)!;
+      const style = (q: string) => getComputedStyle(svg.querySelector(q)!);
+      const warn = [...svg.querySelectorAll('text')].find((t) => t.textContent?.startsWith('⚠'))!;
+      return {
+        plate: style('[data-role="plate"]').fill,
+        ring: style('[data-role="warn-ring"]').stroke,
+        warn: getComputedStyle(warn).fill,
+      };
+    }, PANEL);
+    expect(paints).toEqual({ plate: 'rgb(255, 255, 255)', ring: 'rgb(0, 0, 0)', warn: 'rgb(0, 0, 0)' });
+    await page.emulateMedia({ media: 'screen' });
     await length.fill(oldLength);
     await width.fill(oldWidth);
     await settled();

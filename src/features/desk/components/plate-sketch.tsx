@@ -5,7 +5,8 @@ import { plateDrawing } from '../lib/plate-drawing';
 import { DimensionTable } from './plate-sketch/dimension-table';
 import { DrawingViewG } from './plate-sketch/drawing-view';
 import { SketchLegend } from './plate-sketch/sketch-legend';
-import { INK, PRINT_CSS } from './plate-sketch/sketch-style';
+import { INK } from './plate-sketch/sketch-style';
+import './plate-sketch/plate-sketch-print.css';
 import { useWide } from './plate-sketch/use-wide';
 
 /** Below this width the section goes under the plan instead of beside it. */
@@ -58,7 +59,6 @@ export const PlateSketch = memo(function PlateSketch({
       >
         <title id={`${id}-title`}>{drawing.title}</title>
         <desc id={`${id}-desc`}>{drawing.desc}</desc>
-        <style>{PRINT_CSS}</style>
         <defs>
           <marker
             id={ids.arrow}

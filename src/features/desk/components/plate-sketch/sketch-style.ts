@@ -1,6 +1,6 @@
 /**
- * Colours of the shop sketch on screen, and the print sheet that turns it black on white. The
- * print rules are CSS, so they win over the SVG presentation attributes used on screen.
+ * Colours of the shop sketch on screen, as SVG presentation attributes, so that the print sheet
+ * (plate-sketch-print.css) wins over them.
  */
 import type { ShapeRole, Tone } from '../../lib/plate-drawing-types';
 
@@ -45,18 +45,3 @@ export function paint(role: ShapeRole, hatch: string, grout: string): Paint {
       return { fill: 'none', stroke: INK, strokeWidth: 1 };
   }
 }
-
-/** Black on white on paper: outlines black, fills white or grey hatch, red marks black and dashed. */
-export const PRINT_CSS = `@media print {
-  .plate-sketch-svg [data-role] { stroke: #000; }
-  .plate-sketch-svg [data-role='pier'], .plate-sketch-svg [data-role='plate'], .plate-sketch-svg [data-role='steel'],
-  .plate-sketch-svg [data-role='steel-void'], .plate-sketch-svg [data-role='washer'], .plate-sketch-svg [data-role='hole'],
-  .plate-sketch-svg [data-role='rod-compression'] { fill: #fff; }
-  .plate-sketch-svg [data-role='rod-tension'], .plate-sketch-svg [data-role='rod'], .plate-sketch-svg [data-role='rod-side'],
-  .plate-sketch-svg [data-role='nut'], .plate-sketch-svg [data-role='head'] { fill: #000; }
-  .plate-sketch-svg [data-role='warn-ring'] { stroke-dasharray: 3 2; }
-  .plate-sketch-svg text { fill: #000; }
-  .plate-sketch-svg .ink { stroke: #000; }
-  .plate-sketch-svg .hatch-line { stroke: #000; }
-  .plate-sketch { break-inside: avoid; width: 100%; }
-}`;
