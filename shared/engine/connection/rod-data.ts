@@ -26,7 +26,14 @@ export interface RodSize {
   threadsPerInch: number;
 }
 
-/** DG1 Table 2.3 rows (the rod sizes Reachline accepts). */
+/**
+ * DG1 Table 2.3 rows (the rod sizes Reachline accepts): hole, and minimum plate washer side and
+ * thickness, as /work/shared/REFERENCES.md lists them from the published table (AISC Design Guide 1,
+ * 2nd ed., Table 2.3); the values were also checked against memory of that table, not against a copy
+ * of it. The table's 2-1/2 in row (hole 3-3/4 in, washer 5-1/2 x 7/8 in, from memory) is left out on
+ * purpose: adding it would change which rod sizes the checks accept. The shop sketch writes these
+ * sizes beside every rod.
+ */
 export const ROD_SIZES: readonly RodSize[] = [
   { diameter: 0.75, hole: 1 + 5 / 16, washerSize: 2, washerThickness: 0.25, threadsPerInch: 10 },
   { diameter: 0.875, hole: 1 + 9 / 16, washerSize: 2.5, washerThickness: 5 / 16, threadsPerInch: 9 },
