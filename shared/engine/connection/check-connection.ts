@@ -80,14 +80,16 @@ interface DemandFree {
 }
 
 // A reach study or a lightest-sections ranking checks one connection under thousands of demands:
-// what does not depend on the demand is computed once per connection text, root section, method,
-// units and shape lookup (keyed by the input's JSON, so a document changed in place is never stale).
+// what does not depend on the demand is computed once per connection, root section, method, units
+// and shape lookup. The key holds every input readGeometry reads (by value, so a document changed
+// in place is never stale); post and weld are checked per demand and are not part of it.
 const demandFreeCache = new WeakMap<ShapeLookup, Map<string, DemandFree>>();
 const CACHE_LIMIT = 500;
 
 function demandFree(input: ConnectionInput, root: RootFootprint, ctx: ConnectionContext): DemandFree {
   const { units, method } = ctx;
-  const key = `${method}|${units}|${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}|${JSON.stringify(input)}`;
+  const { plate: p, anchors: a, concrete: c, pier } = input;
+  const key = `${method}|${units}|${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}|${input.arrangement}|${input.footprint?.shape}|${p.N}|${p.B}|${p.thickness}|${p.Fy}|${a.perSide}|${a.diameter}|${a.grade}|${a.offset}|${a.gauge}|${a.embedment}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc}|${c.cracked}|${c.lambda}|${pier.length}|${pier.width}|${pier.depth}`;
   let byKey = demandFreeCache.get(ctx.shapes);
   const hit = byKey?.get(key);
   if (hit) return hit;
