@@ -76,8 +76,8 @@ export function analyseMember(
   const grid = buildGrid(L, intervals, points);
   const { x, mid } = grid;
   const props: SectionProps[] = x.map((xi) => section.at(xi / L));
-  // Room for EI, every case's six arrays and about twenty combinations without a second block.
-  const arena = new Arena(x.length * (2 + 6 * caseLoads.length + 40));
+  // Room for EI, every case's six arrays and eight combinations; more take a second block.
+  const arena = new Arena(x.length * (2 + 6 * caseLoads.length + 16));
   const EInode = arena.take(x.length);
   const EImid = arena.take(mid.length);
   for (let i = 0; i < x.length; i++) EInode[i] = E * props[i].Ix;

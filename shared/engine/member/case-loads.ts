@@ -66,8 +66,10 @@ export function gatherCaseLoads(
     const P = toInternal(p.value, 'force');
     if (P !== 0) entryOf(byCase, p.case).points.push({ P, a: toInternal(p.at, 'length') });
   }
-  return LOAD_CASES.flatMap((c) => {
+  const present: CaseLoads[] = [];
+  for (const c of LOAD_CASES) {
     const entry = byCase.get(c);
-    return entry ? [entry] : [];
-  });
+    if (entry) present.push(entry);
+  }
+  return present;
 }
