@@ -12,7 +12,7 @@ import { availableBearingStress, confinementFactor } from './bearing';
 import { governing, notComputed, toCheck, type CheckSpec, type Evaluation } from './check-row';
 import { analyseCombination } from './combo-state';
 import { readGeometry, type ConnectionGeometry } from './connection-geometry';
-import type { Footprint } from './footprint';
+import { resolveFootprint, type Footprint } from './footprint';
 import { buildConnectionResult } from './connection-result';
 import { ANCHOR_LAYOUT, evaluateAnchorLayout } from './check-anchor-layout';
 import { ANCHOR_SHEAR, evaluateAnchorShear, rodShearCapacity } from './check-anchor-shear';
@@ -80,41 +80,69 @@ interface DemandFree {
 }
 
 // A reach study or a lightest-sections ranking checks one connection under thousands of demands:
-// what does not depend on the demand is computed once per connection, root section, method, units
-// and shape lookup. The key holds every input readGeometry reads (by value, so a document changed
-// in place is never stale); post and weld are checked per demand and are not part of it.
-const demandFreeCache = new WeakMap<ShapeLookup, Map<string, DemandFree>>();
+// what does not depend on the demand is computed once. The capacities depend on the connection,
+// the method and the units only; the footprint, the geometry rows and whether the layout can be
+// built also on the member's root section (one entry per root below the connection's). Keys hold
+// every input readGeometry reads (by value, so a document changed in place is never stale); post
+// and weld are checked per demand and are not part of them.
+interface ConnectionEntry {
+  geo: ConnectionGeometry;
+  capacities: Pick<
+    DemandFree,
+    'sqrtA2A1' | 'fpMax' | 'steel' | 'breakout' | 'pullout' | 'blowout' | 'rodShear'
+  >;
+  byRoot: Map<string, DemandFree>;
+}
+const demandFreeCache = new WeakMap<ShapeLookup, Map<string, ConnectionEntry>>();
 const CACHE_LIMIT = 500;
 
 function demandFree(input: ConnectionInput, root: RootFootprint, ctx: ConnectionContext): DemandFree {
   const { units, method } = ctx;
   const { plate: p, anchors: a, concrete: c, pier } = input;
-  const key = `${method}|${units}|${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}|${input.arrangement}|${input.footprint?.shape}|${p.N}|${p.B}|${p.thickness}|${p.Fy}|${a.perSide}|${a.diameter}|${a.grade}|${a.offset}|${a.gauge}|${a.embedment}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc}|${c.cracked}|${c.lambda}|${pier.length}|${pier.width}|${pier.depth}`;
+  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N}|${p.B}|${p.thickness}|${p.Fy}|${a.perSide}|${a.diameter}|${a.grade}|${a.offset}|${a.gauge}|${a.embedment}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc}|${c.cracked}|${c.lambda}|${pier.length}|${pier.width}|${pier.depth}`;
+  const rootKey = `${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}`;
   let byKey = demandFreeCache.get(ctx.shapes);
-  const hit = byKey?.get(key);
+  if (!byKey) {
+    byKey = new Map();
+    demandFreeCache.set(ctx.shapes, byKey);
+  }
+  let entry = byKey.get(key);
+  if (!entry) {
+    const geo = readGeometry(input, root, ctx.shapes);
+    const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
+    entry = {
+      geo,
+      capacities: {
+        sqrtA2A1,
+        fpMax: availableBearingStress(geo.fc, sqrtA2A1, method),
+        steel: steelTensionCapacity(geo, method),
+        breakout: breakoutCapacity(geo, method, units),
+        pullout: pulloutCapacity(geo, method),
+        blowout: blowoutCapacity(geo, method),
+        rodShear: rodShearCapacity(geo, method),
+      },
+      byRoot: new Map(),
+    };
+    if (byKey.size >= CACHE_LIMIT) byKey.clear();
+    byKey.set(key, entry);
+  }
+  const hit = entry.byRoot.get(rootKey);
   if (hit) return hit;
-  const geo = readGeometry(input, root, ctx.shapes);
-  const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
+  // readGeometry reads the root only for the footprint.
+  const geo: ConnectionGeometry = {
+    ...entry.geo,
+    footprint: resolveFootprint(input.footprint?.shape, root, ctx.shapes),
+  };
   const fixed: DemandFree = {
     geo,
     footprint: geo.footprint.ok ? geo.footprint.footprint : null,
     plateGeometry: toCheck(PLATE_GEOMETRY, null, evaluatePlateGeometry(geo, units), units),
     anchorLayout: toCheck(ANCHOR_LAYOUT, null, evaluateAnchorLayout(geo, units), units),
     impossible: impossibleLayout(geo),
-    sqrtA2A1,
-    fpMax: availableBearingStress(geo.fc, sqrtA2A1, method),
-    steel: steelTensionCapacity(geo, method),
-    breakout: breakoutCapacity(geo, method, units),
-    pullout: pulloutCapacity(geo, method),
-    blowout: blowoutCapacity(geo, method),
-    rodShear: rodShearCapacity(geo, method),
+    ...entry.capacities,
   };
-  if (!byKey) {
-    byKey = new Map();
-    demandFreeCache.set(ctx.shapes, byKey);
-  }
-  if (byKey.size >= CACHE_LIMIT) byKey.clear();
-  byKey.set(key, fixed);
+  if (entry.byRoot.size >= CACHE_LIMIT) entry.byRoot.clear();
+  entry.byRoot.set(rootKey, fixed);
   return fixed;
 }
 
