@@ -103,14 +103,15 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     flexible && input.connection ? rootStiffness(input.connection, rootFootprint(section), shapes, E) : null;
   const root = spring?.ok ? spring : undefined;
   const frequency = firstFrequency(model, massLoads(caseLoads, section, L, input.loads.selfWeight), root);
-  const memberTip = Object.fromEntries(model.cases.map((c) => [c.case, c.response.tip]));
+  const memberTip: Partial<Record<LoadCase, number>> = {};
   const rotationByCase: Partial<Record<LoadCase, number>> = {};
+  const tipByCase: Partial<Record<LoadCase, number>> = {};
   for (const c of model.cases) {
-    rotationByCase[c.case] = root ? (c.response.M[0] + c.response.V[0] * root.offset) * root.flexibility : 0;
+    const rotation = root ? (c.response.M[0] + c.response.V[0] * root.offset) * root.flexibility : 0;
+    memberTip[c.case] = c.response.tip;
+    rotationByCase[c.case] = rotation;
+    tipByCase[c.case] = c.response.tip + rotation * L;
   }
-  const tipByCase = Object.fromEntries(
-    model.cases.map((c) => [c.case, c.response.tip + (rotationByCase[c.case] ?? 0) * L]),
-  );
   const service = serviceCombinations(present);
   const deflection = deflectionChecks({ tipByCase, service, L, limits: input.deflectionLimits, units });
   const fMin = input.frequencyMin ? toInternal(input.frequencyMin, 'frequency') : undefined;
@@ -141,12 +142,8 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       }
       parts.connection = parts.rotation * L;
     }
-    for (const row of deflection) {
-      row.note = `${row.note ?? ''}; includes the root's rotation with the connection (flexibleRoot)`.replace(
-        /^; /,
-        '',
-      );
-    }
+    const rotationNote = "includes the root's rotation with the connection (flexibleRoot)";
+    for (const row of deflection) row.note = row.note ? `${row.note}; ${rotationNote}` : rotationNote;
   }
 
   let connection: DesignResult['connection'] = null;
@@ -208,16 +205,15 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
       cases: caseSummaries(model, units),
       combinations: combinationSummaries(combos, units),
       frequency: quantity(frequency, 'frequency', units),
+      // Camber for the full dead load, root rotation included, and none for live load (common
+      // practice, no source): the tip then sits level under dead load and moves down only under live load.
+      recommendedCamber: {
+        ...quantity(Math.max(0, tipByCase.D ?? 0), 'smallLength', units),
+        basis: 'the tip deflection under the dead load (100 % D, 0 % L; common practice, no source)',
+      },
     },
     connection,
     checks,
-  };
-  // Camber for the full dead load, root rotation included, and none for live load (common practice,
-  // no source): the tip then sits level under dead load and moves down only under live load.
-  const deadTip = tipByCase.D ?? 0;
-  result.member.recommendedCamber = {
-    ...quantity(Math.max(0, deadTip), 'smallLength', units),
-    basis: 'the tip deflection under the dead load (100 % D, 0 % L; common practice, no source)',
   };
   if (parts) {
     result.member.tipDeflectionParts = {

@@ -24,6 +24,12 @@ function allFinite(value: unknown): boolean {
     return true;
   }
   const record = value as Record<string, unknown>;
-  for (const key in record) if (!allFinite(record[key])) return false;
+  // Numbers and strings are tested here, without a call each (a result holds hundreds of them).
+  for (const key in record) {
+    const v = record[key];
+    if (typeof v === 'number') {
+      if (!Number.isFinite(v)) return false;
+    } else if (v !== null && typeof v === 'object' && !allFinite(v)) return false;
+  }
   return true;
 }

@@ -40,18 +40,25 @@ export function cellDocument(
     const length = `${values.length} ${axisUnit('length', units)}`;
     const oldL = toInternal(base.member.length, 'length');
     const newL = toInternal(length, 'length');
-    const atTip = (at: string) => Math.abs(toInternal(at, 'length') - oldL) <= oldL * 1e-6;
     let unbracedLength = member.unbracedLength;
     if (
       unbracedLength !== undefined &&
-      (atTip(unbracedLength) || toInternal(unbracedLength, 'length') > newL)
+      (atTip(unbracedLength, oldL) || toInternal(unbracedLength, 'length') > newL)
     )
       unbracedLength = length;
     member = { ...member, length, unbracedLength };
-    if (loads.point.some((p) => atTip(p.at)))
-      loads = { ...loads, point: loads.point.map((p) => (atTip(p.at) ? { ...p, at: length } : p)) };
+    if (loads.point.some((p) => atTip(p.at, oldL)))
+      loads = {
+        ...loads,
+        point: loads.point.map((p) => (atTip(p.at, oldL) ? { ...p, at: length } : p)),
+      };
   }
   return member === base.member && loads === base.loads ? base : { ...base, member, loads };
+}
+
+/** A position at the tip of a member of length L (in), within a millionth of L. */
+function atTip(at: string, L: number): boolean {
+  return Math.abs(toInternal(at, 'length') - L) <= L * 1e-6;
 }
 
 function withShape(base: DesignInput, label: string, shapes: ShapeLookup): Section {

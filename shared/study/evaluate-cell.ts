@@ -6,7 +6,7 @@
  */
 import { evaluateDesign } from '../engine/design';
 import type { ShapeLookup } from '../engine/shapes/types';
-import { DesignInputError, type DesignResult } from '../engine/types';
+import { DesignInputError, type Check, type DesignResult } from '../engine/types';
 import type { Quantity } from '../engine/units';
 import type { DesignInput } from '../schemas/design';
 import type { FieldIssue } from '../schemas/quantity';
@@ -53,16 +53,18 @@ export function evaluateCell(input: DesignInput, shapes: ShapeLookup): CellOutco
 
 /** The map's numbers from a result document (display units of the result). */
 export function summariseResult(result: DesignResult): CellOutcome {
-  const worst = sortWorstFirst(result.checks);
-  const failing = worst.filter((c) => !passes(c));
-  const governing = worst[0];
+  // Worst first (sortWorstFirst) without sorting every row: a failing row always sorts before a
+  // passing one, so only the failing rows need ordering, and with none the worst is the first row
+  // with the highest ratio.
+  const failing = sortWorstFirst(result.checks.filter((c) => !passes(c)));
+  const governing = failing.length > 0 ? failing[0] : highestRatio(result.checks);
   const deflection = result.checks.find((c) => c.id === 'member.deflection.total');
   let rootMoment = result.member.combinations[0]?.rootMoment ?? { value: 0, unit: '' };
   for (const c of result.member.combinations)
     if (c.rootMoment.value > rootMoment.value) rootMoment = c.rootMoment;
   return {
     kind: 'result',
-    ok: result.ok && failing.length === 0 && worst.length > 0,
+    ok: result.ok && failing.length === 0 && result.checks.length > 0,
     governing: governing
       ? { id: governing.id, title: governing.title, ratio: governing.ratio }
       : { id: '(none)', title: 'no check', ratio: null },
@@ -74,4 +76,11 @@ export function summariseResult(result: DesignResult): CellOutcome {
     rodTension: result.connection?.anchorTensionPerRod ?? null,
     plateThickness: result.connection?.requiredThickness ?? null,
   };
+}
+
+/** The first row with the highest ratio (rows that all pass: their ratios are finite). */
+export function highestRatio(checks: readonly Check[]): Check | undefined {
+  let best: Check | undefined;
+  for (const c of checks) if (!best || (c.ratio ?? 0) > (best.ratio ?? 0)) best = c;
+  return best;
 }

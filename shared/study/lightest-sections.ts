@@ -18,6 +18,7 @@ import { designSchema } from '../schemas/design';
 import { toFieldIssues, type FieldIssue } from '../schemas/quantity';
 import { passes, sortWorstFirst } from '../words/check-words';
 import { shapesByWeight } from './axes';
+import { highestRatio } from './evaluate-cell';
 
 export const FAMILIES: readonly ShapeFamily[] = ['W', 'HSS', 'PIPE', 'C'];
 
@@ -73,7 +74,7 @@ export function rankSections(base: DesignInput, options: LightestOptions = {}): 
         ? shallowestTip(base, shape, lookup)
         : tryShape(base, shape.label, undefined, lookup);
     if (outcome.kind === 'result' && outcome.pass) {
-      const g = sortWorstFirst(outcome.result.checks)[0];
+      const g = highestRatio(outcome.result.checks)!; // every row passes
       passing.push({
         shape: shape.label,
         steelWeight: outcome.result.member.steelWeight,
@@ -86,7 +87,7 @@ export function rankSections(base: DesignInput, options: LightestOptions = {}): 
       failing.push({
         shape: shape.label,
         steelWeight: outcome.result.member.steelWeight,
-        failedBy: sortWorstFirst(outcome.result.checks).find((c) => !passes(c))?.id ?? '(none)',
+        failedBy: sortWorstFirst(outcome.result.checks.filter((c) => !passes(c)))[0]?.id ?? '(none)',
       });
     } else {
       const L = toInternal(base.member.length, 'length');

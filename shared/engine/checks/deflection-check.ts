@@ -44,51 +44,55 @@ function servicePartsOf(service: readonly Combination[]): ServicePart[] {
   return hit;
 }
 
+/** The tip deflection of a combination: the sum of factor x case tip, in the factors' own order. */
+function tipOf(factors: Combination['factors'], tipByCase: DeflectionInputs['tipByCase']): number {
+  let y = 0;
+  for (const c in factors) y += (factors[c as LoadCase] as number) * (tipByCase[c as LoadCase] ?? 0);
+  return y;
+}
+
 export function deflectionChecks(d: DeflectionInputs): Check[] {
-  const tip = (factors: Combination['factors']) => {
-    let y = 0;
-    for (const [c, f] of Object.entries(factors) as [LoadCase, number][]) y += f * (d.tipByCase[c] ?? 0);
-    return y;
-  };
-  const span = 2 * d.L;
   let total = { y: 0, name: null as string | null };
   let live = { y: 0, name: null as string | null };
   for (const c of servicePartsOf(d.service)) {
-    const yt = tip(c.factors);
+    const yt = tipOf(c.factors, d.tipByCase);
     if (clearlyGreater(yt, total.y) || total.name === null) total = { y: yt, name: c.name };
     if (!c.variableName) continue;
-    const yl = tip(c.variable);
+    const yl = tipOf(c.variable, d.tipByCase);
     if (clearlyGreater(yl, live.y) || live.name === null) live = { y: yl, name: c.variableName };
   }
-  const row = (
-    id: string,
-    title: string,
-    ratio: number,
-    y: { y: number; name: string | null },
-    what: string,
-  ): Check => {
-    const limit = span / ratio;
-    const r = y.y / limit;
-    return {
-      id,
-      title,
-      reference: 'IBC Table 1604.3 (cantilever: span = 2 x length)',
-      combination: y.name,
-      demand: quantity(y.y, 'smallLength', d.units),
-      capacity: quantity(limit, 'smallLength', d.units),
-      ratio: r,
-      ok: r <= 1,
-      note: y.name === null ? `no ${what} load in this design` : `limit = 2 x length / ${ratio}`,
-    };
-  };
   return [
     row(
+      d,
       'member.deflection.live',
       'Tip deflection under live load',
       d.limits.live,
       live,
       'live, roof live or snow',
     ),
-    row('member.deflection.total', 'Tip deflection under total load', d.limits.total, total, 'service'),
+    row(d, 'member.deflection.total', 'Tip deflection under total load', d.limits.total, total, 'service'),
   ];
+}
+
+function row(
+  d: DeflectionInputs,
+  id: string,
+  title: string,
+  ratio: number,
+  y: { y: number; name: string | null },
+  what: string,
+): Check {
+  const limit = (2 * d.L) / ratio;
+  const r = y.y / limit;
+  return {
+    id,
+    title,
+    reference: 'IBC Table 1604.3 (cantilever: span = 2 x length)',
+    combination: y.name,
+    demand: quantity(y.y, 'smallLength', d.units),
+    capacity: quantity(limit, 'smallLength', d.units),
+    ratio: r,
+    ok: r <= 1,
+    note: y.name === null ? `no ${what} load in this design` : `limit = 2 x length / ${ratio}`,
+  };
 }

@@ -48,26 +48,32 @@ type StrengthsFor = (segment: Segment, Cb: number) => (node: number) => Strength
 
 function strengthFinder(ctx: CheckContext, floor: Segment | null): StrengthsFor {
   const { model, section, Fy, E } = ctx;
-  const tables = new Map<string, Strength[]>();
+  // One lookup per (Le, Cb), kept and handed out again: the same pair is asked for by every
+  // combination (numbers as Map keys, no key text to build per call).
+  const tables = new Map<number, Map<number, (node: number) => Strength>>();
   const table = (Le: number, Cb: number): ((node: number) => Strength) => {
-    const key = `${Le}|${Cb}`;
-    let t = tables.get(key);
-    if (!t) {
-      t = [];
-      tables.set(key, t);
+    let byCb = tables.get(Le);
+    if (!byCb) {
+      byCb = new Map();
+      tables.set(Le, byCb);
     }
-    const list = t;
-    let fn: ReturnType<typeof flexuralStrengthOf> | null = null;
-    return (node) => {
-      const i = section.prismatic ? 0 : node;
-      let hit = list[i];
-      if (!hit) {
-        fn ??= flexuralStrengthOf(section, { Fy, E, Lb: Le, Cb });
-        hit = fn(model.props[i]);
-        list[i] = hit;
-      }
-      return hit;
-    };
+    let lookup = byCb.get(Cb);
+    if (!lookup) {
+      const list: Strength[] = [];
+      let fn: ReturnType<typeof flexuralStrengthOf> | null = null;
+      lookup = (node) => {
+        const i = section.prismatic ? 0 : node;
+        let hit = list[i];
+        if (!hit) {
+          fn ??= flexuralStrengthOf(section, { Fy, E, Lb: Le, Cb });
+          hit = fn(model.props[i]);
+          list[i] = hit;
+        }
+        return hit;
+      };
+      byCb.set(Cb, lookup);
+    }
+    return lookup;
   };
   return (segment, Cb) => {
     const own = table(segment.Le, Cb);

@@ -67,40 +67,45 @@ export function solveBearing({ N, B, f, P, M, fpMax }: BearingInput): BearingSol
   const ratio = M / P;
   const e = P > 0 && Number.isFinite(ratio) ? ratio : null;
   const eCrit = P > 0 ? N / 2 - P / (2 * qMax) : null;
-  // One object shape for every case keeps this hot path monomorphic.
-  const out = (
-    c: BearingCase,
-    Y: number | null,
-    fp: number | null,
-    T: number | null,
-    Tother: number,
-  ): BearingSolution => ({
-    case: c,
-    Y,
-    fp,
-    T,
-    Tother,
-    e,
-    eCrit,
-    qMax,
-    demandMoment: Mr,
-    capacityMoment: cap,
-  });
-  if (P > 0 && P >= qMax * N) return out('overload', N, P / (B * N), 0, 0);
+  // One object shape for every case keeps this hot path monomorphic (solution, below).
+  const k = { e, eCrit, qMax, Mr, cap };
+  if (P > 0 && P >= qMax * N) return solution('overload', N, P / (B * N), 0, 0, k);
   if (e !== null && eCrit !== null && e <= eCrit) {
     const Y = N - 2 * e;
-    return out('small-moment', Y, P / (B * Y), 0, 0);
+    return solution('small-moment', Y, P / (B * Y), 0, 0, k);
   }
   if (Mr <= 0) {
     // A pull larger than the moment can turn: no bearing, both rows in tension (statics about the centre).
     const pull = -P;
     const T = pull / 2 + (f > 0 ? M / (2 * f) : 0);
-    return out('no-bearing', 0, 0, T, Math.max(0, pull - T));
+    return solution('no-bearing', 0, 0, T, Math.max(0, pull - T), k);
   }
   const disc = A * A - (2 * Mr) / qMax;
-  if (disc < 0) return out('no-solution', null, null, null, 0);
+  if (disc < 0) return solution('no-solution', null, null, null, 0, k);
   // Y = A - sqrt(disc), written without the cancellation of two nearly equal numbers.
   const Y = (2 * Mr) / qMax / (A + Math.sqrt(disc));
-  if (Y > N) return out('no-solution', null, null, null, 0);
-  return out('large-moment', Y, fpMax, Math.max(0, qMax * Y - P), 0);
+  if (Y > N) return solution('no-solution', null, null, null, 0, k);
+  return solution('large-moment', Y, fpMax, Math.max(0, qMax * Y - P), 0, k);
+}
+
+function solution(
+  c: BearingCase,
+  Y: number | null,
+  fp: number | null,
+  T: number | null,
+  Tother: number,
+  k: { e: number | null; eCrit: number | null; qMax: number; Mr: number; cap: number },
+): BearingSolution {
+  return {
+    case: c,
+    Y,
+    fp,
+    T,
+    Tother,
+    e: k.e,
+    eCrit: k.eCrit,
+    qMax: k.qMax,
+    demandMoment: k.Mr,
+    capacityMoment: k.cap,
+  };
 }

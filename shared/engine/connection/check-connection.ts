@@ -12,6 +12,7 @@ import { availableBearingStress, confinementFactor } from './bearing';
 import { governing, notComputed, toCheck, type CheckSpec, type Evaluation } from './check-row';
 import { analyseCombination } from './combo-state';
 import { readGeometry, type ConnectionGeometry } from './connection-geometry';
+import { resolveFootprint, type Footprint } from './footprint';
 import { buildConnectionResult } from './connection-result';
 import { ANCHOR_LAYOUT, evaluateAnchorLayout } from './check-anchor-layout';
 import { ANCHOR_SHEAR, evaluateAnchorShear, rodShearCapacity } from './check-anchor-shear';
@@ -62,6 +63,99 @@ const PER_COMBINATION: readonly CheckSpec[] = [
   INTERACTION,
 ];
 
+/** What the connection is before any force reaches it: its geometry, the two geometry rows and the capacities. */
+interface DemandFree {
+  geo: ConnectionGeometry;
+  footprint: Footprint | null;
+  plateGeometry: Check;
+  anchorLayout: Check;
+  impossible: string | null;
+  sqrtA2A1: number;
+  fpMax: number;
+  steel: ReturnType<typeof steelTensionCapacity>;
+  breakout: ReturnType<typeof breakoutCapacity>;
+  pullout: ReturnType<typeof pulloutCapacity>;
+  blowout: ReturnType<typeof blowoutCapacity>;
+  rodShear: ReturnType<typeof rodShearCapacity>;
+}
+
+// A reach study or a lightest-sections ranking checks one connection under thousands of demands:
+// what does not depend on the demand is computed once. The capacities depend on the connection,
+// the method and the units only; the footprint, the geometry rows and whether the layout can be
+// built also on the member's root section (one entry per root below the connection's). Keys hold
+// every input readGeometry reads (by value, so a document changed in place is never stale); post
+// and weld are checked per demand and are not part of them.
+interface ConnectionEntry {
+  geo: ConnectionGeometry;
+  capacities: Pick<
+    DemandFree,
+    'sqrtA2A1' | 'fpMax' | 'steel' | 'breakout' | 'pullout' | 'blowout' | 'rodShear'
+  >;
+  byRoot: Map<string, DemandFree>;
+}
+const demandFreeCache = new WeakMap<ShapeLookup, Map<string, ConnectionEntry>>();
+const CACHE_LIMIT = 500;
+
+function demandFree(input: ConnectionInput, root: RootFootprint, ctx: ConnectionContext): DemandFree {
+  const { units, method } = ctx;
+  const { plate: p, anchors: a, concrete: c, pier } = input;
+  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N}|${p.B}|${p.thickness}|${p.Fy}|${a.perSide}|${a.diameter}|${a.grade}|${a.offset}|${a.gauge}|${a.embedment}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc}|${c.cracked}|${c.lambda}|${pier.length}|${pier.width}|${pier.depth}`;
+  const rootKey = `${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}`;
+  let byKey = demandFreeCache.get(ctx.shapes);
+  if (!byKey) {
+    byKey = new Map();
+    demandFreeCache.set(ctx.shapes, byKey);
+  }
+  let entry = byKey.get(key);
+  if (!entry) {
+    const geo = readGeometry(input, root, ctx.shapes);
+    const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
+    entry = {
+      geo,
+      capacities: {
+        sqrtA2A1,
+        fpMax: availableBearingStress(geo.fc, sqrtA2A1, method),
+        steel: steelTensionCapacity(geo, method),
+        breakout: breakoutCapacity(geo, method, units),
+        pullout: pulloutCapacity(geo, method),
+        blowout: blowoutCapacity(geo, method),
+        rodShear: rodShearCapacity(geo, method),
+      },
+      byRoot: new Map(),
+    };
+    if (byKey.size >= CACHE_LIMIT) byKey.clear();
+    byKey.set(key, entry);
+  }
+  const hit = entry.byRoot.get(rootKey);
+  if (hit) return hit;
+  // readGeometry reads the root only for the footprint.
+  const geo: ConnectionGeometry = {
+    ...entry.geo,
+    footprint: resolveFootprint(input.footprint?.shape, root, ctx.shapes),
+  };
+  const fixed: DemandFree = {
+    geo,
+    footprint: geo.footprint.ok ? geo.footprint.footprint : null,
+    plateGeometry: toCheck(PLATE_GEOMETRY, null, evaluatePlateGeometry(geo, units), units),
+    anchorLayout: toCheck(ANCHOR_LAYOUT, null, evaluateAnchorLayout(geo, units), units),
+    impossible: impossibleLayout(geo),
+    ...entry.capacities,
+  };
+  if (entry.byRoot.size >= CACHE_LIMIT) entry.byRoot.clear();
+  entry.byRoot.set(rootKey, fixed);
+  return fixed;
+}
+
+/** A fresh copy of a cached row (a result's rows are its own: callers may change them). */
+function copyCheck(c: Check): Check {
+  return {
+    ...c,
+    demand: c.demand && { ...c.demand },
+    capacity: c.capacity && { ...c.capacity },
+    ...(c.at ? { at: { ...c.at } } : {}),
+  };
+}
+
 /**
  * Checks the plate and rods for each root demand (kip, kip·in). Geometry checks carry no
  * combination; every other check names the combination that governs it.
@@ -73,12 +167,9 @@ export function checkConnection(
   ctx: ConnectionContext,
 ): { result: ConnectionResult | null; checks: Check[] } {
   const { units, method } = ctx;
-  const geo = readGeometry(input, root, ctx.shapes);
-  const footprint = geo.footprint.ok ? geo.footprint.footprint : null;
-  const checks: Check[] = [
-    toCheck(PLATE_GEOMETRY, null, evaluatePlateGeometry(geo, units), units),
-    toCheck(ANCHOR_LAYOUT, null, evaluateAnchorLayout(geo, units), units),
-  ];
+  const fixed = demandFree(input, root, ctx);
+  const { geo, footprint, impossible, sqrtA2A1, fpMax, steel, breakout, pullout, blowout, rodShear } = fixed;
+  const checks: Check[] = [copyCheck(fixed.plateGeometry), copyCheck(fixed.anchorLayout)];
   if (demands.length === 0) {
     checks.push({
       id: 'connection.demand',
@@ -93,14 +184,6 @@ export function checkConnection(
     });
     return { result: null, checks };
   }
-  const impossible = impossibleLayout(geo);
-  const sqrtA2A1 = confinementFactor(geo.N, geo.B, geo.pierLength, geo.pierWidth);
-  const fpMax = availableBearingStress(geo.fc, sqrtA2A1, method);
-  const steel = steelTensionCapacity(geo, method);
-  const breakout = breakoutCapacity(geo, method, units);
-  const pullout = pulloutCapacity(geo, method);
-  const blowout = blowoutCapacity(geo, method);
-  const rodShear = rodShearCapacity(geo, method);
 
   // A post base with its own post section: the beam's support face is the post's face, so the plate
   // gets M + V x (post depth / 2) (ENGINE-CONTRACT Version 2). Without a footprint it gets M.

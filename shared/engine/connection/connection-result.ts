@@ -31,7 +31,8 @@ function plateGoverning(states: readonly ComboState[], t: number, fpMax: number)
 
 /** Removes any extra quantity that is not a finite number (a guard: the contract keys are checked by tests). */
 function dropNonFinite(result: ConnectionResult): void {
-  for (const [key, v] of Object.entries(result)) {
+  for (const key in result) {
+    const v = result[key];
     if (v && typeof v === 'object' && 'value' in v && !Number.isFinite((v as { value: unknown }).value))
       delete result[key];
   }

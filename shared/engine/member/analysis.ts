@@ -8,7 +8,7 @@ import type { MemberSection, SectionProps } from '../sections/section-types';
 import type { CaseLoads } from './case-loads';
 import type { Factors } from './combinations';
 import { buildGrid, type Grid } from './grid';
-import { integrateCurvature } from './integrate';
+import { integrateInto } from './integrate';
 import { momentAt } from './statics';
 
 /** Station arrays, internal units (kip, kip·in, rad, in). */
@@ -31,6 +31,32 @@ export interface MemberModel {
   EInode: Float64Array;
   EImid: Float64Array;
   cases: { case: LoadCase; loads: CaseLoads; response: Response }[];
+  /** Where this model's station arrays (and its combinations') are cut from. */
+  arena: Arena;
+}
+
+/**
+ * Zeroed Float64Array views cut from one block: a design needs a few dozen station arrays, and a
+ * view costs a fraction of a typed array with a backing store of its own (a study runs thousands
+ * of designs). A full block is replaced by a new one; views already handed out stay valid.
+ */
+export class Arena {
+  private block: Float64Array;
+  private used = 0;
+
+  constructor(private readonly blockSize: number) {
+    this.block = new Float64Array(blockSize);
+  }
+
+  take(n: number): Float64Array {
+    if (this.used + n > this.block.length) {
+      this.block = new Float64Array(Math.max(this.blockSize, n));
+      this.used = 0;
+    }
+    const view = this.block.subarray(this.used, this.used + n);
+    this.used += n;
+    return view;
+  }
 }
 
 /** Default number of equal intervals; point loads add nodes. Converged to far better than 0.1 %. */
@@ -50,23 +76,25 @@ export function analyseMember(
   const grid = buildGrid(L, intervals, points);
   const { x, mid } = grid;
   const props: SectionProps[] = x.map((xi) => section.at(xi / L));
-  const EInode = new Float64Array(x.length);
-  const EImid = new Float64Array(mid.length);
+  // Room for EI, every case's six arrays and eight combinations; more take a second block.
+  const arena = new Arena(x.length * (2 + 6 * caseLoads.length + 16));
+  const EInode = arena.take(x.length);
+  const EImid = arena.take(mid.length);
   for (let i = 0; i < x.length; i++) EInode[i] = E * props[i].Ix;
   for (let i = 0; i < mid.length; i++) EImid[i] = E * section.IxAt(mid[i] / L);
-  const model: MemberModel = { L, E, grid, props, EInode, EImid, cases: [] };
+  const model: MemberModel = { L, E, grid, props, EInode, EImid, cases: [], arena };
   model.cases = caseLoads.map((c) => ({ case: c.case, loads: c, response: respond(model, c) }));
   return model;
 }
 
 function respond(model: MemberModel, c: CaseLoads): Response {
-  const { L, grid, EInode, EImid } = model;
+  const { L, grid, EInode, EImid, arena } = model;
   const { x, mid } = grid;
   const n = x.length;
-  const V = new Float64Array(n);
-  const M = new Float64Array(n);
-  const kNode = new Float64Array(n);
-  const kMid = new Float64Array(n - 1);
+  const V = arena.take(n);
+  const M = arena.take(n);
+  const kNode = arena.take(n);
+  const kMid = arena.take(n - 1);
   const { q0, q1, points } = c;
   // The closed forms of statics.ts, inlined: this loop runs for every case of every design.
   for (let i = 0; i < n; i++) {
@@ -86,7 +114,9 @@ function respond(model: MemberModel, c: CaseLoads): Response {
     kNode[i] = m / EInode[i];
   }
   for (let i = 0; i < n - 1; i++) kMid[i] = momentAt(c, L, mid[i]) / EImid[i];
-  const { theta, y } = integrateCurvature(x, kNode, kMid);
+  const theta = arena.take(n);
+  const y = arena.take(n);
+  integrateInto(n, x, kNode, kMid, theta, y);
   return { V, M, theta, y, tip: y[n - 1] };
 }
 
@@ -109,10 +139,11 @@ export function momentOfCombination(model: MemberModel, factors: Factors, x: num
  */
 export function combine(model: MemberModel, factors: Factors, full: boolean): Response {
   const n = model.grid.x.length;
-  const V = new Float64Array(n);
-  const M = new Float64Array(n);
-  const theta = full ? new Float64Array(n) : EMPTY;
-  const y = full ? new Float64Array(n) : EMPTY;
+  const { arena } = model;
+  const V = arena.take(n);
+  const M = arena.take(n);
+  const theta = full ? arena.take(n) : EMPTY;
+  const y = full ? arena.take(n) : EMPTY;
   let tip = 0;
   for (const { case: c, response: r } of model.cases) {
     const f = factors[c];

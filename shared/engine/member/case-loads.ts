@@ -31,6 +31,15 @@ export function selfWeightLine(section: MemberSection, L: number): { q0: number;
   return { q0, q1 };
 }
 
+function entryOf(byCase: Map<LoadCase, CaseLoads>, c: LoadCase): CaseLoads {
+  let entry = byCase.get(c);
+  if (!entry) {
+    entry = { case: c, q0: 0, q1: 0, points: [] };
+    byCase.set(c, entry);
+  }
+  return entry;
+}
+
 /** Loads of each case present (a case is present when it carries a non-zero load). */
 export function gatherCaseLoads(
   loads: LoadsInput,
@@ -39,34 +48,28 @@ export function gatherCaseLoads(
   spacing: number,
 ): CaseLoads[] {
   const byCase = new Map<LoadCase, CaseLoads>();
-  const get = (c: LoadCase): CaseLoads => {
-    let entry = byCase.get(c);
-    if (!entry) {
-      entry = { case: c, q0: 0, q1: 0, points: [] };
-      byCase.set(c, entry);
-    }
-    return entry;
-  };
   if (loads.selfWeight) {
     const sw = selfWeightLine(section, L);
-    const d = get('D');
+    const d = entryOf(byCase, 'D');
     d.q0 += sw.q0;
     d.q1 += sw.q1;
   }
   for (const a of loads.area) {
     const v = toInternal(a.value, 'areaLoad') * spacing;
-    if (v !== 0) get(a.case).q0 += v;
+    if (v !== 0) entryOf(byCase, a.case).q0 += v;
   }
   for (const l of loads.line) {
     const v = toInternal(l.value, 'lineLoad');
-    if (v !== 0) get(l.case).q0 += v;
+    if (v !== 0) entryOf(byCase, l.case).q0 += v;
   }
   for (const p of loads.point) {
     const P = toInternal(p.value, 'force');
-    if (P !== 0) get(p.case).points.push({ P, a: toInternal(p.at, 'length') });
+    if (P !== 0) entryOf(byCase, p.case).points.push({ P, a: toInternal(p.at, 'length') });
   }
-  return LOAD_CASES.flatMap((c) => {
+  const present: CaseLoads[] = [];
+  for (const c of LOAD_CASES) {
     const entry = byCase.get(c);
-    return entry ? [entry] : [];
-  });
+    if (entry) present.push(entry);
+  }
+  return present;
 }

@@ -8,7 +8,7 @@
  */
 import type { MemberModel } from './analysis';
 import type { CaseLoads } from './case-loads';
-import { integrateCurvature } from './integrate';
+import { integrateInto } from './integrate';
 import { momentAt } from './statics';
 
 const G = 386.0886; // in/s^2, standard gravity
@@ -21,6 +21,48 @@ export interface RootSpring {
 }
 
 /**
+ * Scratch arrays, reused from design to design (a study runs thousands): grown when a grid is
+ * longer than any before. Every function below works on the first n (or n - 1) entries only.
+ */
+class Scratch {
+  size = 0;
+  wNode = new Float64Array(0);
+  wMid = new Float64Array(0);
+  pNode = new Float64Array(0);
+  kN = new Float64Array(0);
+  kM = new Float64Array(0);
+  qN = new Float64Array(0);
+  qM = new Float64Array(0);
+  pN = new Float64Array(0);
+  theta = new Float64Array(0);
+  ones: Shape = { node: new Float64Array(0), mid: new Float64Array(0) };
+  a: Shape = { node: new Float64Array(0), mid: new Float64Array(0) };
+  b: Shape = { node: new Float64Array(0), mid: new Float64Array(0) };
+
+  ensure(n: number): this {
+    if (n <= this.size) return this;
+    const size = Math.max(n, 2 * this.size);
+    const f = () => new Float64Array(size);
+    this.size = size;
+    this.wNode = f();
+    this.wMid = f();
+    this.pNode = f();
+    this.kN = f();
+    this.kM = f();
+    this.qN = f();
+    this.qM = f();
+    this.pN = f();
+    this.theta = f();
+    this.ones = { node: f().fill(1), mid: f().fill(1) };
+    this.a = { node: f(), mid: f() };
+    this.b = { node: f(), mid: f() };
+    return this;
+  }
+}
+
+const scratch = new Scratch();
+
+/**
  * Frequency in Hz of the first bending mode under the weights `mass` (kip/in and kip at points).
  * With a root spring the shapes include the rigid-body rotation of the root.
  */
@@ -28,34 +70,37 @@ export function firstFrequency(model: MemberModel, mass: CaseLoads, root?: RootS
   const { grid, EInode, EImid, L } = model;
   const { x, mid } = grid;
   const n = x.length;
-  const wNode = new Float64Array(n);
-  const wMid = new Float64Array(n - 1);
+  const s = scratch.ensure(n);
+  const { wNode, wMid, pNode, kN, kM } = s;
   for (let i = 0; i < n; i++) wNode[i] = mass.q0 + mass.q1 * x[i];
   for (let i = 0; i < n - 1; i++) wMid[i] = mass.q0 + mass.q1 * mid[i];
-  const pNode = new Float64Array(n);
-  for (const p of mass.points) pNode[nearest(x, p.a)] += p.P;
+  pNode.fill(0, 0, n);
+  let pointWeight = 0;
+  for (const p of mass.points) {
+    pNode[nearest(x, p.a)] += p.P;
+    pointWeight += p.P;
+  }
 
   // Static deflection under the weights (closed-form moments): the shape for the first estimate.
-  const kN = new Float64Array(n);
-  const kM = new Float64Array(n - 1);
   for (let i = 0; i < n; i++) kN[i] = momentAt(mass, L, x[i]) / EInode[i];
   for (let i = 0; i < n - 1; i++) kM[i] = momentAt(mass, L, mid[i]) / EImid[i];
-  const V0 = mass.q0 * L + 0.5 * mass.q1 * L * L + mass.points.reduce((s, p) => s + p.P, 0);
-  let shape = withRootRotation(deflectedShape(x, kN, kM), x, root, momentAt(mass, L, 0), V0);
-  let omega2 = G / quotient(x, wNode, wMid, pNode, ones(n), shape);
+  const V0 = mass.q0 * L + 0.5 * mass.q1 * L * L + pointWeight;
+  let shape = s.a;
+  let next = s.b;
+  deflectedShape(n, x, kN, kM, s.theta, shape);
+  withRootRotation(n, shape, x, root, momentAt(mass, L, 0), V0);
+  let omega2 = G / quotient(n, x, wNode, wMid, pNode, s.ones, shape);
   for (let k = 0; k < ITERATIONS; k++) {
-    const qN = new Float64Array(n);
-    const qM = new Float64Array(n - 1);
-    const pN = new Float64Array(n);
+    const { qN, qM, pN } = s;
     for (let i = 0; i < n; i++) {
       qN[i] = wNode[i] * shape.node[i];
       pN[i] = pNode[i] * shape.node[i];
     }
     for (let i = 0; i < n - 1; i++) qM[i] = wMid[i] * shape.mid[i];
-    const loaded = shapeUnderLoad(x, qN, qM, pN, EInode, EImid);
-    const next = withRootRotation(loaded.shape, x, root, loaded.M0, loaded.V0);
-    omega2 = G / quotient(x, wNode, wMid, pNode, shape, next);
-    shape = next;
+    const loaded = shapeUnderLoad(n, x, qN, qM, pN, EInode, EImid, s, next);
+    withRootRotation(n, next, x, root, loaded.M0, loaded.V0);
+    omega2 = G / quotient(n, x, wNode, wMid, pNode, shape, next);
+    [shape, next] = [next, shape];
   }
   return Math.sqrt(omega2) / (2 * Math.PI);
 }
@@ -67,6 +112,7 @@ interface Shape {
 
 /** int(w b b) / int(w a b): with a the last shape and b the shape it produces, omega^2 = g / this. */
 function quotient(
+  n: number,
   x: readonly number[],
   wN: Float64Array,
   wM: Float64Array,
@@ -76,7 +122,7 @@ function quotient(
 ): number {
   let ab = 0;
   let bb = 0;
-  for (let i = 0; i < x.length - 1; i++) {
+  for (let i = 0; i < n - 1; i++) {
     const h = x[i + 1] - x[i];
     ab +=
       (h / 6) *
@@ -89,7 +135,7 @@ function quotient(
         4 * wM[i] * b.mid[i] * b.mid[i] +
         wN[i + 1] * b.node[i + 1] * b.node[i + 1]);
   }
-  for (let i = 0; i < x.length; i++) {
+  for (let i = 0; i < n; i++) {
     ab += pN[i] * a.node[i] * b.node[i];
     bb += pN[i] * b.node[i] * b.node[i];
   }
@@ -98,46 +144,54 @@ function quotient(
 
 /** Adds the root's rotation theta0 = (M0 + V0 offset) x flexibility as theta0 x x to a shape. */
 function withRootRotation(
+  n: number,
   s: Shape,
   x: readonly number[],
   root: RootSpring | undefined,
   M0: number,
   V0: number,
-): Shape {
-  if (!root || root.flexibility === 0) return s;
+): void {
+  if (!root || root.flexibility === 0) return;
   const t0 = (M0 + V0 * root.offset) * root.flexibility;
-  for (let i = 0; i < x.length; i++) s.node[i] += t0 * x[i];
-  for (let i = 0; i < s.mid.length; i++) s.mid[i] += t0 * 0.5 * (x[i] + x[i + 1]);
-  return s;
+  for (let i = 0; i < n; i++) s.node[i] += t0 * x[i];
+  for (let i = 0; i < n - 1; i++) s.mid[i] += t0 * 0.5 * (x[i] + x[i + 1]);
 }
 
-function ones(n: number): Shape {
-  return { node: new Float64Array(n).fill(1), mid: new Float64Array(n - 1).fill(1) };
-}
-
-/** Deflection at nodes and midpoints from curvature (midpoint: exact for a quadratic curvature). */
-function deflectedShape(x: readonly number[], kN: Float64Array, kM: Float64Array): Shape {
-  const { theta, y } = integrateCurvature(x, kN, kM);
-  const mid = new Float64Array(x.length - 1);
-  for (let i = 0; i < mid.length; i++) {
+/**
+ * Deflection at nodes and midpoints from curvature (midpoint: exact for a quadratic curvature),
+ * into `out`; `theta` is scratch.
+ */
+function deflectedShape(
+  n: number,
+  x: readonly number[],
+  kN: Float64Array,
+  kM: Float64Array,
+  theta: Float64Array,
+  out: Shape,
+): void {
+  const y = out.node;
+  integrateInto(n, x, kN, kM, theta, y);
+  const mid = out.mid;
+  for (let i = 0; i < n - 1; i++) {
     const h = x[i + 1] - x[i];
     mid[i] = y[i] + (h / 2) * theta[i] + (h * h * (7 * kN[i] + 6 * kM[i] - kN[i + 1])) / 96;
   }
-  return { node: y, mid };
 }
 
-/** Shape under a distributed load given at nodes and midpoints plus point loads at nodes. */
+/** Shape under a distributed load given at nodes and midpoints plus point loads at nodes, into `out`. */
 function shapeUnderLoad(
+  n: number,
   x: readonly number[],
   qN: Float64Array,
   qM: Float64Array,
   pN: Float64Array,
   EIn: Float64Array,
   EIm: Float64Array,
-): { shape: Shape; M0: number; V0: number } {
-  const n = x.length;
-  const kN = new Float64Array(n);
-  const kM = new Float64Array(n - 1);
+  s: Scratch,
+  out: Shape,
+): { M0: number; V0: number } {
+  const { kN, kM } = s;
+  kN[n - 1] = 0;
   let Vb = pN[n - 1]; // shear just on the root side of node i + 1
   let Mb = 0;
   for (let i = n - 2; i >= 0; i--) {
@@ -151,7 +205,8 @@ function shapeUnderLoad(
     Vb = Va + pN[i];
     Mb = Ma;
   }
-  return { shape: deflectedShape(x, kN, kM), M0: Mb, V0: Vb };
+  deflectedShape(n, x, kN, kM, s.theta, out);
+  return { M0: Mb, V0: Vb };
 }
 
 function nearest(x: readonly number[], a: number): number {

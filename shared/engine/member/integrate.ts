@@ -21,6 +21,24 @@ export function integrateCurvature(
   const n = x.length;
   const theta = new Float64Array(n);
   const y = new Float64Array(n);
+  integrateInto(n, x, kNode, kMid, theta, y);
+  return { theta, y };
+}
+
+/**
+ * The same over the first n nodes into given arrays (scratch buffers at least n long; entries
+ * 1..n-1 are overwritten, entry 0 is set to zero).
+ */
+export function integrateInto(
+  n: number,
+  x: readonly number[],
+  kNode: ArrayLike<number>,
+  kMid: ArrayLike<number>,
+  theta: Float64Array,
+  y: Float64Array,
+): void {
+  theta[0] = 0;
+  y[0] = 0;
   for (let i = 0; i < n - 1; i++) {
     const h = x[i + 1] - x[i];
     const ka = kNode[i];
@@ -29,5 +47,4 @@ export function integrateCurvature(
     theta[i + 1] = theta[i] + (h / 6) * (ka + 4 * km + kb);
     y[i + 1] = y[i] + h * theta[i] + h * h * (ka / 6 + km / 3);
   }
-  return { theta, y };
 }

@@ -27,13 +27,10 @@ function taperedSection(
   family: 'W' | 'I',
 ): MemberSection {
   const { rootDepth, tipDepth, flangeWidth: bf, flangeThickness: tf, webThickness: tw } = plates;
-  const at = (t: number): SectionProps => {
-    const d = rootDepth + (tipDepth - rootDepth) * t;
-    return iSectionProps(d, bf, tf, tw, d - 2 * tf - 2 * plates.filletAllowance);
-  };
-  const root = at(0);
-  const tip = at(1);
+  const root = propsAt(plates, 0);
+  const tip = propsAt(plates, 1);
   const steel = DEFAULT_STEEL[family];
+  // Methods rather than arrow properties: a section is built for every design of a study.
   return {
     label: label[0],
     labelSI: label[1],
@@ -43,11 +40,28 @@ function taperedSection(
     rolled: false,
     root,
     tip,
-    at: (t) => (t <= 0 ? root : t >= 1 ? tip : at(t)),
-    IxAt: (t) => iSectionIx(rootDepth + (tipDepth - rootDepth) * t, bf, tf, tw),
+    at(t) {
+      return t <= 0 ? root : t >= 1 ? tip : propsAt(plates, t);
+    },
+    IxAt(t) {
+      return iSectionIx(rootDepth + (tipDepth - rootDepth) * t, bf, tf, tw);
+    },
     defaultFy: steel.Fy,
     defaultGrade: steel.grade,
   };
+}
+
+/** The properties at t = x / L (0 root, 1 tip) from the plates at that depth. */
+function propsAt(plates: TaperPlates, t: number): SectionProps {
+  const d = plates.rootDepth + (plates.tipDepth - plates.rootDepth) * t;
+  const tf = plates.flangeThickness;
+  return iSectionProps(
+    d,
+    plates.flangeWidth,
+    tf,
+    plates.webThickness,
+    d - 2 * tf - 2 * plates.filletAllowance,
+  );
 }
 
 /** A rolled W shape with its web cut to a linear taper from full depth at the root to tipDepth (in). */
