@@ -89,11 +89,31 @@ const ROUTES: RouteCase[] = [
 /** What a route shows: its serious axe violations and how far it scrolls sideways. */
 async function audit(page: Page, label: string, include?: string) {
   const problems = await seriousA11yProblems(page, include);
-  return problems.map((p: A11yProblem) => `${label}: ${p.impact} ${p.rule} (${p.targets.join(' | ')})`);
+  return problems.map(
+    (p: A11yProblem) => `${label}: ${p.impact} ${p.rule} x${p.count} (${p.targets.join(' | ')})`,
+  );
 }
 
 async function overflow(page: Page): Promise<number> {
   return page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+}
+
+/** The innermost elements that reach past the window's right edge, to name in a failure. */
+async function widest(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const out: string[] = [];
+    for (const el of document.querySelectorAll('body *')) {
+      const r = el.getBoundingClientRect();
+      if (r.right <= window.innerWidth + 0.5 || r.width === 0) continue;
+      const inner = [...el.children].some((c) => c.getBoundingClientRect().right > window.innerWidth + 0.5);
+      if (inner) continue;
+      out.push(
+        `${el.tagName.toLowerCase()}.${String(el.className).slice(0, 60)} right=${Math.round(r.right)}`,
+      );
+      if (out.length >= 5) break;
+    }
+    return out;
+  });
 }
 
 async function open(page: Page, path: string, ready: (page: Page) => Promise<unknown>) {
@@ -146,7 +166,10 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     await open(page, route.path(), route.ready);
     const found = await audit(page, `${route.label} @${width}`);
     const extra = await overflow(page);
-    if (extra > 0) found.push(`${route.label} @${width}: ${extra} px wider than the window`);
+    if (extra > 0)
+      found.push(
+        `${route.label} @${width}: ${extra} px wider than the window: ${(await widest(page)).join(' | ')}`,
+      );
     expect(found).toEqual([]);
   });
 
@@ -157,7 +180,7 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     const dialogAudit = async (dialogName: string) => {
       const dialog = page.getByRole('dialog', { name: dialogName });
       await dialog.waitFor();
-      found.push(...(await audit(page, `${dialogName} dialog @${width}`)));
+      found.push(...(await audit(page, `${dialogName} dialog @${width}`, '[role="dialog"]')));
       return dialog;
     };
 
@@ -177,7 +200,7 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     await picker.getByRole('searchbox').fill('W10X33');
     await picker.locator('[data-shape="W10X33"]').first().click();
     await picker.getByText('Torsion constant J').waitFor();
-    found.push(...(await audit(page, `shape picker with a shape chosen @${width}`)));
+    found.push(...(await audit(page, `shape picker with a shape chosen @${width}`, '[role="dialog"]')));
     await page.keyboard.press('Escape');
     await picker.waitFor({ state: 'detached' });
 

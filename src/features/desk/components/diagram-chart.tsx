@@ -71,7 +71,7 @@ export const DiagramChart = memo(function DiagramChart({
         onBlur={off}
       >
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={MARGIN}>
+          <LineChart data={rows} margin={MARGIN} accessibilityLayer={false}>
             <CartesianGrid stroke="#eeece8" />
             <XAxis
               dataKey="x"
