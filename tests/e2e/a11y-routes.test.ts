@@ -195,6 +195,11 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     await page.keyboard.press('Escape');
 
     await open(page, `/cantilevers/${ids.cantilever}`, (p) => p.getByTestId('tip-deflection').waitFor());
+    // On the phone the input groups start folded: open the two this test uses.
+    for (const group of ['Reach', 'Section']) {
+      const details = page.locator('details', { has: page.locator('summary', { hasText: group }) }).first();
+      if ((await details.getAttribute('open')) === null) await details.locator('summary').click();
+    }
     await page.getByRole('button', { name: 'Browse shapes for the member' }).click();
     const picker = await dialogAudit('Pick a shape');
     await picker.getByRole('searchbox').fill('W10X33');

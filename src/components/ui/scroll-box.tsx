@@ -10,7 +10,7 @@ export function ScrollBox({ label, children }: { label: string; children: ReactN
       role="region"
       aria-label={label}
       tabIndex={0}
-      className="max-w-full overflow-x-auto focus-visible:outline-2 focus-visible:outline-oxide-500"
+      className="relative max-w-full overflow-x-auto focus-visible:outline-2 focus-visible:outline-oxide-500"
     >
       {children}
     </div>

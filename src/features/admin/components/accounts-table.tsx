@@ -111,7 +111,7 @@ export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number 
                       size="sm"
                       variant="ghost"
                       disabled={update.isPending}
-                      aria-label={`Reset the password of ${user.displayName}`}
+                      aria-label={`Reset password of ${user.displayName}`}
                       onClick={() => {
                         const password = temporaryPassword();
                         change(
