@@ -11,6 +11,8 @@ export interface A11yProblem {
   impact: string;
   help: string;
   targets: string[];
+  /** How many elements break the rule (targets names the first five). */
+  count: number;
 }
 
 const TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
@@ -27,6 +29,7 @@ export async function seriousA11yProblems(page: Page, include?: string): Promise
       impact: v.impact ?? 'unknown',
       help: v.help,
       targets: v.nodes.slice(0, 5).map((n) => n.target.join(' ')),
+      count: v.nodes.length,
     }));
 }
 

@@ -82,3 +82,60 @@ describe('check board: the direction of the governing combination', () => {
     expect(within(downRow).queryByText(/uplift/)).toBeNull();
   });
 });
+
+describe('check board: the tension-and-shear interaction row', () => {
+  const interaction = (ratio: number, note: string): Check => ({
+    id: 'anchors.interaction',
+    title: 'Rods in tension and shear together',
+    reference: 'ACI 318-19 17.8',
+    combination: '1.2D + 1.6L',
+    demand: null,
+    capacity: null,
+    ratio,
+    ok: ratio <= 1,
+    note,
+  });
+
+  it('shows Nua/φNn, Vua/φVn and their sum against 1.2 when both terms are above 0.2', () => {
+    // (0.45 + 0.30) / 1.2 = 0.625: ACI 318-19 17.8.3, the engine's own rule (check-interaction.ts)
+    render(
+      <CheckBoard checks={[interaction(0.625, 'Tension ratio 0.45 + shear ratio 0.30 against 1.2.')]} />,
+    );
+    const row = screen
+      .getByRole('table', { name: 'Check board' })
+      .querySelector('tr[data-check="anchors.interaction"]') as HTMLElement;
+    const demand = within(row).getByTestId('interaction-demand');
+    expect(demand).toHaveTextContent('Nua/φNn 0.45');
+    expect(demand).toHaveTextContent('Vua/φVn 0.30');
+    expect(demand).toHaveTextContent('sum 0.75');
+    expect(within(row).getByTestId('interaction-capacity')).toHaveTextContent('1.20');
+    expect(within(row).getByText('0.63')).toBeInTheDocument();
+    expect(within(row).queryByText('—')).toBeNull();
+  });
+
+  it('shows both terms and the larger alone against 1.0 when one is at most 0.2', () => {
+    render(
+      <CheckBoard
+        checks={[
+          interaction(
+            0.24,
+            'Tension ratio 0.24 and shear ratio 0.00: one is at most 0.2, so the larger alone against 1.0.',
+          ),
+        ]}
+      />,
+    );
+    const row = document.querySelector('tr[data-check="anchors.interaction"]') as HTMLElement;
+    expect(within(row).getByTestId('interaction-demand')).toHaveTextContent(
+      'Nua/φNn 0.24Vua/φVn 0.00larger 0.24',
+    );
+    expect(within(row).getByTestId('interaction-capacity')).toHaveTextContent('1.00');
+  });
+
+  it('explains the mark on the bars as the limit 1.00', () => {
+    render(<CheckBoard checks={[check('member.flexure', 0.5)]} />);
+    const board = screen.getByRole('table', { name: 'Check board' });
+    expect(board).toHaveAccessibleDescription(/the mark across it is the limit, 1\.00/);
+    expect(screen.getByTestId('limit-mark')).toHaveAttribute('title', 'limit 1.00');
+    expect(screen.getByTestId('limit-mark').style.left).toBe('80%');
+  });
+});

@@ -22,7 +22,10 @@ export function evaluateInteraction(tensionRatios: (number | null)[], shearRatio
   }
   const n = Math.max(0, ...(tensionRatios as number[]));
   const v = shearRatio;
-  if (n <= 0.2 || v <= 0.2) return { demand: null, capacity: null, kind: 'force', ratio: Math.max(n, v) };
+  if (n <= 0.2 || v <= 0.2) {
+    const note = `Tension ratio ${n.toFixed(2)} and shear ratio ${v.toFixed(2)}: one is at most 0.2, so the larger alone against 1.0.`;
+    return { demand: null, capacity: null, kind: 'force', ratio: Math.max(n, v), note };
+  }
   return {
     demand: null,
     capacity: null,

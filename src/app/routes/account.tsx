@@ -5,7 +5,7 @@ import { useMe } from '../../lib/api/me/get-me';
 export default function AccountRoute() {
   const me = useMe();
   return (
-    <section className="mx-auto flex max-w-3xl flex-col gap-4 p-6">
+    <section className="mx-auto flex max-w-3xl flex-col gap-4 p-4 sm:p-6">
       <div>
         <h1 className="text-xl font-semibold">Your account</h1>
         {me.data ? (

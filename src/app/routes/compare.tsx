@@ -19,7 +19,7 @@ export default function CompareRoute() {
     (a.data && a.data.cantileverId !== cantileverId) || (b.data && b.data.cantileverId !== cantileverId);
 
   return (
-    <div className="mx-auto max-w-6xl space-y-4 p-6">
+    <div className="mx-auto max-w-6xl space-y-4 p-4 sm:p-6">
       <nav aria-label="Breadcrumb" className="text-sm text-concrete-600">
         <Link to={paths.history(cantileverId)} className="underline hover:text-oxide-700">
           Back to the history

@@ -14,7 +14,7 @@ export default function HistoryRoute() {
   const user = useMe();
 
   return (
-    <div className="mx-auto max-w-5xl space-y-4 p-6">
+    <div className="mx-auto max-w-5xl space-y-4 p-4 sm:p-6">
       <nav aria-label="Breadcrumb" className="text-sm text-concrete-600">
         {cantilever.data && (
           <>

@@ -39,7 +39,7 @@ function OutboxScreen() {
 /** Outbox (admin): every e-mail the product sent, as the local fake captured it. */
 export default function OutboxRoute() {
   return (
-    <div className="mx-auto max-w-6xl space-y-4 p-6">
+    <div className="mx-auto max-w-5xl space-y-4 p-4 sm:p-6">
       <h1 className="text-xl font-semibold text-concrete-900">Outbox</h1>
       <AdminOnly>
         <OutboxScreen />

@@ -11,6 +11,7 @@ import { useMe } from '../../lib/api/me/get-me';
 import { useProject } from '../../features/projects/api/get-project';
 import { CantileverTable } from '../../features/projects/components/cantilever-table';
 import { CreateCantileverForm } from '../../features/projects/components/create-cantilever-form';
+import { ScrollBox } from '../../components/ui/scroll-box';
 import { ProjectScheduleLink } from '../../features/projects/components/project-schedule-link';
 
 export default function ProjectRoute() {
@@ -30,7 +31,7 @@ export default function ProjectRoute() {
   const role = me.data?.role;
   const mayCreate = role ? EDIT_RIGHTS[role].member : false;
   return (
-    <section className="mx-auto max-w-5xl p-6">
+    <section className="mx-auto max-w-5xl p-4 sm:p-6">
       <p className="text-xs text-concrete-500">
         <Link to={paths.projects} className="underline">
           Projects
@@ -41,9 +42,9 @@ export default function ProjectRoute() {
       <p className="text-sm text-concrete-600">
         {p.site || 'no site given'} · {p.codeBasis} · {p.units}
       </p>
-      <div className="mt-6 mb-2 flex items-center justify-between">
+      <div className="mt-6 mb-2 flex flex-wrap items-center justify-between gap-2">
         <h2 className="font-semibold">Cantilevers</h2>
-        <div className="flex items-center gap-4">
+        <div className="flex flex-wrap items-center gap-4">
           {p.cantilevers.length > 0 ? <ProjectScheduleLink projectId={p.id} /> : null}
           {mayCreate ? (
             <Button variant="primary" onClick={() => setCreating(true)}>
@@ -52,7 +53,9 @@ export default function ProjectRoute() {
           ) : null}
         </div>
       </div>
-      <CantileverTable cantilevers={p.cantilevers} mayEdit={role ? role !== 'admin' : false} />
+      <ScrollBox label="Cantilevers">
+        <CantileverTable cantilevers={p.cantilevers} mayEdit={role ? role !== 'admin' : false} />
+      </ScrollBox>
       <h2 className="mt-8 mb-2 font-semibold">Team</h2>
       {/* An admin gets the one list with adding and removing; everyone else the plain list. */}
       {role === 'admin' ? (

@@ -18,7 +18,7 @@ export default function ProjectsRoute() {
   const mayCreate =
     me.data?.role === 'admin' || me.data?.role === 'engineer' || me.data?.role === 'architect';
   return (
-    <section className="mx-auto max-w-5xl p-6">
+    <section className="mx-auto max-w-5xl p-4 sm:p-6">
       <div className="mb-4 flex items-center justify-between">
         <h1 className="text-xl font-semibold">Projects</h1>
         {mayCreate ? (

@@ -25,7 +25,7 @@ export default function ReviewRoute() {
     : null;
 
   return (
-    <div className="mx-auto max-w-5xl space-y-4 p-6">
+    <div className="mx-auto max-w-5xl space-y-4 p-4 sm:p-6">
       {!valid && (
         <p role="alert" className="text-util-over">
           This address does not name a revision.

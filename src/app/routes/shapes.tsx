@@ -19,7 +19,7 @@ export default function ShapesRoute() {
   const project = projects.data?.find((p) => p.id === projectId) ?? null;
   const mayImport = me.data ? (projectId === null ? isAdmin : !isAdmin) : false;
   return (
-    <section className="mx-auto flex max-w-7xl flex-col gap-4 p-6">
+    <section className="mx-auto flex max-w-7xl flex-col gap-4 p-4 sm:p-6">
       <div>
         <h1 className="text-xl font-semibold">Shapes</h1>
         <p className="text-sm text-concrete-600">

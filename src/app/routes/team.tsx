@@ -39,7 +39,7 @@ function TeamScreen() {
 /** Team (admin): accounts, roles and who may sign in. */
 export default function TeamRoute() {
   return (
-    <div className="mx-auto max-w-5xl space-y-4 p-6">
+    <div className="mx-auto max-w-5xl space-y-4 p-4 sm:p-6">
       <h1 className="text-xl font-semibold text-concrete-900">Team</h1>
       <AdminOnly>
         <TeamScreen />

@@ -176,12 +176,14 @@ export function DeskEditor({
               />
             }
           />
-          <div className="grid gap-4 p-4 lg:grid-cols-[26rem_1fr]">
+          {/* On a phone the verdict and results come first, the inputs below them, revisions and files last;
+              from lg the inputs are the left column beside the results. */}
+          <div className="grid min-w-0 gap-4 p-2 sm:p-4 lg:grid-cols-[26rem_minmax(0,1fr)] lg:items-start">
             <form
               onSubmit={(e) => e.preventDefault()}
               noValidate
               aria-label="Design inputs"
-              className="flex flex-col gap-2"
+              className="order-2 flex min-w-0 flex-col gap-2 lg:order-none lg:col-start-1 lg:row-span-2 lg:row-start-1"
             >
               {fromStudy ? (
                 <p
@@ -201,7 +203,7 @@ export function DeskEditor({
                 onBrowseFootprint={openFootprint}
               />
             </form>
-            <div className="flex min-w-0 flex-col gap-3">
+            <div className="order-1 flex min-w-0 flex-col gap-3 lg:order-none lg:col-start-2 lg:row-start-1">
               {baseRevision &&
               !isDirty &&
               (rights.member || rights.connection) &&
@@ -214,6 +216,8 @@ export function DeskEditor({
                 />
               ) : null}
               <DeskResults live={live} doc={live.doc} schedule={schedule} beams={cantilever.quantity} />
+            </div>
+            <div className="order-3 flex min-w-0 flex-col gap-3 lg:order-none lg:col-start-2 lg:row-start-2">
               <DeskSide cantileverId={cantilever.id} current={base} files={files} />
             </div>
           </div>

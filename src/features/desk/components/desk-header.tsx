@@ -38,7 +38,7 @@ export function DeskHeader({
   save: ReactNode;
 }) {
   return (
-    <div className="sticky top-0 z-10 flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-concrete-300 bg-concrete-100/95 px-4 py-2 backdrop-blur">
+    <div className="z-10 flex flex-wrap items-center gap-x-4 gap-y-1 border-b border-concrete-300 bg-concrete-100 px-2 py-2 sm:px-4 md:sticky md:top-0">
       <div>
         <p className="text-xs text-concrete-500">
           <Link to={paths.project(cantilever.projectId)} className="underline">
@@ -72,7 +72,7 @@ export function DeskHeader({
       >
         {statusText(busy, live)}
       </p>
-      <div className="ml-auto flex items-center gap-3">
+      <div className="flex flex-wrap items-center gap-3 sm:ml-auto">
         <UnitSwitch value={units} onChange={onUnits} />
         <Link to={paths.history(cantilever.id)} className="text-sm text-oxide-700 underline">
           History

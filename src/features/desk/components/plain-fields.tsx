@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useFormContext, useFormState, useWatch, type FieldPath } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
@@ -161,6 +161,11 @@ export function CheckField({ name, label }: { name: string; label: string }) {
 }
 
 /** One input group of the desk, collapsible, with its own heading. */
+/** The desk's two-column breakpoint (Tailwind lg); without matchMedia (tests) the screen counts as wide. */
+function wideScreen(): boolean {
+  return typeof window.matchMedia !== 'function' || window.matchMedia('(min-width: 1024px)').matches;
+}
+
 export function Group({
   title,
   children,
@@ -172,8 +177,15 @@ export function Group({
   disabled?: boolean;
   note?: string;
 }) {
+  // Open on a wide screen, where the inputs sit beside the results; folded on a phone, where they
+  // come below the verdict and the results and a person opens the group they want to change.
+  const [open, setOpen] = useState(wideScreen);
   return (
-    <details open className="rounded-md border border-concrete-300 bg-white">
+    <details
+      open={open}
+      onToggle={(e) => setOpen(e.currentTarget.open)}
+      className="rounded-md border border-concrete-300 bg-white"
+    >
       <summary className="cursor-pointer select-none px-3 py-2 text-sm font-semibold text-concrete-800">
         {title}
       </summary>
