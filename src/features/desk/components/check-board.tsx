@@ -1,19 +1,13 @@
 import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
-import { checkTone, checkWord, sortWorstFirst, type Tone } from '../../../../shared/words/check-words';
-
-const BAR: Record<Tone, string> = {
-  calm: 'bg-util-calm',
-  steady: 'bg-util-steady',
-  near: 'bg-util-near',
-  over: 'bg-util-over',
-};
-const TEXT: Record<Tone, string> = {
-  calm: 'text-util-calm',
-  steady: 'text-concrete-700',
-  near: 'text-concrete-800',
-  over: 'text-util-over',
-};
+import {
+  CHECK_MARKS,
+  checkTone,
+  checkWord,
+  sortWorstFirst,
+  type Tone,
+} from '../../../../shared/words/check-words';
+import { CHECK_BAR as BAR, CHECK_TEXT as TEXT } from '../../../lib/verdict-style';
 
 function UtilBar({ ratio, tone }: { ratio: number | null; tone: Tone }) {
   if (ratio === null)
@@ -97,7 +91,7 @@ export function CheckBoard({
                 {c.ratio === null ? '—' : c.ratio.toFixed(2)}
               </td>
               <td className={`py-1.5 text-xs font-semibold whitespace-nowrap ${TEXT[tone]}`}>
-                {word === 'exceeds' || word === 'fails' || word === 'not computed' ? '✕ ' : ''}
+                <span aria-hidden="true">{CHECK_MARKS[tone]} </span>
                 {word}
               </td>
             </tr>
