@@ -2,12 +2,13 @@ import { Save } from 'lucide-react';
 import { useContext, useEffect, useRef, useState } from 'react';
 import { useFormContext } from 'react-hook-form';
 import type { RevisionDto } from '../../../../shared/schemas/api';
-import type { DesignDocument, DesignInput } from '../../../../shared/schemas/design';
+import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
+import { toFieldIssues } from '../../../../shared/schemas/quantity';
 import { Button } from '../../../components/ui/button';
 import { ApiError } from '../../../lib/api-client';
 import { errorText } from '../../../lib/error-text';
 import { focusField } from '../lib/focus-field';
-import { formErrorList, mergeIssues, toFieldName, type Issue } from '../lib/issue-paths';
+import { mergeIssues, toFieldName, type Issue } from '../lib/issue-paths';
 import { EngineIssuesContext } from './field-context';
 import { staleLatest, useSaveRevision } from '../../../lib/api/revisions/save-revision';
 import { replaceKeepingDirty } from '../hooks/use-units-switch';
@@ -62,8 +63,10 @@ export function DeskSave({
   async function openSave() {
     setStatus(null);
     setError(null);
+    // trigger() marks the fields in red; the list comes from the same schema the form resolves with.
     const valid = await form.trigger();
-    const list = mergeIssues(valid ? [] : formErrorList(form.formState.errors), engineIssues);
+    const parsed = designSchema.safeParse(form.getValues());
+    const list = mergeIssues(parsed.success ? [] : toFieldIssues(parsed.error), engineIssues);
     if (!valid && list.length === 0)
       list.push({ path: '(document)', message: 'has a problem the form could not place on a field' });
     setProblems(list);
