@@ -11,6 +11,7 @@ import { DeskCharts } from '../features/desk/components/desk-charts';
 import { MemberSketch } from '../features/desk/components/member-sketch';
 import { PlateSketch } from '../features/desk/components/plate-sketch';
 import { Verdict } from '../features/desk/components/verdict';
+import { displayChecks } from '../../shared/words/check-display';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -51,7 +52,7 @@ export function RevisionResults({ revision }: { revision: RevisionDto }) {
       <Verdict checks={revision.result.checks} stale={false} />
       <Panel title="Check board">
         <CheckBoard
-          checks={revision.result.checks}
+          checks={displayChecks(revision.result.checks, revision.result.connection)}
           directions={Object.fromEntries(
             revision.result.member.combinations.map((c) => [c.name, c.direction]),
           )}

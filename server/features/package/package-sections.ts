@@ -5,6 +5,7 @@ import { CAUTION } from '../../../shared/engine/types';
 import { formatQuantity, type Quantity } from '../../../shared/engine/units';
 import { capitalised, checkWord, verdictOf } from '../../../shared/words/check-words';
 import { pathWords, valueWords } from '../../../shared/words/field-words';
+import { displayCheck } from '../../../shared/words/check-display';
 import { checkEquation, checkNumbers } from './check-equations';
 import { revisionLabel, stampText, type PackageData } from './package-data';
 import { CONTENT_WIDTH, MUTED, PAGE, RULE, type PdfWriter } from './pdf-writer';
@@ -128,7 +129,9 @@ export function drawChecks(w: PdfWriter, d: PackageData): void {
     const verdict = capitalised(checkWord(c));
     const equation = `Equation: ${checkEquation(c, d.result.method)}`;
     const numbers = `Numbers: ${checkNumbers(c)}`;
-    const note = c.note ? `Note: ${c.note}` : '';
+    // Bearing under a large moment reads as a stress (the moments stay in the note).
+    const shown = displayCheck(c, d.result.connection);
+    const note = shown.note ? `Note: ${shown.note}` : '';
     const h = 130 + [equation, numbers, note].reduce((sum, t) => sum + (t ? w.height(t, { size: 9 }) : 0), 0);
     w.ensure(h);
     w.doc.moveDown(0.4);
@@ -150,8 +153,8 @@ export function drawChecks(w: PdfWriter, d: PackageData): void {
       [
         ['Demand', 'Capacity', 'Ratio', 'Verdict'],
         [
-          q(c.demand) || 'not computed',
-          q(c.capacity) || 'not computed',
+          q(shown.demand) || 'not computed',
+          q(shown.capacity) || 'not computed',
           c.ratio === null ? 'not computed' : c.ratio.toFixed(2),
           verdict,
         ],

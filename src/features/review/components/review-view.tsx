@@ -10,6 +10,7 @@ import { VerdictWord } from '../../../components/ui/verdict-word';
 import { CommentsThread } from '../../../components/comments-thread';
 import { formatDateTime } from '../../../lib/format';
 import { verdictOf } from '../../../../shared/words/check-words';
+import { displayChecks } from '../../../../shared/words/check-display';
 import { CheckList } from './check-list';
 import { KeyResults } from './key-results';
 import { BaseChanges } from './base-changes';
@@ -109,7 +110,7 @@ export function ReviewView({
             {verdict.sentence} {revision.result.method}, results in {revision.result.units} units.
           </span>
         </p>
-        <CheckList checks={revision.result.checks} />
+        <CheckList checks={displayChecks(revision.result.checks, revision.result.connection)} />
       </Section>
       {evidence ? (
         <Section id="review-evidence" title="Inputs, diagrams and sketches">
