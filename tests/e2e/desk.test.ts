@@ -207,11 +207,11 @@ describe('design desk', () => {
     await save.getByRole('button', { name: 'Save revision' }).click();
     const conflict = page.getByRole('dialog', { name: `Revision ${next} was saved while you worked` });
     await conflict.waitFor();
-    const row = conflict.getByRole('row').filter({ hasText: 'connection.plate.thickness' });
+    const row = conflict.getByRole('row').filter({ hasText: 'Support: plate thickness' });
     expect(await row.textContent()).toContain('2 in');
-    expect(await conflict.getByRole('row').filter({ hasText: 'member.length' }).textContent()).toContain(
-      '8 ft',
-    );
+    expect(
+      await conflict.getByRole('row').filter({ hasText: 'Reach: length, root to tip' }).textContent(),
+    ).toContain('8 ft');
     await e2e.screenshot(page, 'desk-conflict');
     await conflict.getByRole('button', { name: `Keep my changes on top of revision ${next}` }).click();
     await save.waitFor();

@@ -12,12 +12,14 @@ import { RouterProvider, createMemoryRouter } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../shared/engine/examples';
 import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
+import type { FieldIssue } from '../../shared/schemas/quantity';
 import { DeskSave } from '../../src/features/desk/components/desk-save';
 import { EngineIssuesContext } from '../../src/features/desk/components/field-context';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
+import { IssueSummary } from '../../src/features/desk/components/desk-inputs';
 import { makeRevision, stubFetch } from './history-fixtures';
 
-function Desk({ startBase }: { startBase: number | null }) {
+function Desk({ startBase, issues = [] }: { startBase: number | null; issues?: FieldIssue[] }) {
   const form = useForm<DesignDocument, unknown, DesignInput>({
     resolver: zodResolver(designSchema),
     mode: 'onChange',
@@ -36,17 +38,18 @@ function Desk({ startBase }: { startBase: number | null }) {
           mayEdit
           toUserUnits={(d) => d}
         />
+        <IssueSummary issues={issues} failure={null} />
         <ReachGroup disabled={false} />
       </EngineIssuesContext.Provider>
     </FormProvider>
   );
 }
 
-function renderDesk(startBase: number | null = 2) {
+function renderDesk(startBase: number | null = 2, issues: FieldIssue[] = []) {
   const queryClient = new QueryClient({
     defaultOptions: { queries: { retry: false }, mutations: { retry: false } },
   });
-  const router = createMemoryRouter([{ path: '/', element: <Desk startBase={startBase} /> }]);
+  const router = createMemoryRouter([{ path: '/', element: <Desk startBase={startBase} issues={issues} /> }]);
   return render(
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />
@@ -148,5 +151,16 @@ describe('desk: saving a revision', () => {
     expect(
       within(dialog).getByText('Saves as revision 1, the first of this cantilever.'),
     ).toBeInTheDocument();
+  });
+
+  it("names the desk's problems in words, each a way to its field", async () => {
+    stubFetch(() => undefined);
+    renderDesk(2, [{ path: 'member.length', message: 'is longer than the engine allows' }]);
+    const summary = screen.getByTestId('issue-summary');
+    expect(summary.textContent).not.toContain('member.length');
+    await act(async () => {
+      fireEvent.click(within(summary).getByRole('button', { name: 'Reach: length, root to tip' }));
+    });
+    expect(document.activeElement).toBe(length());
   });
 });
