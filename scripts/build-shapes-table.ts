@@ -10,6 +10,7 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
+import { parseCsv } from '../shared/csv/csv-reader';
 
 const KEEP = [
   'W',
@@ -52,12 +53,11 @@ function wanted(type: string, label: string, od: string): string | null {
 
 /** The table object written to data/shapes.json, from the text of the published CSV. */
 export function buildShapesTable(csv: string) {
-  const lines = csv.split(/\r?\n/).filter(Boolean);
-  const header = lines[0].split(',');
+  const lines = parseCsv(csv).filter((cells) => cells.some((c) => c !== ''));
+  const header = lines[0];
   const col = (name: string) => header.indexOf(name);
   const rows: Record<string, string | number>[] = [];
-  for (const line of lines.slice(1)) {
-    const cells = line.split(',');
+  for (const cells of lines.slice(1)) {
     const label = cells[col('AISC_Manual_Label')];
     const family = wanted(cells[col('Type')], label, cells[col('OD')]);
     if (!family) continue;

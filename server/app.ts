@@ -31,6 +31,7 @@ import { healthRouter } from './features/health/health.router';
 import { createLogger, httpLogger } from './lib/logger';
 import type { Logger } from 'pino';
 import { createStorage, type Storage } from './storage/storage';
+import { createEnginePool, engineThreads } from './engine/engine-pool';
 
 export interface AppDeps {
   db: Knex;
@@ -53,7 +54,8 @@ const authGate: RequestHandler = (req, res, next) => {
 
 export function createApp(config: Config, deps: AppDeps): ReachlineApp {
   const storage = deps.storage ?? createStorage(config);
-  const ctx: AppContext = { config, db: deps.db, mail: deps.mail, storage };
+  const engine = createEnginePool(engineThreads(config.engineThreads ?? 0));
+  const ctx: AppContext = { config, db: deps.db, mail: deps.mail, storage, engine };
   const app = express() as ReachlineApp;
   app.disable('x-powered-by');
   const logger = deps.logger ?? createLogger(config.logLevel ?? 'silent');
@@ -139,6 +141,10 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
 
   serveClient(app, config.distDir);
   app.use(errorHandler);
-  app.closeApp = () => store.close();
+  app.closeApp = () => {
+    store.close();
+    // In-flight requests have finished (the server closed first); idle workers just stop.
+    void engine.close().catch(() => undefined);
+  };
   return app;
 }

@@ -22,6 +22,11 @@ export interface Config {
   s3?: { endpoint?: string; region: string; forcePathStyle: boolean } | null;
   /** pino level (LOG_LEVEL); 'silent' turns request logs off. */
   logLevel?: string;
+  /**
+   * Worker threads for the engine behind POST /api/check (ENGINE_THREADS): 'auto' (the default
+   * from the environment) is one fewer than the cores, at least one; 0 or absent runs it in-line.
+   */
+  engineThreads?: number | 'auto';
   /** Where generated local state lives (the session secret). */
   dataDir: string;
   sessionSecret: string;
@@ -86,6 +91,11 @@ const envSchema = z.object({
   S3_ENDPOINT: z.url('must be a URL such as http://127.0.0.1:9000').optional(),
   S3_REGION: z.string().trim().min(1).default('us-east-1'),
   S3_FORCE_PATH_STYLE: z.enum(['0', '1', 'true', 'false']).optional(),
+  ENGINE_THREADS: z
+    .union([z.literal('auto'), z.coerce.number().int().min(0).max(64)], {
+      error: 'must be auto or a whole number of threads from 0 to 64',
+    })
+    .default('auto'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DATA_DIR: z.string().min(1).default('data'),
   SESSION_SECRET: z.string().min(16, 'must be at least 16 characters').optional(),
@@ -181,6 +191,7 @@ export function parseEnv(
         }
       : null,
     logLevel: e.LOG_LEVEL,
+    engineThreads: e.ENGINE_THREADS,
     dataDir: resolve(e.DATA_DIR),
     sessionSecret: e.SESSION_SECRET ?? null,
     smtpUrl: e.SMTP_URL ?? null,

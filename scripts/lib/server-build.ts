@@ -3,7 +3,7 @@
  * node_modules/.cache/reachline/server/ by Vite's SSR build, then run by plain Node. Run from
  * source through tsx, the start-up spent most of its time loading mathjs's ~1,000 modules through
  * the loader hooks (about 7 s of CPU); bundled, mathjs is tree-shaken to what the engine uses and
- * the other dependencies load natively. Dependencies other than mathjs stay external (imported from
+ * the other dependencies load natively. The engine pool's worker is a second entry. Dependencies other than mathjs stay external (imported from
  * node_modules at run time). Rebuilt only when its inputs change (scripts/lib/stamp.ts).
  */
 import { join } from 'node:path';
@@ -23,6 +23,8 @@ export const SERVER_INPUTS = [
   'package-lock.json',
 ];
 export const SERVER_ENTRY = 'scripts/serve.ts';
+/** The engine pool's worker (server/engine/engine-pool.ts looks for engine-worker.js beside the bundle). */
+export const ENGINE_WORKER_ENTRY = 'server/engine/engine-worker.ts';
 
 export function serverOutDir(root: string): string {
   return join(root, 'node_modules', '.cache', 'reachline', 'server');
@@ -46,12 +48,16 @@ export function serverBuildStep(
         logLevel: 'warn',
         publicDir: false,
         build: {
-          ssr: SERVER_ENTRY,
+          ssr: true,
           outDir,
           emptyOutDir: true,
           target: 'node20',
           minify: false,
-          rollupOptions: { output: { entryFileNames: 'serve.js' } },
+          rollupOptions: {
+            input: { serve: SERVER_ENTRY, 'engine-worker': ENGINE_WORKER_ENTRY },
+            // Every file in one folder, so a chunk's import.meta.url finds engine-worker.js beside it.
+            output: { entryFileNames: '[name].js', chunkFileNames: '[name]-[hash].js' },
+          },
         },
         ssr: { target: 'node', noExternal: ['mathjs'] },
       });

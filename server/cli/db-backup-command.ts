@@ -86,11 +86,15 @@ export async function dbBackupCommand(
   }
   const db = createDb(config.databaseUrl);
   try {
-    const conn = (await db.client.acquireConnection()) as SqliteBackup;
+    const client = db.client as {
+      acquireConnection(): Promise<unknown>;
+      releaseConnection(conn: unknown): Promise<void>;
+    };
+    const conn = (await client.acquireConnection()) as SqliteBackup;
     try {
       await conn.backup(target);
     } finally {
-      await db.client.releaseConnection(conn);
+      await client.releaseConnection(conn);
     }
   } finally {
     await db.destroy();

@@ -8,6 +8,30 @@ import knex, { type Knex } from 'knex';
 
 interface SqliteConnection {
   pragma(source: string): unknown;
+  prepare(source: string): unknown;
+}
+
+/** Distinct statements kept per connection; `in (?, ?, …)` lists make new texts, so the cache is bounded. */
+const STATEMENT_CACHE_SIZE = 500;
+
+/**
+ * Knex prepares every query anew (better-sqlite3's prepare compiles the SQL each time), which was
+ * the largest single cost of a signed-in read. A prepared statement is reusable once its previous
+ * run has returned, and Knex runs each one to completion (`all` or `run`) before the next, on the
+ * single connection. Knex's only per-run statement setting, safeIntegers, is never used here.
+ */
+export function cachePreparedStatements(conn: SqliteConnection): void {
+  const prepare = conn.prepare.bind(conn);
+  const cache = new Map<string, unknown>();
+  conn.prepare = (source: string) => {
+    let statement = cache.get(source);
+    if (statement === undefined) {
+      if (cache.size >= STATEMENT_CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+      statement = prepare(source);
+      cache.set(source, statement);
+    }
+    return statement;
+  };
 }
 
 export type Dialect = 'sqlite' | 'postgres';
@@ -45,6 +69,7 @@ export function createDb(databaseUrl: string, options: DbOptions = {}): Knex {
           conn.pragma('synchronous = NORMAL');
           conn.pragma('foreign_keys = ON');
           conn.pragma('busy_timeout = 5000');
+          cachePreparedStatements(conn);
           done(null, conn);
         } catch (err) {
           done(err as Error, conn);
@@ -59,7 +84,7 @@ export function createDb(databaseUrl: string, options: DbOptions = {}): Knex {
  * a migration or a statement written for these two can never run half-applied elsewhere.
  */
 export function dialectOf(db: Knex, what = 'Reachline'): Dialect {
-  const client = String(db.client.config.client);
+  const client = String((db.client as { config: Knex.Config }).config.client);
   if (client === 'better-sqlite3' || client === 'sqlite3') return 'sqlite';
   if (client === 'pg' || client === 'postgres' || client === 'postgresql') return 'postgres';
   throw new Error(
@@ -87,6 +112,22 @@ export function isUniqueViolation(err: unknown): boolean {
     e?.code === 'SQLITE_CONSTRAINT_UNIQUE' ||
     e?.code === 'SQLITE_CONSTRAINT_PRIMARYKEY'
   );
+}
+
+/**
+ * Inserts one row and answers its id. PostgreSQL and SQLite (through Knex's RETURNING) both answer
+ * [{ id }]; an older SQLite path answered the bare number, which is still accepted.
+ */
+export async function insertReturningId(
+  db: Knex | Knex.Transaction,
+  table: string,
+  row: Record<string, unknown>,
+): Promise<number> {
+  const rows = (await db(table).insert(row).returning('id')) as unknown[];
+  const first = rows[0];
+  const id = typeof first === 'object' && first !== null ? (first as { id?: unknown }).id : first;
+  if (typeof id !== 'number' || !Number.isInteger(id)) throw new Error(`${table}: the insert answered no id`);
+  return id;
 }
 
 /** Timestamps are stored as ISO strings in UTC; PostgreSQL hands back Date objects. */

@@ -27,9 +27,9 @@ const MIGRATIONS: Record<string, Migration> = {
 };
 
 const migrationSource: Knex.MigrationSource<string> = {
-  getMigrations: async () => Object.keys(MIGRATIONS).sort(),
+  getMigrations: () => Promise.resolve(Object.keys(MIGRATIONS).sort()),
   getMigrationName: (name) => name,
-  getMigration: async (name) => MIGRATIONS[name],
+  getMigration: (name) => Promise.resolve(MIGRATIONS[name]),
 };
 
 /** Brings the database to the latest schema; returns the names of the migrations it ran. */

@@ -50,7 +50,7 @@ export class MailWorker {
         socketTimeout: SMTP_TIMEOUT_MS,
       } as Parameters<typeof nodemailer.createTransport>[0],
       { from: options.from },
-    );
+    ) as Transporter;
   }
 
   start(): void {

@@ -157,7 +157,9 @@ export async function retryNow(db: Knex): Promise<number> {
     db('outbox')
       .whereIn('status', ['pending', 'failed'])
       // A message being sent right now (claimed, lease running) stays with its worker.
-      .where((q) => q.whereNull('claim_token').orWhere('status', 'failed'))
+      .where((q) => {
+        q.whereNull('claim_token').orWhere('status', 'failed');
+      })
       .update({ status: 'pending', next_attempt_at: nowIso() })
   );
 }

@@ -5,6 +5,7 @@
  * truncated part, too many parts). A malformed body is the client's fault: it is logged once at
  * warn, without a stack.
  */
+import { inspect } from 'node:util';
 import type { RequestHandler } from 'express';
 import multer from 'multer';
 import { HttpError, badRequest } from '../lib/http-error';
@@ -52,7 +53,7 @@ export function singleFileUpload({ maxBytes, fields = 4 }: UploadLimits): Reques
           ]),
         );
       }
-      const reason = err instanceof Error ? err.message : String(err);
+      const reason = err instanceof Error ? err.message : inspect(err);
       console.warn(`multipart upload refused on ${req.method} ${req.path}: ${reason}`);
       const message =
         err instanceof multer.MulterError && err.code === 'LIMIT_UNEXPECTED_FILE'

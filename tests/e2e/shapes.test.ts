@@ -12,7 +12,7 @@ beforeAll(async () => {
   page = session.page;
   await e2e.signInAs(session.context, 'fabricator');
   await page.goto('/shapes');
-  await page.getByRole('table', { name: 'Shapes' }).waitFor();
+  await page.getByRole('grid', { name: 'Shapes' }).waitFor();
 });
 
 afterAll(async () => {
@@ -49,6 +49,17 @@ describe('shapes browser', () => {
     const d = Number.parseFloat(depth ?? '');
     expect(d).toBeGreaterThanOrEqual(20);
     expect(d).toBeLessThanOrEqual(22);
+    // the list is one Tab stop on this page too: ArrowDown moves to the next shape and shows it
+    const rows = page.locator('tr[data-shape]');
+    expect(await page.locator('tr[data-shape][tabindex="0"]').count()).toBe(1);
+    await rows.first().focus();
+    await page.keyboard.press('ArrowDown');
+    const next = (await rows.nth(1).getAttribute('data-shape')) ?? '';
+    expect(await page.evaluate(() => (document.activeElement as HTMLElement).dataset.shape)).toBe(next);
+    await page
+      .getByRole('complementary', { name: 'Shape details' })
+      .getByText(next, { exact: true })
+      .waitFor();
     await e2e.screenshot(page, 'shapes');
   });
 

@@ -31,7 +31,7 @@ function Harness({
 
 async function type(label: string, value: string) {
   await act(async () => {
-    fireEvent.change(screen.getByRole('textbox', { name: label }), { target: { value } });
+    fireEvent.change(screen.getByRole('combobox', { name: label }), { target: { value } });
   });
 }
 
@@ -46,7 +46,7 @@ describe('desk fields: errors in plain words next to the field', () => {
     expect(
       await screen.findByText('Length (root to tip) needs a unit, got "9" (for example "10 ft")'),
     ).toBeInTheDocument();
-    expect(screen.getByRole('textbox', { name: 'Length (root to tip)' })).toHaveAttribute(
+    expect(screen.getByRole('combobox', { name: 'Length (root to tip)' })).toHaveAttribute(
       'aria-invalid',
       'true',
     );
@@ -90,19 +90,25 @@ describe('desk fields: errors in plain words next to the field', () => {
     );
   });
 
-  it('rewrites the value in the unit chosen beside the field', async () => {
+  it('rewrites the value in the unit chosen from the list in the field', async () => {
     render(
       <Harness>
         <QuantityField name="member.length" label="Length" />
       </Harness>,
     );
-    await act(async () => {
-      fireEvent.change(screen.getByRole('combobox', { name: 'Length: unit' }), { target: { value: 'm' } });
-    });
-    expect(screen.getByRole('textbox', { name: 'Length' })).toHaveValue('2.743 m');
-    await act(async () => {
-      fireEvent.change(screen.getByRole('combobox', { name: 'Length: unit' }), { target: { value: 'in' } });
-    });
-    expect(screen.getByRole('textbox', { name: 'Length' })).toHaveValue('108 in');
+    const length = screen.getByRole('combobox', { name: 'Length' });
+    const choose = async (option: string) => {
+      await act(async () => {
+        fireEvent.click(screen.getByRole('button', { name: 'Length: other units' }));
+      });
+      await act(async () => {
+        fireEvent.click(screen.getByRole('option', { name: option }));
+      });
+    };
+    // 9 ft = 2.7432 m (1 ft = 0.3048 m exactly), 4 significant digits
+    await choose('2.743 m');
+    expect(length).toHaveValue('2.743 m');
+    await choose('108 in');
+    expect(length).toHaveValue('108 in');
   });
 });

@@ -48,7 +48,8 @@ async function change(el: HTMLElement, value: string) {
     fireEvent.change(el, { target: { value } });
   });
 }
-const box = (name: string) => screen.getByRole('textbox', { name });
+// quantity boxes are editable comboboxes (their unit list folded in)
+const box = (name: string) => screen.getByRole('combobox', { name });
 const pick = (name: string) => screen.getByRole('combobox', { name });
 const spin = (name: string) => screen.getByRole('spinbutton', { name });
 
@@ -65,7 +66,7 @@ describe('desk inputs for wind and seismic', () => {
     const areaCase = screen.getAllByRole('combobox', { name: 'Case' })[0]!;
     expect(within(areaCase).getByRole('option', { name: 'W, wind (− lifts)' })).toBeInTheDocument();
     await change(areaCase, 'W');
-    await change(screen.getAllByRole('textbox', { name: 'Value' })[0]!, '-30 psf');
+    await change(screen.getAllByRole('combobox', { name: 'Value' })[0]!, '-30 psf');
     expect(saved().loads?.area?.[0]).toEqual({ case: 'W', value: '-30 psf' });
     expect(screen.queryByRole('alert')).toBeNull();
     await change(areaCase, 'D');

@@ -1,9 +1,9 @@
 /** Cantilevers (Knex only). */
 import type { Knex } from 'knex';
 import type { CantileverDto } from '../../../shared/schemas/api';
-import { nowIso, toBool, toIso } from '../../db/knex';
+import { nowIso, toBool, toIso, insertReturningId } from '../../db/knex';
 import type { CantileverRow } from '../projects/project-access';
-import { latestApprovedRevisions, reviewStates } from '../revisions/revisions.repository';
+import { latestApprovals, reviewStates } from '../revisions/revisions.repository';
 
 type Db = Knex | Knex.Transaction;
 
@@ -24,7 +24,7 @@ export async function listCantilevers(
     db,
     rows.map((r) => r.current_revision_id).filter((id): id is number => id !== null),
   );
-  const approved = await latestApprovedRevisions(
+  const approved = await latestApprovals(
     db,
     rows.map((r) => r.id),
   );
@@ -39,17 +39,7 @@ export async function listCantilevers(
     ok: r.current_ok === null || r.current_ok === undefined ? null : toBool(r.current_ok),
     updatedAt: toIso(r.updated_at),
     quantity: Number(r.quantity ?? 1),
-    latestApproved: (() => {
-      const a = approved.get(r.id);
-      return a
-        ? {
-            revisionId: a.revision.id,
-            number: a.revision.number,
-            approvedBy: a.approvedBy,
-            approvedAt: a.approvedAt,
-          }
-        : null;
-    })(),
+    latestApproved: approved.get(r.id) ?? null,
   }));
 }
 
@@ -58,18 +48,15 @@ export async function insertCantilever(
   c: { projectId: number; name: string; description: string; quantity?: number },
 ): Promise<number> {
   const now = nowIso();
-  const [row] = await db('cantilevers')
-    .insert({
-      project_id: c.projectId,
-      name: c.name,
-      description: c.description,
-      quantity: c.quantity ?? 1,
-      current_revision_id: null,
-      created_at: now,
-      updated_at: now,
-    })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'cantilevers', {
+    project_id: c.projectId,
+    name: c.name,
+    description: c.description,
+    quantity: c.quantity ?? 1,
+    current_revision_id: null,
+    created_at: now,
+    updated_at: now,
+  });
 }
 
 export async function updateCantileverQuantity(db: Db, id: number, quantity: number): Promise<void> {

@@ -4,19 +4,14 @@ import { checkRequestSchema } from '../../../shared/schemas/api';
 import type { AppContext } from '../../context';
 import { typedRoute } from '../../lib/route';
 import { currentUser } from '../../middleware/require-auth';
-import { projectForMember } from '../projects/project-access';
-import { evaluateOnServer } from '../revisions/evaluate';
+import { checkDesign } from './check.service';
 
 export function checkRouter(ctx: AppContext): Router {
   const router = Router();
   router.post(
     '/check',
     typedRoute({ body: checkRequestSchema }, async ({ body }, req, res) => {
-      // A project's imported shapes only for its members; without one, the organisation's.
-      if (body.projectId !== undefined) await projectForMember(ctx.db, body.projectId, currentUser(req).id);
-      res.json(
-        await evaluateOnServer(ctx.db, body.input, { stations: true, projectId: body.projectId ?? null }),
-      );
+      res.type('application/json').send(await checkDesign(ctx, currentUser(req), body));
     }),
   );
   return router;

@@ -1,7 +1,7 @@
 /** Comments on revisions (Knex only). */
 import type { Knex } from 'knex';
 import type { CommentDto } from '../../../shared/schemas/api';
-import { nowIso, toIso } from '../../db/knex';
+import { insertReturningId, nowIso, toIso } from '../../db/knex';
 
 interface CommentRow {
   id: number;
@@ -32,8 +32,10 @@ export async function insertComment(
   db: Knex | Knex.Transaction,
   c: { revisionId: number; authorId: number; body: string },
 ): Promise<number> {
-  const [row] = await db('comments')
-    .insert({ revision_id: c.revisionId, author_id: c.authorId, body: c.body, created_at: nowIso() })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'comments', {
+    revision_id: c.revisionId,
+    author_id: c.authorId,
+    body: c.body,
+    created_at: nowIso(),
+  });
 }

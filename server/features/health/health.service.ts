@@ -3,12 +3,15 @@
  * Each probe has a time limit; the result is kept for one second, so a load balancer polling every
  * instance (or a flood of probes) costs the database at most one query per second per instance.
  */
+import type { Knex } from 'knex';
 import type { AppContext } from '../../context';
 
 export interface HealthReport {
   ok: boolean;
-  database: 'ok' | string;
-  storage: 'ok' | string;
+  /** 'ok', or what went wrong. */
+  database: string;
+  /** 'ok', or what went wrong. */
+  storage: string;
   dialect: string;
 }
 
@@ -31,7 +34,7 @@ function withLimit(work: Promise<unknown>): Promise<string> {
 
 export function healthProbe(ctx: AppContext): () => Promise<HealthReport> {
   let last: { at: number; report: Promise<HealthReport> } | null = null;
-  const dialect = String(ctx.db.client.config.client);
+  const dialect = String((ctx.db.client as { config: Knex.Config }).config.client);
   return () => {
     const now = Date.now();
     if (last && now - last.at < KEEP_MS) return last.report;

@@ -1,7 +1,7 @@
 /** Projects and their members (Knex only). */
 import type { Knex } from 'knex';
 import type { MemberDto, ProjectDto, Role } from '../../../shared/schemas/api';
-import { nowIso, toIso } from '../../db/knex';
+import { nowIso, toIso, insertReturningId } from '../../db/knex';
 
 type Db = Knex | Knex.Transaction;
 
@@ -57,17 +57,14 @@ export async function insertProject(
   db: Db,
   p: { name: string; site: string; codeBasis: string; units: 'US' | 'SI'; createdBy: number },
 ): Promise<number> {
-  const [row] = await db('projects')
-    .insert({
-      name: p.name,
-      site: p.site,
-      code_basis: p.codeBasis,
-      units: p.units,
-      created_by: p.createdBy,
-      created_at: nowIso(),
-    })
-    .returning('id');
-  return typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  return insertReturningId(db, 'projects', {
+    name: p.name,
+    site: p.site,
+    code_basis: p.codeBasis,
+    units: p.units,
+    created_by: p.createdBy,
+    created_at: nowIso(),
+  });
 }
 
 export async function addMember(db: Db, projectId: number, userId: number): Promise<void> {

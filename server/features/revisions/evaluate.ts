@@ -43,13 +43,15 @@ export async function evaluateWithSections(
     const result = evaluateDesign(input, { stations: options.stations, shapes });
     return { result, sections: [...used.values()] };
   } catch (err) {
-    if (err instanceof DesignInputError) {
-      const prefix = options.field ?? 'input';
-      const issues = err.issues.map((i) => ({ path: `${prefix}.${i.path}`, message: i.message }));
-      throw badRequest(`The design cannot be computed: ${issues[0]?.path}: ${issues[0]?.message}`, issues);
-    }
+    if (err instanceof DesignInputError) throw designNotComputed(err.issues, options.field ?? 'input');
     throw err;
   }
+}
+
+/** The 400 for a document the engine refused, its issues' paths prefixed with the request field. */
+export function designNotComputed(engineIssues: readonly { path: string; message: string }[], field: string) {
+  const issues = engineIssues.map((i) => ({ path: `${field}.${i.path}`, message: i.message }));
+  return badRequest(`The design cannot be computed: ${issues[0]?.path}: ${issues[0]?.message}`, issues);
 }
 
 export async function evaluateOnServer(

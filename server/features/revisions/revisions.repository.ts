@@ -9,7 +9,7 @@ import type {
 } from '../../../shared/schemas/api';
 import type { DesignDocument } from '../../../shared/schemas/design';
 import type { DesignResult } from '../../../shared/engine/types';
-import { isPostgres, nowIso, toBool, toIso } from '../../db/knex';
+import { isPostgres, nowIso, toBool, toIso, insertReturningId } from '../../db/knex';
 import type { RevisionRow } from '../projects/project-access';
 
 type Db = Knex | Knex.Transaction;
@@ -158,22 +158,19 @@ export async function insertRevision(
     sections?: readonly unknown[];
   },
 ): Promise<number> {
-  const [row] = await db('revisions')
-    .insert({
-      cantilever_id: r.cantileverId,
-      number: r.number,
-      author_id: r.authorId,
-      message: r.message,
-      input_json: JSON.stringify(r.input),
-      result_json: JSON.stringify(r.result),
-      engine_version: r.result.engineVersion,
-      base_revision_id: r.baseRevisionId,
-      ok: r.result.ok,
-      sections_json: r.sections ? JSON.stringify(r.sections) : null,
-      created_at: nowIso(),
-    })
-    .returning('id');
-  const id = typeof row === 'object' ? (row as { id: number }).id : (row as number);
+  const id = await insertReturningId(db, 'revisions', {
+    cantilever_id: r.cantileverId,
+    number: r.number,
+    author_id: r.authorId,
+    message: r.message,
+    input_json: JSON.stringify(r.input),
+    result_json: JSON.stringify(r.result),
+    engine_version: r.result.engineVersion,
+    base_revision_id: r.baseRevisionId,
+    ok: r.result.ok,
+    sections_json: r.sections ? JSON.stringify(r.sections) : null,
+    created_at: nowIso(),
+  });
   await db('cantilevers')
     .where({ id: r.cantileverId })
     .update({ current_revision_id: id, updated_at: nowIso() });
@@ -199,15 +196,23 @@ export interface ApprovedRevision {
   approvedAt: string;
 }
 
+export interface LatestApproval {
+  revisionId: number;
+  number: number;
+  approvedBy: string;
+  approvedAt: string;
+}
+
 /**
- * The latest approved revision of each cantilever. An approved revision stays approved (no review
- * may follow an approval), so an 'approved' review row is enough.
+ * The latest approval of each cantilever, without the revisions' documents and results (tens of
+ * kilobytes each, and the project list needs only the number). An approved revision stays
+ * approved (no review may follow an approval), so an 'approved' review row is enough.
  */
-export async function latestApprovedRevisions(
+export async function latestApprovals(
   db: Db,
   cantileverIds: readonly number[],
-): Promise<Map<number, ApprovedRevision>> {
-  const out = new Map<number, ApprovedRevision>();
+): Promise<Map<number, LatestApproval>> {
+  const out = new Map<number, LatestApproval>();
   if (cantileverIds.length === 0) return out;
   const rows = (await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
@@ -215,16 +220,45 @@ export async function latestApprovedRevisions(
     .where('v.state', 'approved')
     .whereIn('r.cantilever_id', [...cantileverIds])
     .orderBy('r.number')
-    .select('r.*', 'u.display_name as approver_name', 'v.created_at as approved_at')) as (RevisionRow & {
+    .select(
+      'r.id',
+      'r.number',
+      'r.cantilever_id',
+      'u.display_name as approver_name',
+      'v.created_at as approved_at',
+    )) as {
+    id: number;
+    number: number;
+    cantilever_id: number;
     approver_name: string;
     approved_at: string;
-  })[];
-  for (const { approver_name, approved_at, ...revision } of rows) {
-    out.set(revision.cantilever_id, {
-      revision,
-      approvedBy: approver_name,
-      approvedAt: toIso(approved_at),
+  }[];
+  for (const row of rows) {
+    out.set(row.cantilever_id, {
+      revisionId: row.id,
+      number: row.number,
+      approvedBy: row.approver_name,
+      approvedAt: toIso(row.approved_at),
     });
+  }
+  return out;
+}
+
+/** The latest approved revision of each cantilever, whole (the plate schedule reads its results). */
+export async function latestApprovedRevisions(
+  db: Db,
+  cantileverIds: readonly number[],
+): Promise<Map<number, ApprovedRevision>> {
+  const approvals = await latestApprovals(db, cantileverIds);
+  const out = new Map<number, ApprovedRevision>();
+  if (approvals.size === 0) return out;
+  const rows = (await db('revisions').whereIn(
+    'id',
+    [...approvals.values()].map((a) => a.revisionId),
+  )) as RevisionRow[];
+  for (const revision of rows) {
+    const a = approvals.get(revision.cantilever_id)!;
+    out.set(revision.cantilever_id, { revision, approvedBy: a.approvedBy, approvedAt: a.approvedAt });
   }
   return out;
 }

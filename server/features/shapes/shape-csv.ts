@@ -5,6 +5,7 @@
  * row number (1 = the header) and the reason, and the good rows are still imported.
  */
 import { z } from 'zod';
+import { parseCsv } from '../../../shared/csv/csv-reader';
 import { findShape, normalizeLabel } from '../../../shared/engine/shapes/table';
 import type { ShapeFamily, ShapeRecord } from '../../../shared/engine/shapes/types';
 
@@ -79,40 +80,6 @@ const rowSchema = z.object({
     ]),
   ),
 });
-
-/** Splits CSV text into rows of cells (double quotes, doubled quotes inside, CRLF or LF). */
-export function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let cell = '';
-  let quoted = false;
-  const src = text.replace(/^\uFEFF/, '');
-  for (let i = 0; i < src.length; i += 1) {
-    const ch = src[i];
-    if (quoted) {
-      if (ch === '"' && src[i + 1] === '"') {
-        cell += '"';
-        i += 1;
-      } else if (ch === '"') quoted = false;
-      else cell += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      row.push(cell);
-      cell = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && src[i + 1] === '\n') i += 1;
-      row.push(cell);
-      rows.push(row);
-      row = [];
-      cell = '';
-    } else cell += ch;
-  }
-  if (cell !== '' || row.length > 0) {
-    row.push(cell);
-    rows.push(row);
-  }
-  return rows;
-}
 
 function cellNumber(text: string | undefined): number | undefined {
   const t = (text ?? '').trim();

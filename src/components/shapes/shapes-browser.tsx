@@ -1,4 +1,4 @@
-import { useDeferredValue, useMemo, useState } from 'react';
+import { useDeferredValue, useId, useMemo, useState } from 'react';
 import type { ShapeFamily } from '../../../shared/engine/shapes/types';
 import { Button } from '../ui/button';
 import { inputClass } from '../ui/field';
@@ -35,15 +35,18 @@ export function ShapesBrowser({
   const [minDepth, setMin] = useState('');
   const [maxDepth, setMax] = useState('');
   const [selected, setSelected] = useState<string | null>(initial);
-  const filter = useDeferredValue({
-    q,
-    family,
-    minDepth: depthValue(minDepth),
-    maxDepth: depthValue(maxDepth),
-  });
+  const min = depthValue(minDepth);
+  const max = depthValue(maxDepth);
+  // One object per change of the filter (not per render): the rows keep their identity while a
+  // key moves through the list, so only the rows whose state changes render again.
+  const wanted = useMemo(() => ({ q, family, minDepth: min, maxDepth: max }), [q, family, min, max]);
+  const filter = useDeferredValue(wanted);
   const rows = useMemo(() => filterShapes(shapes.data?.shapes ?? [], filter), [shapes.data, filter]);
   const chosen = shapes.data?.shapes.find((s) => s.label === selected) ?? null;
   const depthError = (t: string) => t.trim() !== '' && depthValue(t) === null;
+  const keysId = useId();
+  // Enter on a row does what the first action does (the one the picker was opened for).
+  const primary = actions[0];
 
   if (shapes.isPending) return <Loading label="Loading shapes…" />;
   if (shapes.isError) return <ErrorNote error={shapes.error}>The shapes could not be loaded.</ErrorNote>;
@@ -106,8 +109,18 @@ export function ShapesBrowser({
         <p className="num mb-1 text-xs text-concrete-600" role="status">
           {rows.length} of {shapes.data.shapes.length} shapes · {shapes.data.source}
         </p>
-        <div className="max-h-[60vh] overflow-auto rounded border border-concrete-300 bg-white">
-          <ShapesTable shapes={rows} selected={selected} onSelect={setSelected} />
+        <p id={keysId} className="sr-only">
+          Arrow keys, Page Up, Page Down, Home and End move through the shapes; type the start of a label to
+          jump to it; {primary ? `Enter: ${primary.label.toLowerCase()}.` : 'Enter shows its properties.'}
+        </p>
+        <div data-scroll className="max-h-[60vh] overflow-auto rounded border border-concrete-300 bg-white">
+          <ShapesTable
+            shapes={rows}
+            selected={selected}
+            onSelect={setSelected}
+            onActivate={primary ? primary.onUse : undefined}
+            describedBy={keysId}
+          />
         </div>
       </div>
       <aside className="rounded-md border border-concrete-300 bg-white p-3" aria-label="Shape details">
@@ -116,8 +129,12 @@ export function ShapesBrowser({
             <ShapeDetail shape={chosen} />
             {actions.length ? (
               <div className="mt-3 flex flex-col gap-2">
-                {actions.map((a) => (
-                  <Button key={a.label} variant="primary" onClick={() => a.onUse(chosen.label)}>
+                {actions.map((a, i) => (
+                  <Button
+                    key={a.label}
+                    variant={i === 0 ? 'primary' : 'secondary'}
+                    onClick={() => a.onUse(chosen.label)}
+                  >
                     {a.label}
                   </Button>
                 ))}

@@ -4,11 +4,14 @@ import {
   getCoreRowModel,
   getSortedRowModel,
   useReactTable,
+  type Row,
   type SortingState,
 } from '@tanstack/react-table';
-import { useState } from 'react';
+import { memo, useMemo, useRef, useState, type ReactNode } from 'react';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { shapeDepth } from '../../lib/shape-filter';
+import { useRowKeys } from './use-row-keys';
+import { useRowWindow, useScrollToRowOnce, windowPieces } from './use-row-window';
 
 const col = createColumnHelper<ShapeRecord>();
 const num = (v: number | undefined) => (v === undefined ? '—' : String(v));
@@ -30,17 +33,29 @@ const COLUMNS = [
   col.accessor('ry', { header: 'ry (in)', cell: (c) => num(c.getValue()) }),
 ];
 
-/** The shapes, sortable by any column; a row is chosen with a click or Enter. */
+/**
+ * The shapes as a grid, sortable by any column, that is one Tab stop: the active row carries the
+ * only tabindex 0 (roving tabindex). ArrowUp/Down, Page Up/Down, Home/End and typing the start of
+ * a label ("W12") move it and choose that shape; Enter activates it (the picker's main action).
+ * Only the rows in view (and the active one) are drawn; the others are gaps of their height.
+ */
 export function ShapesTable({
   shapes,
   selected,
   onSelect,
+  onActivate,
+  describedBy,
 }: {
   shapes: ShapeRecord[];
   selected: string | null;
   onSelect: (label: string) => void;
+  /** Enter on a row: the main action of the screen, if it has one. */
+  onActivate?: (label: string) => void;
+  /** The id of the words that say how the keys move through the list. */
+  describedBy?: string;
 }) {
   const [sorting, setSorting] = useState<SortingState>([]);
+  const body = useRef<HTMLTableSectionElement>(null);
   // TanStack Table returns fresh functions each render; the compiler skips this component, which is fine here.
   // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({
@@ -51,11 +66,57 @@ export function ShapesTable({
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
   });
+  const rows = table.getRowModel().rows;
+  const labels = useMemo(() => rows.map((r) => r.original.label), [rows]);
+  const selectedIndex = selected === null ? -1 : labels.indexOf(selected);
+  const active = Math.max(0, selectedIndex);
+  const keys = useRowKeys({ labels, active, onMove: onSelect, onActivate, body });
+
+  const view = useRowWindow(body);
+  useScrollToRowOnce(body, selectedIndex, view.rowPx);
+  const pieces = windowPieces(rows.length, active, view.scrollPx, view.viewPx, view.rowPx);
+  // One flat keyed list: a drawn row keeps its place among the others as the window moves, so
+  // React never re-creates or moves it (a focused row would lose the focus). A gap is named by
+  // the row it starts at.
+  const drawn: ReactNode[] = [];
+  let at = 0;
+  for (const piece of pieces) {
+    if (piece.kind === 'gap') {
+      drawn.push(
+        <tr key={`gap-${at}`} aria-hidden="true">
+          <td colSpan={COLUMNS.length} style={{ height: piece.rows * view.rowPx, padding: 0 }} />
+        </tr>,
+      );
+      at += piece.rows;
+      continue;
+    }
+    for (let i = piece.from; i < piece.to; i++) {
+      const row = rows[i]!;
+      drawn.push(
+        <ShapeRow
+          key={row.id}
+          row={row}
+          index={i}
+          selected={i === selectedIndex}
+          tabbable={i === active}
+          onSelect={onSelect}
+        />,
+      );
+    }
+    at = piece.to;
+  }
+
   return (
-    <table className="w-full border-collapse text-sm" aria-label="Shapes">
-      <thead className="sticky top-0 bg-concrete-100">
+    <table
+      role="grid"
+      className="w-full border-collapse text-sm"
+      aria-label="Shapes"
+      aria-describedby={describedBy}
+      aria-rowcount={rows.length + 1}
+    >
+      <thead className="sticky top-0 z-10 bg-concrete-100">
         {table.getHeaderGroups().map((g) => (
-          <tr key={g.id}>
+          <tr key={g.id} aria-rowindex={1}>
             {g.headers.map((h) => {
               const sorted = h.column.getIsSorted();
               return (
@@ -79,40 +140,48 @@ export function ShapesTable({
           </tr>
         ))}
       </thead>
-      <tbody>
-        {table.getRowModel().rows.map((row) => {
-          const label = row.original.label;
-          const isSelected = label === selected;
-          return (
-            <tr
-              key={row.id}
-              tabIndex={0}
-              aria-selected={isSelected}
-              data-shape={label}
-              onClick={() => onSelect(label)}
-              onKeyDown={(e) => {
-                if (e.key === 'Enter' || e.key === ' ') {
-                  e.preventDefault();
-                  onSelect(label);
-                }
-              }}
-              className={`cursor-pointer border-b border-concrete-200 focus-visible:outline-2 focus-visible:outline-oxide-500 ${isSelected ? 'bg-oxide-50' : 'hover:bg-concrete-100'}`}
-            >
-              {row.getVisibleCells().map((cell) => (
-                <td
-                  key={cell.id}
-                  className={`num px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
-                >
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  {cell.column.id === 'label' && row.original.custom ? (
-                    <span className="ml-1 text-[10px] text-oxide-700">imported</span>
-                  ) : null}
-                </td>
-              ))}
-            </tr>
-          );
-        })}
+      <tbody ref={body} onKeyDown={keys.onKeyDown}>
+        {drawn}
       </tbody>
     </table>
   );
 }
+
+/** One row; memoised so that a move re-renders the two rows whose state changes. */
+const ShapeRow = memo(function ShapeRow({
+  row,
+  index,
+  selected,
+  tabbable,
+  onSelect,
+}: {
+  row: Row<ShapeRecord>;
+  index: number;
+  selected: boolean;
+  tabbable: boolean;
+  onSelect: (label: string) => void;
+}) {
+  const label = row.original.label;
+  return (
+    <tr
+      tabIndex={tabbable ? 0 : -1}
+      aria-rowindex={index + 2}
+      aria-selected={selected}
+      data-shape={label}
+      onClick={() => onSelect(label)}
+      className={`scroll-mt-8 cursor-pointer border-b border-concrete-200 focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-oxide-500 ${selected ? 'bg-oxide-50' : 'hover:bg-concrete-100'}`}
+    >
+      {row.getVisibleCells().map((cell) => (
+        <td
+          key={cell.id}
+          className={`num whitespace-nowrap px-2 py-1 ${cell.column.id === 'label' ? 'font-mono font-medium' : ''}`}
+        >
+          {flexRender(cell.column.columnDef.cell, cell.getContext())}
+          {cell.column.id === 'label' && row.original.custom ? (
+            <span className="ml-1 text-[10px] text-oxide-700">imported</span>
+          ) : null}
+        </td>
+      ))}
+    </tr>
+  );
+});

@@ -1,9 +1,10 @@
+import { useEffect, useRef } from 'react';
 import { useController, useFormContext, type FieldPath } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
 import { fieldUnit, UNIT_CHOICES } from '../lib/field-units';
-import { rewriteQuantity, unitOfText } from '../lib/quantity-text';
 import { fieldId, useEngineIssue } from './field-context';
+import { useUnitMenu } from './unit-menu';
 
 export interface QuantityFieldProps {
   name: string;
@@ -16,9 +17,10 @@ export interface QuantityFieldProps {
 }
 
 /**
- * The text box and unit chooser of a quantity, without the form wiring: `name` gives the DOM id and
- * the field's unit; `onText` receives the text typed or rewritten (undefined when an optional field
- * is left blank).
+ * The text box of a quantity with its unit list folded in, without the form wiring: `name` gives the
+ * DOM id and the field's unit; `onText` receives the text typed or rewritten (undefined when an
+ * optional field is left blank). One Tab stop: the box is an editable combobox whose list (Alt+ArrowDown,
+ * or the small button inside the box) rewrites the value in another unit; what is typed always wins.
  */
 export function QuantityInput({
   name,
@@ -40,56 +42,109 @@ export function QuantityInput({
   inputRef?: (el: HTMLInputElement | null) => void;
 }) {
   const id = fieldId(name);
-  const unit = fieldUnit(name);
-  const choices = unit ? UNIT_CHOICES[unit.dimension] : [];
-  const current = unitOfText(text);
-  const chosen = choices.find((c) => c.replace(/\s/g, '') === current.replace(/\s/g, '')) ?? '';
+  const listId = `${id}-units`;
+  const dimension = fieldUnit(name)?.dimension;
+  const offered = dimension ? UNIT_CHOICES[dimension].length > 1 : false;
+  const box = useRef<HTMLInputElement | null>(null);
+  const menu = useUnitMenu(text, offered ? dimension : undefined, onText);
+  const activeId = menu.open && menu.options.length ? `${listId}-${menu.active}` : undefined;
 
-  function choose(next: string) {
-    if (!unit || !next) return;
-    const rewritten = rewriteQuantity(text, unit.dimension, next);
-    if (rewritten !== null) onText(rewritten);
-  }
+  useEffect(() => {
+    if (activeId) document.getElementById(activeId)?.scrollIntoView?.({ block: 'nearest' });
+  }, [activeId]);
+
+  const input = (
+    <input
+      id={id}
+      name={name}
+      ref={(el) => {
+        box.current = el;
+        inputRef?.(el);
+      }}
+      value={text}
+      placeholder={placeholder ?? (optional ? 'blank = default' : undefined)}
+      onBlur={() => {
+        menu.close();
+        onBlur?.();
+      }}
+      onChange={(e) => onText(optional && e.target.value.trim() === '' ? undefined : e.target.value)}
+      onKeyDown={menu.onKeyDown}
+      autoComplete="off"
+      spellCheck={false}
+      className={inputClass(Boolean(error), `min-w-0 font-mono ${offered ? 'pr-7' : ''}`)}
+      {...(offered
+        ? {
+            role: 'combobox',
+            'aria-autocomplete': 'none' as const,
+            'aria-haspopup': 'listbox' as const,
+            'aria-expanded': menu.open,
+            'aria-controls': listId,
+            'aria-activedescendant': activeId,
+            'aria-keyshortcuts': 'Alt+ArrowDown',
+          }
+        : {})}
+      {...describedBy(id, error, Boolean(hint))}
+    />
+  );
 
   return (
     <Field id={id} label={label} error={error} hint={hint} className={className}>
-      <div className="flex gap-1">
-        <input
-          id={id}
-          name={name}
-          ref={inputRef}
-          value={text}
-          placeholder={placeholder ?? (optional ? 'blank = default' : undefined)}
-          onBlur={onBlur}
-          onChange={(e) => onText(optional && e.target.value.trim() === '' ? undefined : e.target.value)}
-          autoComplete="off"
-          spellCheck={false}
-          className={inputClass(Boolean(error), 'font-mono')}
-          {...describedBy(id, error, Boolean(hint))}
-        />
-        {choices.length > 1 ? (
-          <select
-            aria-label={`${label}: unit`}
-            value={chosen}
-            disabled={!text}
-            onChange={(e) => choose(e.target.value)}
-            className="w-20 shrink-0 rounded border border-concrete-300 bg-concrete-100 px-1 text-xs text-concrete-700 focus-visible:ring-2 focus-visible:ring-oxide-500"
+      {offered ? (
+        <div className="relative">
+          {input}
+          <button
+            type="button"
+            tabIndex={-1}
+            aria-label={`${label}: other units`}
+            aria-haspopup="listbox"
+            aria-expanded={menu.open}
+            aria-controls={listId}
+            // Keep the focus in the box: the list is driven from there.
+            onMouseDown={(e) => e.preventDefault()}
+            onClick={() => {
+              box.current?.focus();
+              menu.toggle();
+            }}
+            className="absolute inset-y-0 right-0 flex w-7 items-center justify-center rounded-r text-concrete-600 hover:bg-concrete-100 hover:text-concrete-900"
           >
-            {chosen ? null : <option value="">unit…</option>}
-            {choices.map((c) => (
-              <option key={c} value={c}>
-                {c}
-              </option>
+            <span aria-hidden="true">▾</span>
+          </button>
+          <ul
+            id={listId}
+            role="listbox"
+            aria-label={`${label}: convert to`}
+            hidden={!menu.open}
+            className="absolute right-0 z-20 mt-1 max-h-56 min-w-full overflow-auto rounded border border-concrete-300 bg-white py-1 text-sm shadow-lg"
+          >
+            {menu.options.map((o, i) => (
+              <li
+                key={o.unit}
+                id={`${listId}-${i}`}
+                role="option"
+                aria-selected={o.current}
+                aria-disabled={o.text === null ? true : undefined}
+                onMouseDown={(e) => e.preventDefault()}
+                onMouseEnter={() => menu.setActive(i)}
+                onClick={() => menu.choose(i)}
+                className={`flex items-baseline justify-between gap-3 whitespace-nowrap px-2 py-1 font-mono ${
+                  i === menu.active ? 'bg-oxide-50' : ''
+                } ${o.text === null ? 'cursor-default text-concrete-600' : 'cursor-pointer text-concrete-900'}`}
+              >
+                {o.text ?? o.unit}
+                {o.current ? <span className="font-sans text-xs text-concrete-600"> as typed</span> : null}
+              </li>
             ))}
-          </select>
-        ) : null}
-      </div>
+          </ul>
+        </div>
+      ) : (
+        input
+      )}
     </Field>
   );
 }
 
 /**
- * A quantity typed with its unit ("10 ft"), with a small chooser that rewrites the same physical
+ * A quantity typed with its unit ("10 ft"), with a small list that rewrites the same physical
  * value in another unit. The error (schema or engine) sits right under it in plain words.
  */
 export function QuantityField(props: QuantityFieldProps) {

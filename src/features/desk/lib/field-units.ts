@@ -1,6 +1,6 @@
 /**
  * Which unit each quantity field of the design document is written in, per unit system, and the
- * units its chooser offers. Lengths along the member are in ft / m; section, plate and rod sizes
+ * units its list of conversions offers. Lengths along the member are in ft / m; section, plate and rod sizes
  * in in / mm; loads in psf / kPa, lbf/ft / kN/m, lbf / kN; steel in ksi / MPa; concrete in psi / MPa.
  */
 import type { Dimension, UnitSystem } from '../../../../shared/engine/units';
@@ -58,7 +58,7 @@ export function customaryUnit(name: string, system: UnitSystem): string | undefi
   return fieldUnit(name)?.[system];
 }
 
-/** The units a field's chooser offers, by dimension. */
+/** The units a field's list of conversions offers, by dimension. */
 export const UNIT_CHOICES: Record<Dimension, readonly string[]> = {
   length: ['ft', 'in', 'm', 'mm'],
   force: ['lbf', 'kip', 'kN'],
