@@ -57,7 +57,7 @@ function renderDesk(startBase: number | null = 2, issues: FieldIssue[] = []) {
   );
 }
 
-const length = () => screen.getByRole('textbox', { name: 'Length (root to tip)' });
+const length = () => screen.getByRole('combobox', { name: 'Length (root to tip)' });
 
 async function type(el: HTMLElement, value: string) {
   await act(async () => {
