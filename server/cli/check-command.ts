@@ -8,6 +8,7 @@ import { readFile } from 'node:fs/promises';
 import type { FieldIssue } from '../../shared/schemas/quantity';
 import { checkDocument } from '../../shared/engine/check-document';
 import { CAUTION } from '../../shared/engine/types';
+import { CHECK_WORDS, checkState, verdictOf } from '../../shared/words/check-words';
 
 export interface CliIo {
   out(text: string): void;
@@ -51,12 +52,15 @@ export async function checkCommand(source: string, stations: boolean, io: CliIo)
   io.out(`${JSON.stringify(result, null, 2)}\n`);
   // Which way each combination bends the root: "up" puts the top flange and the other row of rods to work.
   io.err(`combinations: ${result.member.combinations.map((c) => `${c.name} (${c.direction})`).join('; ')}\n`);
-  const failed = result.checks.filter((c) => !c.ok).map((c) => c.id);
-  io.err(
-    failed.length
-      ? `${failed.length} of ${result.checks.length} checks do not pass: ${failed.join(', ')}\n`
-      : `all ${result.checks.length} checks pass\n`,
-  );
+  // The words of the desk and the package (shared/words/check-words.ts); stdout keeps the contract's keys.
+  const verdict = verdictOf(result.checks, result.ok);
+  io.err(`${verdict.word}. ${verdict.sentence}\n`);
+  for (const c of result.checks) {
+    const state = checkState(c);
+    if (state === 'pass') continue;
+    const ratio = c.ratio === null || !Number.isFinite(c.ratio) ? '' : ` (ratio ${c.ratio.toFixed(2)})`;
+    io.err(`  ${c.id}: ${CHECK_WORDS[state]}${ratio}\n`);
+  }
   io.err(`${CAUTION}\n`);
   return result.ok ? 0 : 1;
 }

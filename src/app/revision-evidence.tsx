@@ -10,6 +10,7 @@ import { CheckBoard } from '../features/desk/components/check-board';
 import { ElevationPanel } from '../features/desk/components/elevation/elevation-panel';
 import { PlateSketch } from '../features/desk/components/plate-sketch';
 import { Verdict } from '../features/desk/components/verdict';
+import { displayChecks } from '../../shared/words/check-display';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -48,7 +49,7 @@ export function RevisionResults({ revision }: { revision: RevisionDto }) {
       <Verdict checks={revision.result.checks} stale={false} />
       <Panel title="Check board">
         <CheckBoard
-          checks={revision.result.checks}
+          checks={displayChecks(revision.result.checks, revision.result.connection)}
           directions={Object.fromEntries(
             revision.result.member.combinations.map((c) => [c.name, c.direction]),
           )}

@@ -1,7 +1,8 @@
 import type { Check } from '../../shared/engine/types';
+import { TREND_WORDS, capitalised, type TrendState } from '../../shared/words/check-words';
 
-export type RatioTrend =
-  'worse' | 'better' | 'unchanged' | 'new check' | 'no longer checked' | 'not computed';
+/** How the ratio moved; its words are TREND_WORDS of the shared vocabulary. */
+export type RatioTrend = TrendState;
 
 export interface RatioRow {
   id: string;
@@ -39,28 +40,33 @@ export function ratioRows(a: Check[], b: Check[]): RatioRow[] {
     const okB = cb ? cb.ok && usable(cb.ratio) : null;
     let trend: RatioTrend;
     let change: number | null = null;
-    if (!ca) trend = 'new check';
-    else if (!cb) trend = 'no longer checked';
-    else if (!usable(ratioA) || !usable(ratioB)) trend = 'not computed';
+    if (!ca) trend = 'new';
+    else if (!cb) trend = 'gone';
+    else if (!usable(ratioA) || !usable(ratioB)) trend = 'none';
     else {
       change = ratioB - ratioA;
-      trend = Math.abs(change) < SAME ? 'unchanged' : change > 0 ? 'worse' : 'better';
+      trend = Math.abs(change) < SAME ? 'same' : change > 0 ? 'up' : 'down';
     }
     return { id, title: (cb ?? ca)?.title ?? id, ratioA, ratioB, okA, okB, change, trend };
   });
 }
 
-/** One sentence for screen readers: how many checks got worse or better, and the verdicts. */
+/** One sentence for screen readers: how many ratios went up or down, and the verdicts. */
 export function ratioSummary(rows: RatioRow[]): string {
   const count = (t: RatioTrend) => rows.filter((r) => r.trend === t).length;
   const failingB = rows.filter((r) => r.okB === false).length;
+  const checks = (n: number) => `${n} ${n === 1 ? 'check' : 'checks'}`;
   const parts = [
-    `${count('worse')} ${count('worse') === 1 ? 'check' : 'checks'} worse`,
-    `${count('better')} better`,
-    `${count('unchanged')} unchanged`,
+    `${TREND_WORDS.up} on ${checks(count('up'))}`,
+    `${TREND_WORDS.down} on ${count('down')}`,
+    `${TREND_WORDS.same} on ${count('same')}`,
   ];
-  if (count('not computed')) parts.push(`${count('not computed')} not computed`);
-  if (count('new check')) parts.push(`${count('new check')} new`);
-  if (count('no longer checked')) parts.push(`${count('no longer checked')} no longer checked`);
-  return `${parts.join(', ')}. ${failingB === 0 ? 'Every check of the later revision passes.' : `${failingB} ${failingB === 1 ? 'check' : 'checks'} of the later revision fail or were not computed.`}`;
+  if (count('none')) parts.push(`${TREND_WORDS.none}: ${count('none')}`);
+  if (count('new')) parts.push(`${TREND_WORDS.new}: ${count('new')}`);
+  if (count('gone')) parts.push(`${TREND_WORDS.gone}: ${count('gone')}`);
+  const later =
+    failingB === 0
+      ? 'Every check of the later revision passes.'
+      : `${checks(failingB)} of the later revision ${failingB === 1 ? 'does' : 'do'} not pass or ${failingB === 1 ? 'was' : 'were'} not computed.`;
+  return `${capitalised(parts.join(', '))}. ${later}`;
 }

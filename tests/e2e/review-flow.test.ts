@@ -195,7 +195,7 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const ratios = page.getByRole('table', { name: /Check ratios/ });
     expect(await ratios.locator('tbody tr').count()).toBeGreaterThan(4);
     // a shorter reach bends the root less
-    expect(await ratios.locator('tr[data-check="member.flexure"]').textContent()).toContain('better');
+    expect(await ratios.locator('tr[data-check="member.flexure"]').textContent()).toContain('ratio down');
     expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
     await page.locator('.recharts-line').first().waitFor();
     // moment, shear and deflection, each for both revisions

@@ -48,6 +48,8 @@ describe('reachline CLI (spawned through bin.js)', { timeout: 120000 }, () => {
     expect(result.checks.map((c: { id: string }) => c.id)).toContain('member.flexure');
     expect(r.code).toBe(result.ok ? 0 : 1);
     expect(result.ok).toBe(true);
+    // The desk's words: the design verdict and its sentence.
+    expect(r.err).toContain(`Passes. All ${result.checks.length} checks pass.`);
     expect(r.err).toContain(CAUTION);
   });
 });
@@ -65,7 +67,9 @@ describe('reachline CLI (in process)', () => {
     const r = await inProcess(['check', '-'], JSON.stringify(failing));
     expect(r.code).toBe(1);
     expect(JSON.parse(r.out).ok).toBe(false);
-    expect(r.err).toContain('member.vibration');
+    expect(r.err).toMatch(/^Does not pass\. \d+ of \d+ checks do not pass/m);
+    // Each check that does not pass on its own line: the id (the contract) and the words of the desk.
+    expect(r.err).toMatch(/^ {2}member\.vibration: does not pass \(ratio \d+\.\d\d\)$/m);
     expect(r.err).toContain(CAUTION);
   });
 

@@ -46,15 +46,18 @@ describe('ConflictDialog (stale save)', () => {
     const rows = within(table)
       .getAllByRole('row')
       .slice(1)
-      .map((r) =>
-        within(r)
+      .map((r) => [
+        within(r).getByRole('rowheader').textContent,
+        ...within(r)
           .getAllByRole('cell')
           .map((c) => c.textContent),
-      );
+      ]);
+    // Each input named in words, never by its path.
     expect(rows).toEqual([
-      ['connection.plate.thickness', '1.5 in', '1.25 in'],
-      ['member.length', '9 ft', '11 ft'],
+      ['Support: plate thickness', '1.5 in', '1.25 in'],
+      ['Reach: length, root to tip', '9 ft', '11 ft'],
     ]);
+    expect(dialog.textContent).not.toMatch(/connection\.plate|member\.length/);
     expect(within(dialog).getByText(/Ana Ruiz saved revision 4/)).toBeInTheDocument();
   });
 

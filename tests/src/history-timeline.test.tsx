@@ -89,9 +89,9 @@ describe('History', () => {
     const list = await screen.findByRole('list', { name: 'Revisions, newest first' });
     const items = within(list).getAllByRole('listitem');
     expect(items.map((li) => within(li).getByRole('heading').textContent)).toEqual([
-      'Revision 3DraftChecks pass',
-      'Revision 2Awaiting reviewChecks fail',
-      'Revision 1Changes requestedChecks pass',
+      'Revision 3DraftPasses',
+      'Revision 2Awaiting reviewDoes not pass',
+      'Revision 1Changes requestedPasses',
     ]);
     expect(items[0]).toHaveTextContent('based on revision 2');
     expect(items[2]).toHaveTextContent('first revision');

@@ -3,13 +3,20 @@ import { documentLeaves } from '../../../shared/schemas/document-leaves';
 import { plateScheduleHeaders } from '../../../shared/engine/connection/plate-schedule';
 import { CAUTION } from '../../../shared/engine/types';
 import { formatQuantity, type Quantity } from '../../../shared/engine/units';
-import { checkWord, passes, verdictOf } from '../../../shared/words/check-words';
+import { capitalised, checkWord, verdictOf } from '../../../shared/words/check-words';
 import { pathWords, valueWords } from '../../../shared/words/field-words';
+import { displayCheck } from '../../../shared/words/check-display';
 import { checkEquation, checkNumbers } from './check-equations';
 import { revisionLabel, stampText, type PackageData } from './package-data';
 import { CONTENT_WIDTH, MUTED, PAGE, RULE, type PdfWriter } from './pdf-writer';
 
 const q = (v: Quantity | undefined | null) => (v ? formatQuantity(v, 4) : '');
+
+/** The design's verdict word and sentence, as the desk writes them. */
+function summary(d: PackageData): string {
+  const v = verdictOf(d.result.checks, d.result.ok);
+  return `${v.word}. ${v.sentence}`;
+}
 
 export function drawCover(w: PdfWriter, d: PackageData): void {
   const r = d.revision;
@@ -40,7 +47,7 @@ export function drawCover(w: PdfWriter, d: PackageData): void {
       ],
       ['Design method', `${d.input.method}, results in ${d.input.units} units`],
       ['Engine version', d.engineVersion],
-      ['Summary', verdictOf(d.result.checks).sentence],
+      ['Summary', summary(d)],
       ['Status of this document', stampText(d)],
     ],
     [170, CONTENT_WIDTH - 170],
@@ -117,16 +124,14 @@ export function drawLoads(w: PdfWriter, d: PackageData): void {
 
 export function drawChecks(w: PdfWriter, d: PackageData): void {
   w.heading('Checks');
-  w.para(verdictOf(d.result.checks).sentence, { bold: true });
+  w.para(summary(d), { bold: true });
   for (const c of d.result.checks) {
-    const verdict = passes(c)
-      ? `PASS (${checkWord(c)})`
-      : c.ratio === null
-        ? 'NOT COMPUTED'
-        : 'DOES NOT PASS';
+    const verdict = capitalised(checkWord(c));
     const equation = `Equation: ${checkEquation(c, d.result.method)}`;
     const numbers = `Numbers: ${checkNumbers(c)}`;
-    const note = c.note ? `Note: ${c.note}` : '';
+    // Bearing under a large moment reads as a stress (the moments stay in the note).
+    const shown = displayCheck(c, d.result.connection);
+    const note = shown.note ? `Note: ${shown.note}` : '';
     const h = 130 + [equation, numbers, note].reduce((sum, t) => sum + (t ? w.height(t, { size: 9 }) : 0), 0);
     w.ensure(h);
     w.doc.moveDown(0.4);
@@ -148,8 +153,8 @@ export function drawChecks(w: PdfWriter, d: PackageData): void {
       [
         ['Demand', 'Capacity', 'Ratio', 'Verdict'],
         [
-          q(c.demand) || 'not computed',
-          q(c.capacity) || 'not computed',
+          q(shown.demand) || 'not computed',
+          q(shown.capacity) || 'not computed',
           c.ratio === null ? 'not computed' : c.ratio.toFixed(2),
           verdict,
         ],

@@ -1,6 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
-import { CautionNote } from '../../components/ui/caution-note';
 import { PackageLink } from '../../components/ui/package-link';
 import { ReviewStateBadge } from '../../components/ui/review-state-badge';
 import { ErrorNote, Loading } from '../../components/ui/status';
@@ -87,7 +86,6 @@ export default function RevisionRoute() {
       </header>
       <div className="grid gap-4 p-4 lg:grid-cols-[26rem_1fr]">
         <div className="flex flex-col gap-2">
-          <CautionNote />
           <DesignInputsList doc={r.input} />
         </div>
         <RevisionResults revision={r} />

@@ -35,7 +35,6 @@ export function ChangedInputsTable({ changes, labelA, labelB }: ChangedInputsTab
           <tr key={change.path} className="border-b border-concrete-100 align-top">
             <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
               {pathWords(change.path)}
-              <span className="block font-mono text-[11px] text-concrete-600">{change.path}</span>
             </th>
             <td className="py-1 pr-3 font-mono tabular-nums text-concrete-700">
               {valueWords(change.before)}

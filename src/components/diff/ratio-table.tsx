@@ -1,14 +1,16 @@
 import { ArrowDown, ArrowUp, Minus, Plus, X, CircleHelp, type LucideIcon } from 'lucide-react';
+import { TREND_WORDS } from '../../../shared/words/check-words';
 import type { RatioRow, RatioTrend } from '../../lib/ratio-rows';
+import { TREND_TEXT } from '../../lib/verdict-style';
 import { RatioCell } from './ratio-cell';
 
-const TRENDS: Record<RatioTrend, { Icon: LucideIcon; tone: string }> = {
-  worse: { Icon: ArrowUp, tone: 'text-util-over' },
-  better: { Icon: ArrowDown, tone: 'text-concrete-800 [&_svg]:text-util-calm' },
-  unchanged: { Icon: Minus, tone: 'text-concrete-600' },
-  'new check': { Icon: Plus, tone: 'text-concrete-700' },
-  'no longer checked': { Icon: X, tone: 'text-concrete-700' },
-  'not computed': { Icon: CircleHelp, tone: 'text-util-over' },
+const ICONS: Record<RatioTrend, LucideIcon> = {
+  up: ArrowUp,
+  down: ArrowDown,
+  same: Minus,
+  new: Plus,
+  gone: X,
+  none: CircleHelp,
 };
 
 function signed(change: number | null): string {
@@ -46,12 +48,11 @@ export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA:
       </thead>
       <tbody>
         {rows.map((row) => {
-          const { Icon, tone } = TRENDS[row.trend];
+          const Icon = ICONS[row.trend];
           return (
             <tr key={row.id} className="border-b border-concrete-100" data-check={row.id}>
               <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
                 {row.title}
-                <span className="block font-mono text-[11px] text-concrete-600">{row.id}</span>
               </th>
               <td className="py-1 pr-3">
                 <RatioCell ratio={row.ratioA} ok={row.okA} />
@@ -60,10 +61,10 @@ export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA:
                 <RatioCell ratio={row.ratioB} ok={row.okB} />
               </td>
               <td className="py-1 pr-3 font-mono tabular-nums">{signed(row.change)}</td>
-              <td className={`py-1 ${tone}`}>
+              <td className={`py-1 ${TREND_TEXT[row.trend]}`}>
                 <span className="inline-flex items-center gap-1">
                   <Icon aria-hidden="true" className="h-4 w-4" />
-                  {row.trend}
+                  {TREND_WORDS[row.trend]}
                 </span>
               </td>
             </tr>

@@ -126,9 +126,10 @@ export function AppLayout() {
       <main id="main" className="min-w-0 flex-1">
         <Outlet />
       </main>
-      {/* Every signed-in screen shows results or leads to them, so every one carries the caution. */}
+      {/* Every signed-in screen shows results or leads to them, so every one carries the caution:
+          here, unless the view shows its own (a result view marks it data-caution). */}
       <footer
-        className="border-t border-concrete-200 px-4 py-3 text-xs text-concrete-600"
+        className="border-t border-concrete-200 px-4 py-3 text-xs text-concrete-600 [main:has([data-caution])~&]:hidden"
         data-testid="caution-footer"
       >
         {CAUTION}

@@ -1,20 +1,20 @@
-import { CircleCheck, CircleX } from 'lucide-react';
+import { CircleCheck, CircleHelp, CircleX } from 'lucide-react';
+import { DESIGN_WORDS, type DesignState } from '../../../shared/words/check-words';
+import { DESIGN_TEXT } from '../../lib/verdict-style';
+
+const ICONS = { pass: CircleCheck, fail: CircleX, none: CircleHelp } as const;
 
 /**
- * A stored result's verdict in words: "Checks pass" only when the engine said every check passed;
- * a design with no computed result is never shown as passing.
+ * A stored result's verdict in the product's words (shared/words/check-words.ts): "Passes" only
+ * when the engine said every check passed; a design with no computed result is never shown as passing.
  */
 export function VerdictWord({ ok }: { ok: boolean | null }) {
-  if (ok === null) return <span className="text-xs text-concrete-500">not checked</span>;
-  return ok ? (
-    <span className="inline-flex items-center gap-1 text-xs font-medium text-concrete-800 [&_svg]:text-util-calm">
-      <CircleCheck aria-hidden="true" className="h-3.5 w-3.5" />
-      Checks pass
-    </span>
-  ) : (
-    <span className="inline-flex items-center gap-1 text-xs font-medium text-util-over">
-      <CircleX aria-hidden="true" className="h-3.5 w-3.5" />
-      Checks fail
+  const state: DesignState = ok === null ? 'none' : ok ? 'pass' : 'fail';
+  const Icon = ICONS[state];
+  return (
+    <span className={`inline-flex items-center gap-1 text-xs font-medium ${DESIGN_TEXT[state]}`}>
+      <Icon aria-hidden="true" className="h-3.5 w-3.5" />
+      {DESIGN_WORDS[state]}
     </span>
   );
 }

@@ -1,6 +1,7 @@
 import type { RevisionDto } from '../../../../shared/schemas/api';
 import { diffDesigns } from '../../../../shared/schemas/diff';
 import { CautionNote } from '../../../components/ui/caution-note';
+import { verdictOf } from '../../../../shared/words/check-words';
 import { VerdictWord } from '../../../components/ui/verdict-word';
 import { useStations } from '../hooks/use-stations';
 import { ratioRows, ratioSummary } from '../../../lib/ratio-rows';
@@ -8,12 +9,10 @@ import { ChangedInputsTable } from '../../../components/diff/changed-inputs-tabl
 import { RatioTable } from '../../../components/diff/ratio-table';
 import { CompareCurves } from './compare-curves';
 
-/** Passes only when the engine said so and every check has a computed ratio. */
-function allComputedPass(revision: RevisionDto): boolean {
-  return (
-    revision.result.ok &&
-    revision.result.checks.every((c) => c.ok && c.ratio !== null && Number.isFinite(c.ratio))
-  );
+/** Passes only when the engine said so and every check passes with a computed ratio; no checks is no verdict. */
+function designOk(revision: RevisionDto): boolean | null {
+  const v = verdictOf(revision.result.checks, revision.result.ok);
+  return v.state === 'none' ? null : v.pass;
 }
 
 /** Two stored revisions side by side: changed inputs, check ratios and overlaid curves. */
@@ -39,10 +38,10 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
         </p>
         <p className="mt-1 flex flex-wrap gap-4 text-sm">
           <span>
-            {labelA}: <VerdictWord ok={allComputedPass(a)} />
+            {labelA}: <VerdictWord ok={designOk(a)} />
           </span>
           <span>
-            {labelB}: <VerdictWord ok={allComputedPass(b)} />
+            {labelB}: <VerdictWord ok={designOk(b)} />
           </span>
         </p>
       </section>
@@ -70,7 +69,6 @@ export function CompareView({ a, b }: { a: RevisionDto; b: RevisionDto }) {
           checksB={b.result.checks}
         />
       </section>
-      <CautionNote />
     </div>
   );
 }

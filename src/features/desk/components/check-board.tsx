@@ -1,20 +1,14 @@
 import { useId } from 'react';
 import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
-import { checkTone, checkWord, sortWorstFirst, type Tone } from '../../../../shared/words/check-words';
-
-const BAR: Record<Tone, string> = {
-  calm: 'bg-util-calm',
-  steady: 'bg-util-steady',
-  near: 'bg-util-near',
-  over: 'bg-util-over',
-};
-const TEXT: Record<Tone, string> = {
-  calm: 'text-util-calm',
-  steady: 'text-concrete-700',
-  near: 'text-concrete-800',
-  over: 'text-util-over',
-};
+import {
+  CHECK_MARKS,
+  checkTone,
+  checkWord,
+  sortWorstFirst,
+  type Tone,
+} from '../../../../shared/words/check-words';
+import { CHECK_BAR as BAR, CHECK_TEXT as TEXT } from '../../../lib/verdict-style';
 
 /** The bar runs to this ratio, so the limit (1.00) sits at 80 % of its length. */
 const BAR_END = 1.25;
@@ -204,7 +198,7 @@ export function CheckBoard({
                   role="cell"
                   className={`text-right text-xs font-semibold whitespace-nowrap sm:py-1.5 sm:text-left ${TEXT[tone]}`}
                 >
-                  {word === 'exceeds' || word === 'fails' || word === 'not computed' ? '✕ ' : ''}
+                  <span aria-hidden="true">{CHECK_MARKS[tone]} </span>
                   {word}
                 </td>
               </tr>

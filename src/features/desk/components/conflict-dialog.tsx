@@ -3,11 +3,7 @@ import type { DesignDocument } from '../../../../shared/schemas/design';
 import { diffDesigns } from '../../../../shared/schemas/diff';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
-
-function show(value: string | number | boolean | null): string {
-  if (value === null) return '(not set)';
-  return String(value);
-}
+import { pathWords, valueWords } from '../../../../shared/words/field-words';
 
 /**
  * Someone saved a newer revision while you were working. Shows their inputs against yours and lets
@@ -43,17 +39,25 @@ export function ConflictDialog({
           <table className="w-full text-sm" aria-label="Inputs that differ">
             <thead>
               <tr className="border-b border-concrete-300 text-left text-xs text-concrete-600">
-                <th className="py-1 pr-2 font-medium">Input</th>
-                <th className="py-1 pr-2 font-medium">Revision {latest.number}</th>
-                <th className="py-1 font-medium">Yours</th>
+                <th scope="col" className="py-1 pr-2 font-medium">
+                  Input
+                </th>
+                <th scope="col" className="py-1 pr-2 font-medium">
+                  Revision {latest.number}
+                </th>
+                <th scope="col" className="py-1 font-medium">
+                  Yours
+                </th>
               </tr>
             </thead>
             <tbody>
               {changes.map((c) => (
                 <tr key={c.path} className="border-b border-concrete-200">
-                  <td className="py-1 pr-2 font-mono text-xs">{c.path}</td>
-                  <td className="num py-1 pr-2">{show(c.before)}</td>
-                  <td className="num py-1 font-medium">{show(c.after)}</td>
+                  <th scope="row" className="py-1 pr-2 text-left font-normal">
+                    {pathWords(c.path)}
+                  </th>
+                  <td className="num py-1 pr-2">{valueWords(c.before)}</td>
+                  <td className="num py-1 font-medium">{valueWords(c.after)}</td>
                 </tr>
               ))}
             </tbody>

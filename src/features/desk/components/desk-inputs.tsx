@@ -1,5 +1,7 @@
 import { memo } from 'react';
 import type { FieldIssue } from '../../../../shared/schemas/quantity';
+import { focusField } from '../lib/focus-field';
+import { FieldProblemList } from './field-problem-list';
 import { LoadsGroup } from './loads-group';
 import { ReachGroup } from './reach-group';
 import { SectionGroup } from './section-group';
@@ -44,14 +46,8 @@ export function IssueSummary({ issues, failure }: { issues: readonly FieldIssue[
           ? 'the engine stopped on these inputs.'
           : `${issues.length} input${issues.length === 1 ? ' needs' : 's need'} attention.`}
       </p>
-      <ul className="mt-1 list-disc pl-4">
-        {issues.map((i) => (
-          <li key={`${i.path}:${i.message}`}>
-            <span className="font-mono">{i.path}</span>: {i.message}
-          </li>
-        ))}
-        {failure ? <li>{failure}</li> : null}
-      </ul>
+      <FieldProblemList issues={issues} onPick={focusField} className="mt-1" />
+      {failure ? <p className="mt-1">{failure}</p> : null}
     </div>
   );
 }

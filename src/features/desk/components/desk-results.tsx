@@ -6,6 +6,7 @@ import { ElevationPanel } from './elevation/elevation-panel';
 import { PlateSketch } from './plate-sketch';
 import { SteelSummary } from './steel-summary';
 import { Verdict } from './verdict';
+import { displayChecks } from '../../../../shared/words/check-display';
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -52,7 +53,7 @@ export const DeskResults = memo(function DeskResults({
           </Panel>
           <Panel title="Check board">
             <CheckBoard
-              checks={result.checks}
+              checks={displayChecks(result.checks, result.connection)}
               directions={Object.fromEntries(result.member.combinations.map((c) => [c.name, c.direction]))}
             />
           </Panel>

@@ -21,17 +21,21 @@ export function RevisionList({ cantileverId, current }: { cantileverId: number; 
           data-testid="revision-list"
         >
           {list.map((r) => (
-            <li key={r.id} className="flex flex-wrap items-baseline gap-x-2 py-1.5">
-              <span className="num font-mono font-semibold">
-                rev {r.number}
-                {r.number === current ? ' ·' : ''}
-              </span>
-              <span className="flex-1">{r.message}</span>
-              <span className="text-xs text-concrete-600">{r.authorName}</span>
-              <time className="num text-xs text-concrete-500" dateTime={r.createdAt}>
-                {new Date(r.createdAt).toLocaleString()}
-              </time>
-              <ReviewStateBadge state={r.reviewState} />
+            // The message gets a line of its own: squeezed beside the other items in a narrow
+            // panel it wrapped one word per line.
+            <li key={r.id} className="py-1.5">
+              <div className="flex flex-wrap items-baseline gap-x-2 gap-y-0.5">
+                <span className="num font-mono font-semibold">
+                  rev {r.number}
+                  {r.number === current ? ' (on the desk)' : ''}
+                </span>
+                <span className="text-xs text-concrete-600">{r.authorName}</span>
+                <time className="num text-xs text-concrete-600" dateTime={r.createdAt}>
+                  {new Date(r.createdAt).toLocaleString()}
+                </time>
+                <ReviewStateBadge state={r.reviewState} />
+              </div>
+              <p className="mt-0.5 whitespace-pre-wrap break-words text-concrete-900">{r.message}</p>
             </li>
           ))}
         </ol>

@@ -2,8 +2,17 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
+import type { Issue } from '../lib/issue-paths';
+import { FieldProblemList } from './field-problem-list';
 
-/** Asks what changed before a revision is saved; the message is required. */
+/** The id of the message form, so that Ctrl/Cmd+S in the dialog saves. */
+export const SAVE_FORM_ID = 'save-revision-form';
+
+/**
+ * Saving a revision. A design with invalid inputs cannot be saved: the dialog then lists those
+ * inputs in words, each a button to the field, and asks for no message. Otherwise it asks what
+ * changed (the message is required).
+ */
 export function SaveDialog({
   open,
   onClose,
@@ -11,7 +20,9 @@ export function SaveDialog({
   saving,
   error,
   initialMessage = '',
-  baseLabel,
+  nextLabel,
+  problems,
+  onPickProblem,
 }: {
   open: boolean;
   onClose: () => void;
@@ -19,7 +30,10 @@ export function SaveDialog({
   saving: boolean;
   error: string | null;
   initialMessage?: string;
-  baseLabel: string;
+  /** What the save makes, in the future tense: "Saves as revision 3, on top of revision 2." */
+  nextLabel: string;
+  problems: readonly Issue[];
+  onPickProblem: (path: string) => void;
 }) {
   const [message, setMessage] = useState(initialMessage);
   const [touched, setTouched] = useState(false);
@@ -30,17 +44,36 @@ export function SaveDialog({
       : message.length > 500
         ? 'is too long (500 characters at most)'
         : undefined;
+  if (problems.length > 0) {
+    const count = problems.length === 1 ? '1 input needs' : `${problems.length} inputs need`;
+    return (
+      <Dialog open={open} title="This design cannot be saved yet" onClose={onClose}>
+        <div className="flex flex-col gap-3" data-testid="save-blocked">
+          <p className="text-sm text-concrete-800" id="save-blocked-text">
+            {count} attention first. Choose one to go to its field; nothing has been saved.
+          </p>
+          <FieldProblemList issues={problems} onPick={onPickProblem} className="text-sm text-util-over" />
+          <div className="flex justify-end">
+            <Button onClick={onClose} data-autofocus>
+              Back to the inputs
+            </Button>
+          </div>
+        </div>
+      </Dialog>
+    );
+  }
   return (
     <Dialog open={open} title="Save revision" onClose={onClose}>
       <form
+        id={SAVE_FORM_ID}
         className="flex flex-col gap-3"
         onSubmit={(e) => {
           e.preventDefault();
           setTouched(true);
-          if (!empty && message.length <= 500) onSave(message.trim());
+          if (!empty && message.length <= 500 && !saving) onSave(message.trim());
         }}
       >
-        <p className="text-sm text-concrete-600">{baseLabel}</p>
+        <p className="text-sm text-concrete-700">{nextLabel}</p>
         <Field id="revision-message" label="Message" error={fieldError}>
           <textarea
             id="revision-message"

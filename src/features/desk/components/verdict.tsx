@@ -1,6 +1,7 @@
 import { AlertTriangle, CheckCircle2, XCircle } from 'lucide-react';
 import { CAUTION, type Check } from '../../../../shared/engine/types';
 import { verdictOf } from '../../../../shared/words/check-words';
+import { DESIGN_TEXT } from '../../../lib/verdict-style';
 
 /** The overall verdict in words (announced when it changes), and the caution under it, always. */
 export function Verdict({ checks, stale }: { checks: readonly Check[] | null; stale: boolean }) {
@@ -10,7 +11,7 @@ export function Verdict({ checks, stale }: { checks: readonly Check[] | null; st
       <p
         aria-live="polite"
         data-testid="verdict"
-        className={`flex items-center gap-2 font-semibold ${v?.pass ? 'text-util-calm' : 'text-util-over'}`}
+        className={`flex items-center gap-2 font-semibold ${DESIGN_TEXT[v?.state ?? 'none']}`}
       >
         {v === null ? (
           <span className="text-concrete-600">No result yet.</span>
@@ -22,7 +23,7 @@ export function Verdict({ checks, stale }: { checks: readonly Check[] | null; st
               <XCircle size={18} aria-hidden="true" />
             )}
             <span>
-              {v.pass ? 'Passes. ' : 'Does not pass. '}
+              {`${v.word}. `}
               {v.sentence}
             </span>
           </>
@@ -31,7 +32,11 @@ export function Verdict({ checks, stale }: { checks: readonly Check[] | null; st
           <span className="text-xs font-normal text-concrete-500">(for the last inputs that computed)</span>
         ) : null}
       </p>
-      <p className="mt-1 flex items-start gap-1.5 text-xs text-concrete-700" data-testid="caution">
+      <p
+        className="mt-1 flex items-start gap-1.5 text-xs text-concrete-700"
+        data-testid="caution"
+        data-caution
+      >
         <AlertTriangle size={14} className="mt-px shrink-0 text-oxide-500" aria-hidden="true" />
         {CAUTION}
       </p>

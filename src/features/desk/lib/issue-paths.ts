@@ -17,3 +17,10 @@ export function issuesByField(issues: readonly Issue[]): Map<string, string> {
   }
   return map;
 }
+
+/** Form problems first, then the engine's on fields the form has no problem with; one entry per field. */
+export function mergeIssues(form: readonly Issue[], engine: ReadonlyMap<string, string>): Issue[] {
+  const seen = new Set(form.map((i) => toFieldName(i.path)));
+  const extra = [...engine].filter(([name]) => !seen.has(name)).map(([path, message]) => ({ path, message }));
+  return [...form, ...extra];
+}

@@ -1,6 +1,7 @@
 import type { DesignResult } from '../../../../shared/engine/types';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { formatQuantity, type Quantity } from '../../../../shared/engine/units';
+import { displayCheck } from '../../../../shared/words/check-display';
 
 function largest<T>(items: T[], value: (item: T) => number): T | undefined {
   return items.reduce<T | undefined>(
@@ -50,6 +51,9 @@ export function KeyResults({ result, input }: { result: DesignResult; input: Des
   const total = result.checks.find((c) => c.id === 'member.deflection.total');
   const live = result.checks.find((c) => c.id === 'member.deflection.live');
   const connection = result.connection;
+  const bearingCheck = result.checks.find((c) => c.id === 'plate.bearing');
+  // In stress units, as the check list shows it (never as moments).
+  const bearing = bearingCheck ? displayCheck(bearingCheck, connection) : undefined;
   return (
     <dl className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
       <Item term="Root moment (largest combination)" value={moment?.rootMoment} detail={moment?.name} />
@@ -81,6 +85,13 @@ export function KeyResults({ result, input }: { result: DesignResult; input: Des
             value={connection.anchorTensionPerRod}
             detail={`bearing length ${formatQuantity(connection.bearingLength)}`}
           />
+          {bearing ? (
+            <Item
+              term="Concrete bearing under the plate"
+              value={bearing.demand}
+              detail={bearing.capacity ? `available ${formatQuantity(bearing.capacity)}` : undefined}
+            />
+          ) : null}
           <Item
             term="Plate thickness required"
             value={connection.requiredThickness}

@@ -9,6 +9,8 @@ import { ReviewStateBadge } from '../../../components/ui/review-state-badge';
 import { VerdictWord } from '../../../components/ui/verdict-word';
 import { CommentsThread } from '../../../components/comments-thread';
 import { formatDateTime } from '../../../lib/format';
+import { verdictOf } from '../../../../shared/words/check-words';
+import { displayChecks } from '../../../../shared/words/check-display';
 import { CheckList } from './check-list';
 import { KeyResults } from './key-results';
 import { BaseChanges } from './base-changes';
@@ -49,7 +51,7 @@ export function ReviewView({
   evidence?: ReactNode;
   newer?: NewerRevision | null;
 }) {
-  const failing = revision.result.checks.filter((c) => !c.ok || c.ratio === null).length;
+  const verdict = verdictOf(revision.result.checks, revision.result.ok);
   return (
     <div className="space-y-4">
       <header className="space-y-1">
@@ -103,15 +105,12 @@ export function ReviewView({
       </div>
       <Section id="review-verdict" title="Verdict and checks">
         <p className="mb-2 text-sm">
-          <VerdictWord ok={revision.result.ok && failing === 0} />{' '}
+          <VerdictWord ok={verdict.state === 'none' ? null : verdict.pass} />{' '}
           <span className="text-concrete-700">
-            {failing === 0
-              ? `All ${revision.result.checks.length} checks pass.`
-              : `${failing} of ${revision.result.checks.length} checks fail or were not computed.`}{' '}
-            {revision.result.method}, results in {revision.result.units} units.
+            {verdict.sentence} {revision.result.method}, results in {revision.result.units} units.
           </span>
         </p>
-        <CheckList checks={revision.result.checks} />
+        <CheckList checks={displayChecks(revision.result.checks, revision.result.connection)} />
       </Section>
       {evidence ? (
         <Section id="review-evidence" title="Inputs, diagrams and sketches">
@@ -140,7 +139,6 @@ export function ReviewView({
       <Section id="review-record" title="Review record">
         <ReviewRecord reviews={revision.reviews} />
       </Section>
-      <CautionNote />
     </div>
   );
 }

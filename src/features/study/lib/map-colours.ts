@@ -5,6 +5,7 @@
  * table give the numbers and words.
  */
 import type { CellOutcome } from '../../../../shared/study/evaluate-cell';
+import { CHECK_WORDS } from '../../../../shared/words/check-words';
 
 const BANDS: { upTo: number; from: number; colour: string }[] = [
   { upTo: 0.6, from: 0, colour: '#5b8a72' },
@@ -37,9 +38,10 @@ export function cellFill(o: CellOutcome | undefined): string {
   return mix(band.colour, 0.45 * (1 - t));
 }
 
+/** The bands in the product's words (shared/words/check-words.ts); the ratio ranges tell the bands apart. */
 export const LEGEND = [
-  { label: 'ample (< 0.6)', colour: '#5b8a72' },
-  { label: 'adequate (0.6-0.9)', colour: '#8a9a4b' },
-  { label: 'near limit (0.9-1.0)', colour: '#c99a2e' },
-  { label: 'exceeds (> 1.0), hatched', colour: '#b3261e' },
+  { label: `${CHECK_WORDS.pass} (ratio < 0.6)`, colour: '#5b8a72' },
+  { label: `${CHECK_WORDS.pass} (ratio 0.6-0.9)`, colour: '#8a9a4b' },
+  { label: `${CHECK_WORDS.near} (0.9-1.0)`, colour: '#c99a2e' },
+  { label: `${CHECK_WORDS.fail} (> 1.0), hatched`, colour: '#b3261e' },
 ];
