@@ -43,8 +43,9 @@ export function createEnginePool(threads: number): EnginePool {
     execArgv,
     minThreads: threads,
     maxThreads: threads,
-    // Tasks wait in the queue rather than fail; a request's own time limit is the proxy's.
-    maxQueue: 'auto',
+    // Every task waits its turn (an unbounded queue): a burst of checks is slow, never refused.
+    // The request body limit and the proxy's time limit bound what can pile up.
+    maxQueue: Infinity,
   });
   return {
     threads,

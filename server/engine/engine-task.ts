@@ -16,8 +16,7 @@ export interface EngineTask {
 }
 
 export type EngineAnswer =
-  | { ok: true; json: string }
-  | { ok: false; issues: { path: string; message: string }[] };
+  { ok: true; json: string } | { ok: false; issues: { path: string; message: string }[] };
 
 export function runEngineTask(task: EngineTask): EngineAnswer {
   try {

@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestEnv, type TestEnv } from '../helpers/api';
+import { baseDesign, createTestEnv, type TestEnv } from '../helpers/api';
 import { fuzzRuns, fuzzTimeout, mutatedDesign } from '../helpers/fuzz';
 
 describe('the engine in worker threads', { timeout: fuzzTimeout(120_000) }, () => {
@@ -23,6 +23,15 @@ describe('the engine in worker threads', { timeout: fuzzTimeout(120_000) }, () =
   afterAll(async () => {
     await pooled?.close();
     await inline?.close();
+  });
+
+  it('answers a burst of concurrent checks, more than the pool has threads, all with 200', async () => {
+    const doc = baseDesign();
+    const answers = await Promise.all(
+      Array.from({ length: 24 }, () => viaPool.post('/api/check').send({ input: doc })),
+    );
+    expect(answers.map((a) => a.status)).toEqual(answers.map(() => 200));
+    expect(new Set(answers.map((a) => a.text)).size).toBe(1);
   });
 
   it('answers every document as the in-line engine does', async () => {
