@@ -1,5 +1,6 @@
 import type { FieldChange } from '../../../shared/schemas/diff';
 import { pathWords, valueWords } from '../../../shared/words/field-words';
+import { ScrollBox } from '../ui/scroll-box';
 
 interface ChangedInputsTableProps {
   changes: FieldChange[];
@@ -13,38 +14,40 @@ export function ChangedInputsTable({ changes, labelA, labelB }: ChangedInputsTab
     return <p className="text-sm text-concrete-700">The two revisions have the same inputs.</p>;
   }
   return (
-    <table className="w-full border-collapse text-sm">
-      <caption className="sr-only">
-        Changed inputs, {labelA} then {labelB}
-      </caption>
-      <thead>
-        <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">
-            Input
-          </th>
-          <th scope="col" className="py-1 pr-3 font-medium">
-            {labelA}
-          </th>
-          <th scope="col" className="py-1 font-medium">
-            {labelB}
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {changes.map((change) => (
-          <tr key={change.path} className="border-b border-concrete-100 align-top">
-            <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
-              {pathWords(change.path)}
+    <ScrollBox label={`Changed inputs, ${labelA} then ${labelB}`}>
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">
+          Changed inputs, {labelA} then {labelB}
+        </caption>
+        <thead>
+          <tr className="border-b border-concrete-300 text-left text-concrete-700">
+            <th scope="col" className="py-1 pr-3 font-medium">
+              Input
             </th>
-            <td className="py-1 pr-3 font-mono tabular-nums text-concrete-700">
-              {valueWords(change.before)}
-            </td>
-            <td className="py-1 font-mono tabular-nums font-medium text-concrete-900">
-              {valueWords(change.after)}
-            </td>
+            <th scope="col" className="py-1 pr-3 font-medium">
+              {labelA}
+            </th>
+            <th scope="col" className="py-1 font-medium">
+              {labelB}
+            </th>
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {changes.map((change) => (
+            <tr key={change.path} className="border-b border-concrete-100 align-top">
+              <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
+                {pathWords(change.path)}
+              </th>
+              <td className="py-1 pr-3 font-mono tabular-nums text-concrete-700">
+                {valueWords(change.before)}
+              </td>
+              <td className="py-1 font-mono tabular-nums font-medium text-concrete-900">
+                {valueWords(change.after)}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </ScrollBox>
   );
 }

@@ -3,6 +3,7 @@ import { TREND_WORDS } from '../../../shared/words/check-words';
 import type { RatioRow, RatioTrend } from '../../lib/ratio-rows';
 import { TREND_TEXT } from '../../lib/verdict-style';
 import { RatioCell } from './ratio-cell';
+import { ScrollBox } from '../ui/scroll-box';
 
 const ICONS: Record<RatioTrend, LucideIcon> = {
   up: ArrowUp,
@@ -23,54 +24,56 @@ function signed(change: number | null): string {
 /** Every check's ratio before and after, the change and a word for it. */
 export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA: string; labelB: string }) {
   return (
-    <table className="w-full border-collapse text-sm">
-      <caption className="sr-only">
-        Check ratios, {labelA} and {labelB}
-      </caption>
-      <thead>
-        <tr className="border-b border-concrete-300 text-left text-concrete-700">
-          <th scope="col" className="py-1 pr-3 font-medium">
-            Check
-          </th>
-          <th scope="col" className="py-1 pr-3 font-medium">
-            {labelA}
-          </th>
-          <th scope="col" className="py-1 pr-3 font-medium">
-            {labelB}
-          </th>
-          <th scope="col" className="py-1 pr-3 font-medium">
-            Change
-          </th>
-          <th scope="col" className="py-1 font-medium">
-            Trend
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((row) => {
-          const Icon = ICONS[row.trend];
-          return (
-            <tr key={row.id} className="border-b border-concrete-100" data-check={row.id}>
-              <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
-                {row.title}
-              </th>
-              <td className="py-1 pr-3">
-                <RatioCell ratio={row.ratioA} ok={row.okA} />
-              </td>
-              <td className="py-1 pr-3">
-                <RatioCell ratio={row.ratioB} ok={row.okB} />
-              </td>
-              <td className="py-1 pr-3 font-mono tabular-nums">{signed(row.change)}</td>
-              <td className={`py-1 ${TREND_TEXT[row.trend]}`}>
-                <span className="inline-flex items-center gap-1">
-                  <Icon aria-hidden="true" className="h-4 w-4" />
-                  {TREND_WORDS[row.trend]}
-                </span>
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <ScrollBox label={`Check ratios, ${labelA} and ${labelB}`}>
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">
+          Check ratios, {labelA} and {labelB}
+        </caption>
+        <thead>
+          <tr className="border-b border-concrete-300 text-left text-concrete-700">
+            <th scope="col" className="py-1 pr-3 font-medium">
+              Check
+            </th>
+            <th scope="col" className="py-1 pr-3 font-medium">
+              {labelA}
+            </th>
+            <th scope="col" className="py-1 pr-3 font-medium">
+              {labelB}
+            </th>
+            <th scope="col" className="py-1 pr-3 font-medium">
+              Change
+            </th>
+            <th scope="col" className="py-1 font-medium">
+              Trend
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((row) => {
+            const Icon = ICONS[row.trend];
+            return (
+              <tr key={row.id} className="border-b border-concrete-100" data-check={row.id}>
+                <th scope="row" className="py-1 pr-3 text-left font-normal text-concrete-900">
+                  {row.title}
+                </th>
+                <td className="py-1 pr-3">
+                  <RatioCell ratio={row.ratioA} ok={row.okA} />
+                </td>
+                <td className="py-1 pr-3">
+                  <RatioCell ratio={row.ratioB} ok={row.okB} />
+                </td>
+                <td className="py-1 pr-3 font-mono tabular-nums">{signed(row.change)}</td>
+                <td className={`py-1 ${TREND_TEXT[row.trend]}`}>
+                  <span className="inline-flex items-center gap-1">
+                    <Icon aria-hidden="true" className="h-4 w-4" />
+                    {TREND_WORDS[row.trend]}
+                  </span>
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </ScrollBox>
   );
 }

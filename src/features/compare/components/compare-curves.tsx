@@ -44,7 +44,7 @@ export function CompareCurves({ labelA, labelB, stationsA, stationsB, checksB }:
 
   return (
     <div className="space-y-3">
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid min-w-0 gap-4 lg:grid-cols-2">
         <div className="space-y-2 text-sm">
           <SeriesSelect
             label="Moment and shear under"

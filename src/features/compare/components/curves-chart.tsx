@@ -49,7 +49,7 @@ export function CurvesChart({
     [a.points, b.points, limit],
   );
   return (
-    <figure className="space-y-1">
+    <figure className="min-w-0 space-y-1">
       <figcaption className="text-sm font-medium text-concrete-800">
         {quantity} ({unit}) under {under}
         {note ? `, ${note}` : ''}
