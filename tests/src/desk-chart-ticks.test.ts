@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { positionTicks, valueTicks } from '../../src/features/desk/lib/chart-ticks';
+import { positionTicks, valueTicks } from '../../src/lib/chart-ticks';
 
 const steps = (ticks: number[]) => ticks.slice(1).map((t, i) => Number((t - ticks[i]!).toPrecision(6)));
 

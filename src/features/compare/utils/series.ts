@@ -1,5 +1,6 @@
 import type { Check, Stations, StationSeries } from '../../../../shared/engine/types';
 import { convert } from '../../../../shared/engine/units';
+import { seriesFromCases } from '../../../lib/combination-series';
 
 export type Curve = 'V' | 'M' | 'deflection';
 
@@ -32,41 +33,11 @@ export function seriesNames(...all: (Stations | undefined)[]): string[] {
   return names;
 }
 
-/**
- * A combination written the way the engine names them ("D + L", "1.2D + 1.6L") built from the
- * unfactored case series, for the service combinations the deflection checks use. Cases a design does
- * not have contribute nothing; an unreadable name gives undefined.
- */
-function fromCases(stations: Stations, name: string): StationSeries | undefined {
-  const terms = name.split('+').map((t) => /^\s*(\d*\.?\d*)\s*([A-Za-z]+)\s*$/.exec(t));
-  if (terms.some((t) => t === null)) return undefined;
-  const n = stations.x.length;
-  const out: StationSeries = {
-    name,
-    V: new Array<number>(n).fill(0),
-    M: new Array<number>(n).fill(0),
-    deflection: new Array<number>(n).fill(0),
-  };
-  let used = 0;
-  for (const t of terms as RegExpExecArray[]) {
-    const series = stations.cases.find((c) => c.name === t[2]);
-    if (!series) continue;
-    used += 1;
-    const factor = t[1] ? Number(t[1]) : 1;
-    for (let i = 0; i < n; i += 1) {
-      out.V[i] += factor * series.V[i];
-      out.M[i] += factor * series.M[i];
-      out.deflection[i] += factor * series.deflection[i];
-    }
-  }
-  return used > 0 ? out : undefined;
-}
-
 function findSeries(stations: Stations, name: string): StationSeries | undefined {
   return (
     stations.combinations.find((c) => c.name === name) ??
     stations.cases.find((c) => c.name === name) ??
-    fromCases(stations, name)
+    seriesFromCases(stations, name)
   );
 }
 

@@ -1,6 +1,9 @@
 /** The series the elevation can show, its rows and plain-words summaries, from a result's stations. */
-import type { Check, DesignResult, Stations, StationSeries } from '../../../../shared/engine/types';
+import type { Check, DesignResult, StationSeries } from '../../../../shared/engine/types';
 import { convert, formatQuantity, type Quantity } from '../../../../shared/engine/units';
+import { seriesFromCases } from '../../../lib/combination-series';
+
+export { seriesFromCases };
 
 /** A deflection check's limit, for the marker at the tip. */
 export interface SeriesLimit {
@@ -18,35 +21,6 @@ export interface SeriesChoice {
   series: StationSeries;
   /** Set when the series is the combination a deflection check uses: its limit applies to this curve. */
   limit?: SeriesLimit;
-}
-
-/**
- * A combination as the engine names its service combinations ("D + 0.75L + 0.75S") summed from the
- * unfactored case series; undefined when a term does not read or no case of it is present.
- */
-export function seriesFromCases(stations: Stations, name: string): StationSeries | undefined {
-  const terms = name.split('+').map((t) => /^\s*(\d*\.?\d*)\s*([A-Za-z]+)\s*$/.exec(t));
-  if (terms.length === 0 || terms.some((t) => t === null)) return undefined;
-  const n = stations.x.length;
-  const out: StationSeries = {
-    name,
-    V: new Array<number>(n).fill(0),
-    M: new Array<number>(n).fill(0),
-    deflection: new Array<number>(n).fill(0),
-  };
-  let used = 0;
-  for (const t of terms as RegExpExecArray[]) {
-    const series = stations.cases.find((c) => c.name === t[2]);
-    if (!series) continue;
-    used += 1;
-    const factor = t[1] ? Number(t[1]) : 1;
-    for (let i = 0; i < n; i += 1) {
-      out.V[i] += factor * series.V[i];
-      out.M[i] += factor * series.M[i];
-      out.deflection[i] += factor * series.deflection[i];
-    }
-  }
-  return used > 0 ? out : undefined;
 }
 
 function checkLimit(check: Check, unit: string, which: string): SeriesLimit | undefined {

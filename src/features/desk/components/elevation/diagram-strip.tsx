@@ -1,7 +1,7 @@
 import { memo, useMemo } from 'react';
 import { CartesianGrid, Line, LineChart, XAxis, YAxis, type LineDrawShapeProps } from 'recharts';
 
-import type { AxisTicks } from '../../lib/chart-ticks';
+import type { AxisTicks } from '../../../../lib/chart-ticks';
 import type { ChartRow } from '../../lib/chart-data';
 import { AxisTick } from '../axis-tick';
 import { AXIS_WIDTH, pixelOf, RIGHT_GAP, type Frame } from './frame';

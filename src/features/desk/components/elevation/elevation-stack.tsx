@@ -11,7 +11,7 @@ import {
 import type { Stations } from '../../../../../shared/engine/types';
 import { convert, formatQuantity } from '../../../../../shared/engine/units';
 import { chartRows, peak, type SeriesChoice } from '../../lib/chart-data';
-import { positionTicks, valueTicks } from '../../lib/chart-ticks';
+import { positionTicks, valueTicks } from '../../../../lib/chart-ticks';
 import {
   isCursorKey,
   limitMarker,

@@ -1,7 +1,7 @@
 /**
- * Axis ticks for the desk's diagrams, worked out once per result with d3-scale (the scale library
- * recharts itself uses): handing the chart a fixed domain and tick list spares it the "nice ticks"
- * search on every redraw.
+ * Axis ticks for the desk's diagrams and the compare curves, worked out once per result with
+ * d3-scale (the scale library recharts itself uses): handing the chart a fixed domain and tick
+ * list spares it the "nice ticks" search on every redraw.
  */
 import { scaleLinear } from 'd3-scale';
 
