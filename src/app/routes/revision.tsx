@@ -86,6 +86,7 @@ export default function RevisionRoute() {
       </header>
       <div className="grid gap-4 p-4 lg:grid-cols-[26rem_1fr]">
         <div className="flex flex-col gap-2">
+          <h2 className="text-sm font-semibold text-concrete-800">Inputs</h2>
           <DesignInputsList doc={r.input} />
         </div>
         <RevisionResults revision={r} />

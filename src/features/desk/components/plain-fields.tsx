@@ -187,7 +187,8 @@ export function Group({
       className="rounded-md border border-concrete-300 bg-white"
     >
       <summary className="cursor-pointer select-none px-3 py-2 text-sm font-semibold text-concrete-800">
-        {title}
+        {/* A heading, so the groups' own sub-headings (h3) follow an h2 and a screen reader can jump between groups. */}
+        <h2 className="inline text-sm font-semibold">{title}</h2>
       </summary>
       <fieldset disabled={disabled} className="flex flex-col gap-2 px-3 pb-3">
         <legend className="sr-only">{title}</legend>

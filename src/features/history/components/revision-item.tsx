@@ -51,7 +51,7 @@ export function RevisionItem({
           className="mt-1 h-4 w-4 accent-oxide-600"
         />
         <div className="min-w-0 flex-1 space-y-1">
-          <h3
+          <h2
             id={`rev-${revision.id}-title`}
             className="flex flex-wrap items-center gap-2 text-base font-semibold text-concrete-900"
           >
@@ -60,7 +60,7 @@ export function RevisionItem({
             </label>
             <ReviewStateBadge state={revision.reviewState} />
             <VerdictWord ok={revision.ok} />
-          </h3>
+          </h2>
           <p className="whitespace-pre-wrap text-sm text-concrete-900">{revision.message}</p>
           <p className="text-xs text-concrete-600">
             {revision.authorName} ·{' '}
