@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import { assertAccessible } from '../helpers/axe';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -16,10 +16,7 @@ beforeAll(async () => {
   const session = await e2e.newSession();
   page = session.page;
   await e2e.signInAs(session.context, 'engineer');
-  await page.goto('/projects');
-  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
-  await page.getByTestId('tip-deflection').waitFor();
+  await openDemoDesk(page);
 });
 
 afterAll(async () => {

@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -16,10 +16,7 @@ beforeAll(async () => {
   page = session.page;
   context = session.context;
   await e2e.signInAs(context, 'engineer');
-  await page.goto('/projects');
-  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
-  await page.getByTestId('tip-deflection').waitFor();
+  await openDemoDesk(page);
 });
 
 afterAll(async () => {

@@ -11,7 +11,7 @@ import type { RevisionDto } from '../../shared/schemas/api';
 import type { StationSeries } from '../../shared/engine/types';
 import { formatQuantity } from '../../shared/engine/units';
 import { assertAccessible } from '../helpers/axe';
-import { SCREEN_DIR, startE2E, type E2E } from '../helpers/e2e';
+import { SCREEN_DIR, startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -25,10 +25,7 @@ beforeAll(async () => {
   page = session.page;
   await e2e.signInAs(session.context, 'engineer');
   await page.setViewportSize({ width: 1440, height: 900 });
-  await page.goto('/projects');
-  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
-  await page.getByTestId('tip-deflection').waitFor();
+  await openDemoDesk(page);
   const cantileverId = Number(/\/cantilevers\/(\d+)/.exec(page.url())?.[1]);
   const res = await session.context.request.get(`${e2e.baseUrl}/api/cantilevers/${cantileverId}`);
   const cantilever = (await res.json()) as { currentRevisionId: number };

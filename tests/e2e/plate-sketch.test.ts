@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
 import { assertAccessible } from '../helpers/axe';
 
 let e2e: E2E;
@@ -18,10 +18,7 @@ beforeAll(async () => {
   page = session.page;
   await e2e.signInAs(session.context, 'fabricator');
   await page.setViewportSize({ width: 1440, height: 900 });
-  await page.goto('/projects');
-  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
-  await page.getByTestId('plate-sketch').waitFor();
+  await openDemoDesk(page, 'plate-sketch');
 });
 
 afterAll(async () => {

@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { assertAccessible } from '../helpers/axe';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -19,10 +19,7 @@ beforeAll(async () => {
   page = session.page;
   context = session.context;
   await e2e.signInAs(context, 'architect');
-  await page.goto('/projects');
-  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-  await page.getByRole('link', { name: 'East deck, typical beam' }).click();
-  await page.getByTestId('tip-deflection').waitFor();
+  await openDemoDesk(page);
 });
 
 afterAll(async () => {

@@ -76,3 +76,14 @@ export async function startE2E(): Promise<E2E> {
 
   return { baseUrl: server.url, newSession, signInAs, screenshot, close };
 }
+
+/**
+ * Opens the demo's east deck on the desk the way a person does (projects list, project, cantilever)
+ * and waits until `ready` (a test id) is drawn.
+ */
+export async function openDemoDesk(page: Page, ready = 'tip-deflection'): Promise<void> {
+  await page.goto('/projects');
+  await page.getByRole('link', { name: /Harbor View Studio/ }).click();
+  await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
+  await page.getByTestId(ready).waitFor();
+}
