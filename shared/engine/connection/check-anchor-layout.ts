@@ -32,13 +32,21 @@ export function clearanceToFootprint(x: number, y: number, fp: Footprint): numbe
   return Math.hypot(dx, dy);
 }
 
+/**
+ * The least rod centre to pier edge, in: 6 da for torqued rods, else 2 in cover + da/2 (ACI 318-19
+ * 17.9.2 with the 20.5.1.3 cover, from memory). The plate sketch marks rods nearer than this.
+ */
+export function pierEdgeMinimum(da: number, torqued: boolean): number {
+  return torqued ? 6 * da : 2 + da / 2;
+}
+
 export function evaluateAnchorLayout(geo: ConnectionGeometry, units: UnitSystem): Evaluation {
   const problem = rodProblem(geo);
   if (problem || !geo.rod) return notComputed('smallLength', problem ?? 'unknown rod size');
   const { rod, da } = geo;
   const eMin = rodEdgeMinimum(rod);
   const spacing = Math.max(geo.torqued ? 6 * da : 4 * da, rod.washerSize);
-  const pierEdge = geo.torqued ? 6 * da : 2 + da / 2;
+  const pierEdge = pierEdgeMinimum(da, geo.torqued);
   const c: Condition[] = [
     {
       what: 'Rod centre to plate edge along N',

@@ -11,13 +11,8 @@ import { lengthText } from './plate-drawing-format';
 /** The role each row of rods plays under the combination that governs the plate (null: not computed). */
 export type RodRoles = Record<'tension' | 'compression', 'tension' | 'compression' | null>;
 
-/**
- * The least rod centre to pier edge, in, as anchors.layout (check-anchor-layout.ts) takes it:
- * 6 da for torqued rods, else 2 in cover + da/2 (ACI 318-19 17.9.2 with 20.5.1.3, from memory).
- */
-export function pierEdgeMinimum(da: number, torqued: boolean): number {
-  return torqued ? 6 * da : 2 + da / 2;
-}
+/** The least rod centre to pier edge: the engine's own rule, the one anchors.layout checks. */
+export { pierEdgeMinimum } from '../../../../shared/engine/connection/check-anchor-layout';
 
 /** The row at +x (toward the tension row under a downward moment) and at -x, in words. */
 export function rowWords(arrangement: PlateLayout['arrangement'], x: number): string {
