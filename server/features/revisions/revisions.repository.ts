@@ -26,11 +26,28 @@ interface ReviewRow {
 
 type SummaryRow = RevisionRow & { author_name: string; base_number: number | null };
 
-function summarySelect(db: Db) {
+/** The columns a summary reads: not the input and result documents (about 20 kB a revision). */
+const SUMMARY_COLUMNS = [
+  'r.id',
+  'r.cantilever_id',
+  'r.number',
+  'r.author_id',
+  'r.message',
+  'r.engine_version',
+  'r.created_at',
+  'r.ok',
+];
+
+/** Revisions with author and base number; `documents` adds every column of the revision. */
+function summarySelect(db: Db, documents: 'with documents' | 'summary only' = 'with documents') {
   return db('revisions as r')
     .join('users as u', 'u.id', 'r.author_id')
     .leftJoin('revisions as b', 'b.id', 'r.base_revision_id')
-    .select('r.*', 'u.display_name as author_name', 'b.number as base_number');
+    .select(
+      ...(documents === 'with documents' ? ['r.*'] : SUMMARY_COLUMNS),
+      'u.display_name as author_name',
+      'b.number as base_number',
+    );
 }
 
 /** The latest review state of each revision ('draft' when never submitted). */
@@ -65,7 +82,7 @@ function toSummary(row: SummaryRow, state: ReviewState): RevisionSummaryDto {
 }
 
 export async function listRevisionSummaries(db: Db, cantileverId: number): Promise<RevisionSummaryDto[]> {
-  const rows = (await summarySelect(db)
+  const rows = (await summarySelect(db, 'summary only')
     .where('r.cantilever_id', cantileverId)
     .orderBy('r.number', 'desc')) as SummaryRow[];
   const states = await reviewStates(
