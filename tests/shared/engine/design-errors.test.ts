@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { assertFinite } from '../../../shared/engine/finite-guard';
 import { DesignInputError } from '../../../shared/engine/types';
 import { designSchema } from '../../../shared/schemas/design';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 import { toFieldIssues } from '../../../shared/schemas/quantity';
 import { memberDoc, run } from './design-helpers';
 
@@ -144,7 +145,6 @@ describe('sizes outside what the engine checks', () => {
 describe("a user's imported shapes", () => {
   it('are used through options.shapes; one without the dimensions its checks need is refused', async () => {
     const { lookupWith } = await import('../../../shared/engine/shapes/table');
-    const { designSchema } = await import('../../../shared/schemas/design');
     const { evaluateDesign } = await import('../../../shared/engine/design');
     // A custom welded W of our own: plates 10 x 6 x 3/8 in flanges, 1/4 in web, no torsional columns.
     const custom = {
@@ -164,12 +164,12 @@ describe("a user's imported shapes", () => {
       J: 0.3,
       custom: true,
     };
-    const doc = designSchema.parse(memberDoc({ shape: 'MYW10', loads: someLoad }));
+    const doc = parsedDesignSchema.parse(memberDoc({ shape: 'MYW10', loads: someLoad }));
     const r = evaluateDesign(doc, { shapes: lookupWith([custom]) });
     expect(r.member.section.label).toBe('MYW10');
     expect(r.checks.every((c) => Number.isFinite(c.ratio))).toBe(true);
     const broken = { ...custom, label: 'BROKEN', tw: undefined };
-    const bad = designSchema.parse(memberDoc({ shape: 'BROKEN', loads: someLoad }));
+    const bad = parsedDesignSchema.parse(memberDoc({ shape: 'BROKEN', loads: someLoad }));
     expect(() => evaluateDesign(bad, { shapes: lookupWith([broken]) })).toThrow(/BROKEN lacks tw/);
   });
 });
