@@ -12,7 +12,7 @@ import { flangeWebWeldCheck } from './checks/flange-web-weld';
 import { shearCheck } from './checks/shear-check';
 import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
-import { assertFinite } from './finite-guard';
+import { assertFinite, assertStationsFinite } from './finite-guard';
 import { inputProblems, MAX_TAPER_SLOPE } from './input-limits';
 import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
@@ -226,9 +226,12 @@ export function evaluateDesign(input: ParsedDesign, options: EvaluateOptions = {
     const S = quantity(root.S, 'moment', units);
     connection.rootStiffness = { value: S.value, unit: `${S.unit}/rad` };
   }
-  if (options.stations)
-    result.stations = stationArrays(model, section, combos, units, root ? rotationByCase : {});
   assertFinite(result);
+  if (options.stations) {
+    const stations = stationArrays(model, combos, units, root ? rotationByCase : {});
+    assertStationsFinite(stations);
+    result.stations = stations;
+  }
   return result;
 }
 

@@ -98,7 +98,7 @@ const CACHE_LIMIT = 500;
 function demandFree(input: ParsedConnection, root: RootFootprint, ctx: ConnectionContext): DemandFree {
   const { units, method } = ctx;
   const { plate: p, anchors: a, concrete: c, pier } = input;
-  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N.value}|${p.B.value}|${p.thickness.value}|${p.Fy.value}|${a.perSide}|${a.diameter.value}|${a.grade}|${a.offset.value}|${a.gauge.value}|${a.embedment.value}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc.value}|${c.cracked}|${c.lambda}|${pier.length.value}|${pier.width.value}|${pier.depth?.value}`;
+  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N.text}|${p.B.text}|${p.thickness.text}|${p.Fy.text}|${a.perSide}|${a.diameter.text}|${a.grade}|${a.offset.text}|${a.gauge.text}|${a.embedment.text}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc.text}|${c.cracked}|${c.lambda}|${pier.length.text}|${pier.width.text}|${pier.depth?.text}`;
   const rootKey = `${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}`;
   let byKey = demandFreeCache.get(ctx.shapes);
   if (!byKey) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { assertFinite } from '../../../shared/engine/finite-guard';
+import { assertFinite, assertStationsFinite } from '../../../shared/engine/finite-guard';
 import { DesignInputError } from '../../../shared/engine/types';
 import { designSchema } from '../../../shared/schemas/design';
 import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
@@ -139,6 +139,26 @@ describe('sizes outside what the engine checks', () => {
     expect(() => assertFinite({ member: { a: [1, 2, Number.POSITIVE_INFINITY] } })).toThrow(DesignInputError);
     expect(() => assertFinite({ x: Number.NaN })).toThrow(/not a finite number/);
     expect(() => assertFinite({ x: [1, { y: 2 }], s: 'text', n: null })).not.toThrow();
+  });
+
+  it('the station guard refuses NaN or Infinity in any station array, and passes real ones', () => {
+    const stations = run(memberDoc({ loads: { area: [{ case: 'L', value: '60 psf' }] } }), {
+      stations: true,
+    }).stations!;
+    expect(() => assertStationsFinite(stations)).not.toThrow();
+    for (const bad of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) {
+      for (const mutate of [
+        (s: typeof stations) => (s.x[3] = bad),
+        (s: typeof stations) => (s.depth[0] = bad),
+        (s: typeof stations) => (s.cases[0].M[5] = bad),
+        (s: typeof stations) => s.combinations.at(-1)!.deflection.splice(-1, 1, bad),
+        (s: typeof stations) => (s.combinations[0].rotation![2] = bad),
+      ]) {
+        const copy = structuredClone(stations);
+        mutate(copy);
+        expect(() => assertStationsFinite(copy)).toThrow(/not a finite number/);
+      }
+    }
   });
 });
 
