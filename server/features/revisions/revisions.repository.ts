@@ -217,7 +217,9 @@ export async function latestApprovals(
     .where('v.state', 'approved')
     .whereIn('r.cantilever_id', [...cantileverIds])
     .orderBy('r.number')
-    .select<{ id: number; number: number; cantilever_id: number; approver_name: string; approved_at: string }[]>(
+    .select<
+      { id: number; number: number; cantilever_id: number; approver_name: string; approved_at: string }[]
+    >(
       'r.id',
       'r.number',
       'r.cantilever_id',
