@@ -7,9 +7,9 @@
  * wrong password is told: the answer never confirms a password.
  */
 import type { Knex } from 'knex';
-import { Passport } from 'passport';
+import type { Handler, Request, RequestHandler } from 'express';
+import { Passport, type Authenticator } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import type { Request } from 'express';
 import { findUserByEmail, findUserById, toUserDto, type UserRow } from '../features/users/users.repository';
 import { verifyPassword } from '../lib/password';
 
@@ -17,7 +17,8 @@ export interface SignInFailure {
   message: string;
 }
 
-export type PassportInstance = InstanceType<typeof Passport>;
+/** An Authenticator whose authenticate() returns an Express handler (the package's default is `any`). */
+export type PassportInstance = Authenticator<Handler, RequestHandler>;
 
 export const SIGN_IN_FAILED = 'The e-mail or the password is not right.';
 
@@ -39,7 +40,8 @@ export function createPassport(
   decoy: () => Promise<string>,
   prefetched: PrefetchedAccount = () => undefined,
 ): PassportInstance {
-  const passport = new Passport();
+  // The package types the constructor with its `any` defaults; authenticate() returns Express middleware.
+  const passport = new Passport() as PassportInstance;
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
       (async () => {

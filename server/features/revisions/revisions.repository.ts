@@ -71,13 +71,10 @@ export function latestStateColumn(db: Db, revisionColumn: string, alias: string)
 export async function reviewStates(db: Db, revisionIds: number[]): Promise<Map<number, ReviewState>> {
   const states = new Map<number, ReviewState>();
   if (revisionIds.length === 0) return states;
-  const rows = (await db('reviews')
+  const rows = await db('reviews')
     .whereIn('revision_id', revisionIds)
     .orderBy('id')
-    .select('revision_id', 'state')) as {
-    revision_id: number;
-    state: ReviewState;
-  }[];
+    .select<{ revision_id: number; state: ReviewState }[]>('revision_id', 'state');
   for (const row of rows) states.set(row.revision_id, row.state);
   return states;
 }
@@ -107,11 +104,11 @@ export async function listRevisionSummaries(db: Db, cantileverId: number): Promi
 }
 
 export async function listReviews(db: Db, revisionId: number): Promise<ReviewDto[]> {
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('users as u', 'u.id', 'v.reviewer_id')
     .where('v.revision_id', revisionId)
     .orderBy('v.id')
-    .select('v.*', 'u.display_name as reviewer_name')) as ReviewRow[];
+    .select<ReviewRow[]>('v.*', 'u.display_name as reviewer_name');
   return rows.map((r) => ({
     id: r.id,
     revisionId: r.revision_id,
@@ -245,25 +242,21 @@ export async function latestApprovals(
 ): Promise<Map<number, LatestApproval>> {
   const out = new Map<number, LatestApproval>();
   if (cantileverIds.length === 0) return out;
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
     .join('users as u', 'u.id', 'v.reviewer_id')
     .where('v.state', 'approved')
     .whereIn('r.cantilever_id', [...cantileverIds])
     .orderBy('r.number')
-    .select(
+    .select<
+      { id: number; number: number; cantilever_id: number; approver_name: string; approved_at: string }[]
+    >(
       'r.id',
       'r.number',
       'r.cantilever_id',
       'u.display_name as approver_name',
       'v.created_at as approved_at',
-    )) as {
-    id: number;
-    number: number;
-    cantilever_id: number;
-    approver_name: string;
-    approved_at: string;
-  }[];
+    );
   for (const row of rows) {
     out.set(row.cantilever_id, {
       revisionId: row.id,
@@ -296,7 +289,7 @@ export async function latestApprovedRevisions(
 
 /** Revisions waiting for review in the projects `userId` belongs to, not written by them. */
 export async function listSubmittedFor(db: Db, userId: number): Promise<AwaitingReviewDto[]> {
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
     .join('cantilevers as c', 'c.id', 'r.cantilever_id')
     .join('projects as p', 'p.id', 'c.project_id')
@@ -307,7 +300,19 @@ export async function listSubmittedFor(db: Db, userId: number): Promise<Awaiting
     .where('v.state', 'submitted')
     .whereNot('r.author_id', userId)
     .orderBy('v.id')
-    .select(
+    .select<
+      {
+        revision_id: number;
+        number: number;
+        message: string;
+        cantilever_id: number;
+        cantilever_name: string;
+        project_id: number;
+        project_name: string;
+        author_name: string;
+        submitted_at: string;
+      }[]
+    >(
       'r.id as revision_id',
       'r.number',
       'r.message',
@@ -317,17 +322,7 @@ export async function listSubmittedFor(db: Db, userId: number): Promise<Awaiting
       'p.name as project_name',
       'u.display_name as author_name',
       'v.created_at as submitted_at',
-    )) as {
-    revision_id: number;
-    number: number;
-    message: string;
-    cantilever_id: number;
-    cantilever_name: string;
-    project_id: number;
-    project_name: string;
-    author_name: string;
-    submitted_at: string;
-  }[];
+    );
   const states = await reviewStates(
     db,
     rows.map((r) => r.revision_id),
