@@ -7,13 +7,14 @@
 import { act, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { Profiler } from 'react';
-import { RouterProvider, createMemoryRouter } from 'react-router-dom';
+import { RouterProvider, createMemoryRouter, useLocation } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../shared/engine/examples';
 import type { CantileverDto, RevisionDto } from '../../shared/schemas/api';
 import type { DesignDocument } from '../../shared/schemas/design';
 import DesignDeskRoute from '../../src/app/routes/design-desk';
 import { deskLoader } from '../../src/app/routes/design-desk-loader';
+import { RequireAuth } from '../../src/features/auth/components/require-auth';
 import { cantileverKeys } from '../../src/lib/api/cantilevers/cantilever-keys';
 import { createQueryClient } from '../../src/lib/query-client';
 import { makeRevision, stubFetch, users, type Call } from './history-fixtures';
@@ -204,5 +205,46 @@ describe('desk route: one source for the revision it stands on', () => {
     });
     await waitFor(() => expect(length()).toHaveValue('9 ft'));
     expect(screen.queryByTestId('unsaved')).toBeNull();
+  });
+
+  it('a cantilever that cannot be read is said in words on the desk, not as a broken route', async () => {
+    stubFetch(({ path }) =>
+      path === '/api/auth/me' ? { body: users.architect } : { status: 404, body: { error: 'not found' } },
+    );
+    openDesk();
+    expect(await screen.findByText(/This cantilever could not be loaded/)).toBeInTheDocument();
+  });
+
+  it('a signed-out visit still goes to the sign-in page: the loader never throws', async () => {
+    stubFetch(() => ({ status: 401, body: { error: 'sign in first' } }));
+    const queryClient = createQueryClient();
+    function SignIn() {
+      return <p>sign in at {useLocation().search}</p>;
+    }
+    const router = createMemoryRouter(
+      [
+        { path: '/sign-in', element: <SignIn /> },
+        {
+          element: <RequireAuth />,
+          children: [
+            {
+              path: '/cantilevers/:cantileverId',
+              loader: deskLoader(queryClient),
+              hydrateFallbackElement: <p>loader running</p>,
+              element: <DesignDeskRoute />,
+            },
+          ],
+        },
+      ],
+      { initialEntries: ['/cantilevers/7'] },
+    );
+    render(
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    );
+    expect(
+      await screen.findByText(`sign in at ?next=${encodeURIComponent('/cantilevers/7')}`),
+    ).toBeInTheDocument();
   });
 });
