@@ -2,6 +2,7 @@ import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import type { UseFormGetValues } from 'react-hook-form';
 import { describe, expect, it } from 'vitest';
+import { DeskFormHarness } from './desk-harness';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import { formatQuantity } from '../../shared/engine/units';
@@ -14,7 +15,6 @@ import { TipDeflectionSplit } from '../../src/features/desk/components/tip-defle
 import { describeSeries } from '../../src/features/desk/lib/chart-data';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
 import { switchUnits } from '../../src/features/desk/lib/switch-units';
-import { DeskFormHarness } from './desk-harness';
 
 let read: UseFormGetValues<DesignDocument> = () => {
   throw new Error('no form');
