@@ -103,6 +103,19 @@ describe('desk: saving a revision', () => {
     expect(document.activeElement).toBe(length());
   });
 
+  it('waits for the worker to answer for what was just typed before it lists the problems', async () => {
+    stubFetch(() => undefined);
+    renderDesk();
+    await act(async () => {
+      // typed and saved in one go: the worker has not answered for "9" when the save is asked for
+      fireEvent.change(length(), { target: { value: '9' } });
+      fireEvent.click(screen.getByRole('button', { name: /Save revision/ }));
+    });
+    const dialog = await screen.findByRole('dialog', { name: 'This design cannot be saved yet' });
+    expect(within(dialog).getByRole('button', { name: 'Reach: length, root to tip' })).toBeInTheDocument();
+    expect(dialog.textContent).toContain('needs a unit');
+  });
+
   it('Ctrl+S opens the save, says which revision it makes, saves on a second Ctrl+S and focuses the result', async () => {
     const saved = makeRevision(31, 3, {
       ...exampleDesign,
