@@ -7,13 +7,14 @@
 import { act, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { Profiler } from 'react';
-import { RouterProvider, createMemoryRouter, useLocation } from 'react-router-dom';
-import { describe, expect, it } from 'vitest';
+import { Link, RouterProvider, createMemoryRouter, useLocation } from 'react-router-dom';
+import { describe, expect, it, vi } from 'vitest';
 import { exampleDesign } from '../../shared/engine/examples';
 import type { CantileverDto, RevisionDto } from '../../shared/schemas/api';
 import type { DesignDocument } from '../../shared/schemas/design';
 import DesignDeskRoute from '../../src/app/routes/design-desk';
 import { deskLoader } from '../../src/app/routes/design-desk-loader';
+import { AppLayout } from '../../src/components/layouts/app-layout';
 import { RequireAuth } from '../../src/features/auth/components/require-auth';
 import { cantileverKeys } from '../../src/lib/api/cantilevers/cantilever-keys';
 import { createQueryClient } from '../../src/lib/query-client';
@@ -246,5 +247,43 @@ describe('desk route: one source for the revision it stands on', () => {
     expect(
       await screen.findByText(`sign in at ?next=${encodeURIComponent('/cantilevers/7')}`),
     ).toBeInTheDocument();
+  });
+
+  it('going to the desk from another page says it is opening while the loader reads', async () => {
+    fakeServer(makeRevision(23, 3, exampleDesign));
+    // the cantilever's answer is held back until the test lets it go
+    let release = () => undefined as void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    const answer = globalThis.fetch;
+    vi.stubGlobal('fetch', async (input: RequestInfo | URL, init?: RequestInit) => {
+      if (String(input).endsWith('/api/cantilevers/7')) await held;
+      return answer(input, init);
+    });
+    const queryClient = createQueryClient();
+    const router = createMemoryRouter([
+      {
+        element: <AppLayout />,
+        children: [
+          { path: '/', element: <Link to="/cantilevers/7">North deck</Link> },
+          {
+            path: '/cantilevers/:cantileverId',
+            loader: deskLoader(queryClient),
+            element: <DesignDeskRoute />,
+          },
+        ],
+      },
+    ]);
+    render(
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    );
+    await act(async () => {
+      fireEvent.click(await screen.findByRole('link', { name: 'North deck' }));
+    });
+    expect(await screen.findByText('Opening…')).toBeInTheDocument();
+    await act(async () => release());
+    expect(await screen.findByTestId('base-revision')).toHaveTextContent('rev 3');
+    expect(screen.queryByText('Opening…')).toBeNull();
   });
 });
