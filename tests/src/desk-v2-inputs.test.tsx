@@ -6,7 +6,7 @@ import { DeskFormHarness } from './desk-harness';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import { formatQuantity } from '../../shared/engine/units';
-import { designSchema, type DesignDocument } from '../../shared/schemas/design';
+import type { DesignDocument } from '../../shared/schemas/design';
 import { LoadsGroup } from '../../src/features/desk/components/loads-group';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { SteelSummary } from '../../src/features/desk/components/steel-summary';
@@ -15,6 +15,7 @@ import { TipDeflectionSplit } from '../../src/features/desk/components/tip-defle
 import { describeSeries } from '../../src/features/desk/lib/chart-data';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
 import { switchUnits } from '../../src/features/desk/lib/switch-units';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
 let read: UseFormGetValues<DesignDocument> = () => {
   throw new Error('no form');
@@ -206,7 +207,7 @@ describe('desk inputs for the post, the weld and the root', () => {
 
 describe('tip deflection split and camber', () => {
   it('shows member bending and connection rotation with numbers and units, and the dead-load camber', () => {
-    const result = evaluateDesign(designSchema.parse(exampleDesign));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign));
     const parts = result.member.tipDeflectionParts;
     expect(parts).toBeDefined();
     render(
@@ -235,7 +236,7 @@ describe('tip deflection split and camber', () => {
   });
 
   it('shows nothing when the result has no split (no connection)', () => {
-    const result = evaluateDesign(designSchema.parse(exampleMemberOnly));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleMemberOnly));
     render(<TipDeflectionSplit result={result} />);
     expect(screen.queryByTestId('tip-split')).toBeNull();
   });
@@ -270,7 +271,7 @@ describe('uplift in words', () => {
       ...exampleDesign,
       loads: { ...exampleDesign.loads!, area: [{ case: 'W', value: '-60 psf' }] },
     };
-    const result = evaluateDesign(designSchema.parse(doc), { stations: true });
+    const result = evaluateDesign(parsedDesignSchema.parse(doc), { stations: true });
     const wind = result.stations!.cases.find((c) => c.name === 'W')!;
     expect(describeSeries(result, wind, null).deflection).toMatch(/[\d.]+ in upward at the tip\.$/);
   });
