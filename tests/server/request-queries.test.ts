@@ -7,7 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDb, dialectOf } from '../../server/db/knex';
-import { createTestEnv, type TestEnv } from '../helpers/api';
+import { baseDesign, createTestEnv, type TestEnv } from '../helpers/api';
 
 let env: TestEnv;
 beforeAll(async () => {
@@ -63,6 +63,24 @@ describe('queries per signed-in request', () => {
     const list = sql.find((s) => /from [`"]?revisions[`"]? as [`"]?r/.test(s))!;
     expect(list).toBeDefined();
     expect(list).not.toMatch(/r[`"]?\.\*/);
+  });
+});
+
+describe('POST /api/check', () => {
+  it('reads the imported shapes only for a document that names a shape the published table lacks', async () => {
+    const engineer = await env.login('engineer');
+    const builtIn = await queriesOf(() =>
+      engineer.post('/api/check').send({ input: baseDesign() }).expect(200),
+    );
+    expect(builtIn.some((s) => /from [`"]?shapes[`"]?/.test(s))).toBe(false);
+    const unknown = baseDesign();
+    unknown.member.section = { shape: 'W1X1' };
+    let status = 0;
+    const asked = await queriesOf(async () => {
+      status = (await engineer.post('/api/check').send({ input: unknown })).status;
+    });
+    expect(status).toBe(400);
+    expect(asked.some((s) => /from [`"]?shapes[`"]?/.test(s))).toBe(true);
   });
 });
 
