@@ -139,6 +139,19 @@ describe('desk route: one source for the revision it stands on', () => {
     expect(calls.filter((c) => c.path === '/api/revisions/23')).toHaveLength(1);
   });
 
+  it('opens on the pointer as it is now, even when an older one is in the cache', async () => {
+    const cached = makeRevision(23, 3, exampleDesign);
+    const moved = makeRevision(24, 4, withLength('10 ft'));
+    const { state } = fakeServer(cached);
+    state.revisions.set(moved.id, moved);
+    state.pointer = moved;
+    const queryClient = createQueryClient();
+    queryClient.setQueryData(cantileverKeys.detail(7), cantileverAt(cached));
+    const load = deskLoader(queryClient);
+    const opening = await load({ params: { cantileverId: '7' } } as unknown as Parameters<typeof load>[0]);
+    expect(opening.revisionId).toBe(24);
+  });
+
   it('moves the base to each saved revision, with its plate schedule and package; a pointer moved elsewhere does not', async () => {
     const opened = makeRevision(23, 3, exampleDesign);
     const four = makeRevision(24, 4, withLength('10 ft'));

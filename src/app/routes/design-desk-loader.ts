@@ -25,7 +25,8 @@ export function deskLoader(queryClient: QueryClient) {
     const opening: DeskOpening = { revisionId: undefined };
     try {
       const [cantilever] = await Promise.all([
-        queryClient.ensureQueryData(cantileverQueryOptions(cantileverId)),
+        // Read again on every opening (staleTime 0): the pointer may have moved since it was cached.
+        queryClient.fetchQuery({ ...cantileverQueryOptions(cantileverId), staleTime: 0 }),
         queryClient.ensureQueryData(meQueryOptions()),
       ]);
       opening.revisionId = cantilever.currentRevisionId;
