@@ -8,6 +8,7 @@ import type { Knex } from 'knex';
 import { evaluateDesign } from '../../shared/engine/design';
 import { DEFAULT_CODE_BASIS, type Role } from '../../shared/schemas/api';
 import { designSchema } from '../../shared/schemas/design';
+import { parseDesign } from '../../shared/schemas/parsed-design';
 import { toFieldIssues } from '../../shared/schemas/quantity';
 import { insertCantilever } from '../features/cantilevers/cantilevers.repository';
 import { addMember, insertProject } from '../features/projects/projects.repository';
@@ -81,7 +82,7 @@ export async function seedDemo(db: Knex, passwordCost: number): Promise<void> {
         authorId: d.author,
         message: 'First design',
         input: parsed.data,
-        result: evaluateDesign(parsed.data, { stations: true }),
+        result: evaluateDesign(parseDesign(parsed.data), { stations: true }),
         baseRevisionId: null,
       });
       if (d.approvedBy !== null) {

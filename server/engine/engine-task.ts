@@ -1,5 +1,5 @@
 /**
- * One engine run as a pool task: a validated document, the imported shapes in scope, and whether
+ * One engine run as a pool task: a parsed document (parsedDesignSchema), the imported shapes in scope, and whether
  * the stations are wanted. It answers the result already as JSON text (the stringify is a large
  * part of the work and belongs off the event loop too), or the engine's field issues.
  */
@@ -7,10 +7,10 @@ import { evaluateDesign } from '../../shared/engine/design';
 import { lookupWith } from '../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../shared/engine/shapes/types';
 import { DesignInputError } from '../../shared/engine/types';
-import type { DesignInput } from '../../shared/schemas/design';
+import type { ParsedDesign } from '../../shared/schemas/parsed-design';
 
 export interface EngineTask {
-  input: DesignInput;
+  input: ParsedDesign;
   custom: ShapeRecord[];
   stations: boolean;
 }

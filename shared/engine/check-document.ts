@@ -3,16 +3,16 @@
  * problems that stop it: schema validation and the engine's own input checks in one call, the same
  * for the CLI, the API and the desk.
  */
-import { designSchema } from '../schemas/design';
+import { parsedDesignSchema } from '../schemas/parsed-design';
 import { toFieldIssues, type FieldIssue } from '../schemas/quantity';
 import { evaluateDesign, type EvaluateOptions } from './design';
 import { DesignInputError, type DesignResult } from './types';
 
 export type CheckOutcome = { ok: true; result: DesignResult } | { ok: false; issues: FieldIssue[] };
 
-/** Validates `document` with designSchema and evaluates it; never throws for bad input. */
+/** Validates and parses `document` (parsedDesignSchema) and evaluates it; never throws for bad input. */
 export function checkDocument(document: unknown, options: EvaluateOptions = {}): CheckOutcome {
-  const parsed = designSchema.safeParse(document);
+  const parsed = parsedDesignSchema.safeParse(document);
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   try {
     return { ok: true, result: evaluateDesign(parsed.data, options) };

@@ -3,7 +3,7 @@
  * Pure and synchronous, so the desk can call it on every keystroke (in a web worker), the server
  * on every save and the CLI on a file. See METHOD.md for the method, sign convention and limits.
  */
-import type { DesignInput } from '../schemas/design';
+import type { ParsedDesign } from '../schemas/parsed-design';
 import { checkConnection } from './connection/check-connection';
 import { deflectionChecks } from './checks/deflection-check';
 import { flexureChecks } from './checks/flexure-check';
@@ -12,7 +12,7 @@ import { flangeWebWeldCheck } from './checks/flange-web-weld';
 import { shearCheck } from './checks/shear-check';
 import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
-import { assertFinite } from './finite-guard';
+import { assertFinite, assertStationsFinite } from './finite-guard';
 import { inputProblems, MAX_TAPER_SLOPE } from './input-limits';
 import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
@@ -35,7 +35,7 @@ import {
   type RootDemand,
   type RootFootprint,
 } from './types';
-import { quantity, toInternal } from './units';
+import { quantity } from './units';
 
 export interface EvaluateOptions {
   /** Fill `stations` with the display arrays for the charts. */
@@ -47,17 +47,17 @@ export interface EvaluateOptions {
 }
 
 /**
- * Evaluates a validated design document (designSchema.parse output).
+ * Evaluates a parsed design document (parsedDesignSchema output, or parseDesign of a validated one).
  * @throws DesignInputError with field paths for what the schema cannot see.
  */
-export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}): DesignResult {
+export function evaluateDesign(input: ParsedDesign, options: EvaluateOptions = {}): DesignResult {
   const shapes = options.shapes ?? findShape;
   const { units, method, member } = input;
-  const L = toInternal(member.length, 'length');
+  const L = member.length.value;
   const resolved = resolveSection(member.section, shapes);
   const section: MemberSection | null = Array.isArray(resolved) ? null : resolved;
-  const Fy = member.steel?.Fy ? toInternal(member.steel.Fy, 'stress') : (section?.defaultFy ?? 50);
-  const E = member.steel?.E ? toInternal(member.steel.E, 'stress') : E_STEEL;
+  const Fy = member.steel?.Fy ? member.steel.Fy.value : (section?.defaultFy ?? 50);
+  const E = member.steel?.E ? member.steel.E.value : E_STEEL;
   const problems = [...(Array.isArray(resolved) ? resolved : []), ...inputProblems(input, L, Fy, E)];
   if (section && !section.prismatic && (section.root.d - section.tip.d) / L > MAX_TAPER_SLOPE * (1 + 1e-9)) {
     // METHOD.md: beyond about 1:4 the plane-section assumption of the local-section checks weakens.
@@ -68,7 +68,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   }
   if (problems.length || !section) throw new DesignInputError(problems);
 
-  const caseLoads = gatherCaseLoads(input.loads, section, L, toInternal(member.spacing, 'length'));
+  const caseLoads = gatherCaseLoads(input.loads, section, L, member.spacing.value);
   if (caseLoads.length === 0) {
     throw new DesignInputError([
       { path: 'loads', message: 'there is no load to check: turn on self-weight or add a load' },
@@ -92,7 +92,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     factors: c.factors,
     response: combine(model, c.factors, options.stations === true),
   }));
-  const Lb = member.unbracedLength ? toInternal(member.unbracedLength, 'length') : L;
+  const Lb = member.unbracedLength ? member.unbracedLength.value : L;
   const signed = combos.some((c) => c.factors.W !== undefined || (c.factors.D ?? 0) < 0);
   const ctx: CheckContext = { model, section, method, units, Fy, E, Lb, combos, signed, lateral };
 
@@ -114,7 +114,7 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
   }
   const service = serviceCombinations(present);
   const deflection = deflectionChecks({ tipByCase, service, L, limits: input.deflectionLimits, units });
-  const fMin = input.frequencyMin ? toInternal(input.frequencyMin, 'frequency') : undefined;
+  const fMin = input.frequencyMin ? input.frequencyMin.value : undefined;
   const vibration = vibrationCheck(frequency, fMin, units);
   const serviceRows = [...deflection, vibration];
   if (spring && !spring.ok) {
@@ -226,9 +226,12 @@ export function evaluateDesign(input: DesignInput, options: EvaluateOptions = {}
     const S = quantity(root.S, 'moment', units);
     connection.rootStiffness = { value: S.value, unit: `${S.unit}/rad` };
   }
-  if (options.stations)
-    result.stations = stationArrays(model, section, combos, units, root ? rotationByCase : {});
   assertFinite(result);
+  if (options.stations) {
+    const stations = stationArrays(model, combos, units, root ? rotationByCase : {});
+    assertStationsFinite(stations);
+    result.stations = stations;
+  }
   return result;
 }
 

@@ -5,7 +5,6 @@
 import type { LoadCase } from '../schemas/member';
 import type { CombinationResponse } from './checks/check-context';
 import type { MemberModel, Response } from './member/analysis';
-import type { MemberSection } from './sections/section-types';
 import type { EffectSummary, Stations, StationSeries } from './types';
 import { displayFactor, quantity, RESULT_UNITS, type UnitSystem } from './units';
 
@@ -50,20 +49,26 @@ function series(
   const fV = displayFactor('force', units);
   const fM = displayFactor('moment', units);
   const fy = displayFactor('smallLength', units);
-  return {
-    name,
-    V: Array.from(r.V, (v) => v * fV),
-    M: Array.from(r.M, (v) => v * fM),
+  // Plain loops into arrays of their final length: Array.from(typed array, fn) walks an iterator
+  // and calls fn per value, which made the station arrays cost more than the design itself.
+  const n = r.V.length;
+  const V = new Array<number>(n);
+  const M = new Array<number>(n);
+  const deflection = new Array<number>(n);
+  const rotation = new Array<number>(n);
+  for (let i = 0; i < n; i++) {
+    V[i] = r.V[i] * fV;
+    M[i] = r.M[i] * fM;
     // With a flexible root the whole member also turns by the root's rotation theta0.
-    deflection: Array.from(r.y, (v, i) => (v + theta0 * x[i]) * fy),
-    rotation: Array.from(r.theta, (t) => t + theta0),
-  };
+    deflection[i] = (r.y[i] + theta0 * x[i]) * fy;
+    rotation[i] = r.theta[i] + theta0;
+  }
+  return { name, V, M, deflection, rotation };
 }
 
 /** Station arrays in display units: x along the member, V, M, deflection, and the depth. */
 export function stationArrays(
   model: MemberModel,
-  section: MemberSection,
   combos: readonly CombinationResponse[],
   units: UnitSystem,
   /** Root rotation of each case, rad (a flexible root); absent: a rigid root. */
@@ -78,11 +83,19 @@ export function stationArrays(
   const u = RESULT_UNITS[units];
   const fx = displayFactor('length', units);
   const fd = displayFactor('smallLength', units);
+  const n = x.length;
+  const xs = new Array<number>(n);
+  const depth = new Array<number>(n);
+  for (let i = 0; i < n; i++) {
+    xs[i] = x[i] * fx;
+    // The model's properties at each node are section.at(x / L), already computed.
+    depth[i] = model.props[i].d * fd;
+  }
   return {
     units: { x: u.length, V: u.force, M: u.moment, deflection: u.smallLength, rotation: 'rad' },
-    x: model.grid.x.map((x) => x * fx),
+    x: xs,
     cases: model.cases.map((c) => series(c.case, c.response, units, x, rootRotation[c.case] ?? 0)),
     combinations: combos.map((c) => series(c.name, c.response, units, x, comboRotation(c))),
-    depth: model.grid.x.map((x) => section.at(x / model.L).d * fd),
+    depth,
   };
 }

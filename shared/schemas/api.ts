@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { designSchema, type DesignDocument } from './design';
+import { parsedDesignSchema } from './parsed-design';
 import type { DesignResult } from '../engine/types';
 import type { ShapeRecord } from '../engine/shapes/types';
 
@@ -278,7 +279,10 @@ export interface OutboxDto {
 }
 
 export const checkRequestSchema = z.object({
-  input: designSchema,
+  /** Validated and parsed in the route: the engine takes the parsed document. */
+  input: parsedDesignSchema,
   /** Adds this project's imported shapes (members only). */
   projectId: z.number().int().positive().optional(),
+  /** Adds the station arrays (V, M, deflection along x), as the CLI's --stations does. */
+  stations: z.boolean().optional(),
 });

@@ -8,7 +8,7 @@ import { evaluateDesign } from '../engine/design';
 import type { ShapeLookup } from '../engine/shapes/types';
 import { DesignInputError, type Check, type DesignResult } from '../engine/types';
 import type { Quantity } from '../engine/units';
-import type { DesignInput } from '../schemas/design';
+import type { ParsedDesign } from '../schemas/parsed-design';
 import type { FieldIssue } from '../schemas/quantity';
 import { passes, sortWorstFirst } from '../words/check-words';
 
@@ -39,8 +39,8 @@ export type CellOutcome =
     }
   | { kind: 'invalid'; issues: FieldIssue[] };
 
-/** Evaluates one point; `input` is a validated document (cellDocument of a parsed base). */
-export function evaluateCell(input: DesignInput, shapes: ShapeLookup): CellOutcome {
+/** Evaluates one point; `input` is a parsed document (cellParsed of a parsed base). */
+export function evaluateCell(input: ParsedDesign, shapes: ShapeLookup): CellOutcome {
   let result: DesignResult;
   try {
     result = evaluateDesign(input, { shapes });

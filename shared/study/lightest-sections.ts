@@ -12,9 +12,13 @@ import { evaluateDesign } from '../engine/design';
 import { findShape, SHAPES } from '../engine/shapes/table';
 import type { ShapeFamily, ShapeLookup, ShapeRecord } from '../engine/shapes/types';
 import { DesignInputError, type DesignResult } from '../engine/types';
-import { quantity, toInternal, type Quantity } from '../engine/units';
-import type { DesignInput } from '../schemas/design';
-import { designSchema } from '../schemas/design';
+import { quantity, type Quantity } from '../engine/units';
+import {
+  parsedDesignSchema,
+  parsedQuantity,
+  type ParsedDesign,
+  type ParsedQuantity,
+} from '../schemas/parsed-design';
 import { toFieldIssues, type FieldIssue } from '../schemas/quantity';
 import { passes, sortWorstFirst } from '../words/check-words';
 import { shapesByWeight } from './axes';
@@ -56,13 +60,13 @@ export type LightestOutcome = { ok: true; result: LightestSections } | { ok: fal
 
 /** Validates the document and ranks every shape of the families; never throws for bad input. */
 export function lightestSections(document: unknown, options: LightestOptions = {}): LightestOutcome {
-  const parsed = designSchema.safeParse(document);
+  const parsed = parsedDesignSchema.safeParse(document);
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   return { ok: true, result: rankSections(parsed.data, options) };
 }
 
-/** The ranking for a validated document. */
-export function rankSections(base: DesignInput, options: LightestOptions = {}): LightestSections {
+/** The ranking for a parsed document. */
+export function rankSections(base: ParsedDesign, options: LightestOptions = {}): LightestSections {
   const lookup = options.shapes ?? findShape;
   const families = options.families ?? FAMILIES;
   const tapered = Boolean(base.member.section.shape && base.member.section.tipDepth);
@@ -90,7 +94,7 @@ export function rankSections(base: DesignInput, options: LightestOptions = {}): 
         failedBy: sortWorstFirst(outcome.result.checks.filter((c) => !passes(c)))[0]?.id ?? '(none)',
       });
     } else {
-      const L = toInternal(base.member.length, 'length');
+      const L = base.member.length.value;
       failing.push({
         shape: shape.label,
         // Nominal weight (lb/ft) times the length, in kip, as the engine would report it.
@@ -111,12 +115,12 @@ type Attempt =
   { kind: 'result'; result: DesignResult; pass: boolean } | { kind: 'invalid'; issues: FieldIssue[] };
 
 function tryShape(
-  base: DesignInput,
+  base: ParsedDesign,
   label: string,
-  tipDepth: string | undefined,
+  tipDepth: ParsedQuantity | undefined,
   lookup: ShapeLookup,
 ): Attempt {
-  const input: DesignInput = {
+  const input: ParsedDesign = {
     ...base,
     member: { ...base.member, section: tipDepth ? { shape: label, tipDepth } : { shape: label } },
   };
@@ -133,7 +137,7 @@ function tryShape(
   }
 }
 
-function shallowestTip(base: DesignInput, shape: ShapeRecord, lookup: ShapeLookup): Attempt {
+function shallowestTip(base: ParsedDesign, shape: ShapeRecord, lookup: ShapeLookup): Attempt {
   const full = tryShape(base, shape.label, undefined, lookup);
   if (full.kind !== 'result' || !full.pass) return full;
   const si = base.units === 'SI';
@@ -141,9 +145,9 @@ function shallowestTip(base: DesignInput, shape: ShapeRecord, lookup: ShapeLooku
   const d = shape.d ?? 0;
   // The engine's shallowest tip (resolve-section.ts): two fillets and 1/4 in of web.
   const minTip = 2 * (shape.kdes ?? shape.tf ?? 0) + 0.25;
-  const tips: string[] = [];
+  const tips: ParsedQuantity[] = [];
   for (let k = Math.ceil(minTip / step - 1e-9); k * step < d - 1e-9; k++)
-    tips.push(si ? `${k * 5} mm` : `${k * 0.25} in`);
+    tips.push(parsedQuantity(si ? `${k * 5} mm` : `${k * 0.25} in`, 'length'));
   // Bisection over tips[0..n-1] and the prismatic shape at n (known to pass).
   let lo = -1;
   let hi = tips.length;

@@ -1,14 +1,16 @@
 /**
- * A reach study: a base design document and two axes. The plan validates both once; each point's
- * document is the base with the two axis values written in (cellDocument) and is evaluated by the
- * engine like any other document. Points are visited coarse to fine (cellOrder) so that a map
+ * A reach study: a base design document and two axes. The plan validates both once and reads the
+ * base and every axis value once (parsedDesignSchema, axisReading); each point's parsed document is
+ * the parsed base with the two readings written in (cellParsed) and is evaluated by the engine like
+ * any other document. Points are visited coarse to fine (cellOrder) so that a map
  * drawn while the study runs covers the whole area early and sharpens as the rest arrives.
  */
 import type { ShapeLookup } from '../engine/shapes/types';
-import { designSchema, type DesignInput } from '../schemas/design';
+import type { DesignInput } from '../schemas/design';
+import { designWithParsedSchema, type ParsedDesign } from '../schemas/parsed-design';
 import { toFieldIssues, type FieldIssue } from '../schemas/quantity';
 import { axisLength, axisProblems, axisValues, type AxisSpec } from './axes';
-import { cellDocument } from './cell-document';
+import { axisReading, cellDocument, cellParsed, type AxisReading } from './cell-document';
 import { evaluateCell, type CellOutcome } from './evaluate-cell';
 
 export interface StudySpec {
@@ -17,31 +19,58 @@ export interface StudySpec {
 }
 
 export interface StudyPlan extends StudySpec {
+  /** The validated document as written (what a point loaded into the desk starts from). */
   base: DesignInput;
+  /** The same document parsed once for the engine. */
+  parsed: ParsedDesign;
   xValues: (number | string)[];
   yValues: (number | string)[];
+  /** Each axis value read once (axisReading), in the order of xValues and yValues. */
+  xReadings: AxisReading[];
+  yReadings: AxisReading[];
 }
 
 export type PlanOutcome = { ok: true; plan: StudyPlan } | { ok: false; issues: FieldIssue[] };
 
-/** Validates the document (designSchema) and the axes; never throws for bad input. */
+/** Validates and parses the document (designWithParsedSchema) and the axes; never throws for bad input. */
 export function planStudy(document: unknown, spec: StudySpec): PlanOutcome {
   const issues = [...axisProblems(spec.x, 'x'), ...axisProblems(spec.y, 'y')];
   const depthKeys = new Set(['tipDepth', 'taperRatio']);
   if (spec.x.key === spec.y.key || (depthKeys.has(spec.x.key) && depthKeys.has(spec.y.key)))
     issues.push({ path: 'y.key', message: `must vary another input than the first axis (${spec.x.key})` });
-  const parsed = designSchema.safeParse(document);
-  if (!parsed.success) issues.push(...toFieldIssues(parsed.error));
-  if (issues.length > 0 || !parsed.success) return { ok: false, issues };
+  const read = designWithParsedSchema.safeParse(document);
+  if (!read.success) issues.push(...toFieldIssues(read.error));
+  if (issues.length > 0 || !read.success) return { ok: false, issues };
+  const { document: base, parsed } = read.data;
+  const units = parsed.units;
+  const xValues = axisValues(spec.x);
+  const yValues = axisValues(spec.y);
   return {
     ok: true,
-    plan: { ...spec, base: parsed.data, xValues: axisValues(spec.x), yValues: axisValues(spec.y) },
+    plan: {
+      ...spec,
+      base,
+      parsed,
+      xValues,
+      yValues,
+      xReadings: xValues.map((v) => axisReading(spec.x.key, v, units)),
+      yReadings: yValues.map((v) => axisReading(spec.y.key, v, units)),
+    },
   };
 }
 
-/** The validated document of point (i along x, j along y). */
+/** The validated text document of point (i along x, j along y): what the desk loads. */
 export function cellInput(plan: StudyPlan, i: number, j: number, shapes: ShapeLookup): DesignInput {
   return cellDocument(plan.base, { [plan.x.key]: plan.xValues[i], [plan.y.key]: plan.yValues[j] }, shapes);
+}
+
+/** The parsed document of point (i, j), as the engine takes it. */
+export function cellParsedInput(plan: StudyPlan, i: number, j: number, shapes: ShapeLookup): ParsedDesign {
+  return cellParsed(
+    plan.parsed,
+    { [plan.x.key]: plan.xReadings[i], [plan.y.key]: plan.yReadings[j] },
+    shapes,
+  );
 }
 
 export interface StudyCell {
@@ -57,7 +86,7 @@ export function runCells(plan: StudyPlan, indices: readonly number[], shapes: Sh
   return indices.map((index) => {
     const i = index % nx;
     const j = Math.floor(index / nx);
-    return { i, j, outcome: evaluateCell(cellInput(plan, i, j, shapes), shapes) };
+    return { i, j, outcome: evaluateCell(cellParsedInput(plan, i, j, shapes), shapes) };
   });
 }
 

@@ -9,13 +9,13 @@ import { describe, expect, it } from 'vitest';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import type { StationSeries } from '../../shared/engine/types';
-import { designSchema } from '../../shared/schemas/design';
 import { limitSeriesKey, seriesChoices, seriesFromCases } from '../../src/features/desk/lib/chart-data';
 import { LIMIT_REACH, limitMarker, stepCursor, valuesAt } from '../../src/features/desk/lib/elevation-cursor';
 import { elevationShape } from '../../src/features/desk/lib/elevation-geometry';
 import { readoutParts } from '../../src/features/desk/components/elevation/elevation-stack';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
-const result = evaluateDesign(designSchema.parse(exampleDesign), { stations: true });
+const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign), { stations: true });
 const s = result.stations!;
 
 describe('values at the cursor', () => {
@@ -146,7 +146,7 @@ describe('the support in elevation', () => {
   });
 
   it('draws a plain fixed root for a member without a connection', () => {
-    const alone = evaluateDesign(designSchema.parse(exampleMemberOnly), { stations: true });
+    const alone = evaluateDesign(parsedDesignSchema.parse(exampleMemberOnly), { stations: true });
     const shape = elevationShape(alone, exampleMemberOnly)!;
     expect(shape.arrangement).toBe('none');
     expect(shape.plate).toBeNull();

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
-import { designSchema } from '../../shared/schemas/design';
 import {
   chartRows,
   defaultSeriesKey,
@@ -10,8 +9,9 @@ import {
   seriesChoices,
 } from '../../src/features/desk/lib/chart-data';
 import { platePlan } from '../../src/features/desk/lib/plate-plan';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
-const result = evaluateDesign(designSchema.parse(exampleDesign), { stations: true });
+const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign), { stations: true });
 
 describe('chart data from the stations', () => {
   it('offers every combination and every case, governing bending combination first', () => {

@@ -1,13 +1,12 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { FormProvider, useForm, type UseFormGetValues } from 'react-hook-form';
+import type { UseFormGetValues } from 'react-hook-form';
 import { describe, expect, it } from 'vitest';
+import { DeskFormHarness } from './desk-harness';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import { formatQuantity } from '../../shared/engine/units';
-import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
-import { EngineIssuesContext } from '../../src/features/desk/components/field-context';
+import type { DesignDocument } from '../../shared/schemas/design';
 import { LoadsGroup } from '../../src/features/desk/components/loads-group';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { SteelSummary } from '../../src/features/desk/components/steel-summary';
@@ -16,6 +15,7 @@ import { TipDeflectionSplit } from '../../src/features/desk/components/tip-defle
 import { describeSeries } from '../../src/features/desk/lib/chart-data';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
 import { switchUnits } from '../../src/features/desk/lib/switch-units';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
 let read: UseFormGetValues<DesignDocument> = () => {
   throw new Error('no form');
@@ -23,23 +23,17 @@ let read: UseFormGetValues<DesignDocument> = () => {
 
 function Harness({
   children,
-  issues = new Map<string, string>(),
+  issues,
   doc = exampleDesign,
 }: {
   children: ReactNode;
   issues?: Map<string, string>;
   doc?: DesignDocument;
 }) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: doc,
-  });
-  read = form.getValues;
   return (
-    <FormProvider {...form}>
-      <EngineIssuesContext.Provider value={issues}>{children}</EngineIssuesContext.Provider>
-    </FormProvider>
+    <DeskFormHarness doc={doc} issues={issues} onForm={(form) => (read = form.getValues)}>
+      {children}
+    </DeskFormHarness>
   );
 }
 
@@ -213,7 +207,7 @@ describe('desk inputs for the post, the weld and the root', () => {
 
 describe('tip deflection split and camber', () => {
   it('shows member bending and connection rotation with numbers and units, and the dead-load camber', () => {
-    const result = evaluateDesign(designSchema.parse(exampleDesign));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign));
     const parts = result.member.tipDeflectionParts;
     expect(parts).toBeDefined();
     render(
@@ -242,7 +236,7 @@ describe('tip deflection split and camber', () => {
   });
 
   it('shows nothing when the result has no split (no connection)', () => {
-    const result = evaluateDesign(designSchema.parse(exampleMemberOnly));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleMemberOnly));
     render(<TipDeflectionSplit result={result} />);
     expect(screen.queryByTestId('tip-split')).toBeNull();
   });
@@ -277,7 +271,7 @@ describe('uplift in words', () => {
       ...exampleDesign,
       loads: { ...exampleDesign.loads!, area: [{ case: 'W', value: '-60 psf' }] },
     };
-    const result = evaluateDesign(designSchema.parse(doc), { stations: true });
+    const result = evaluateDesign(parsedDesignSchema.parse(doc), { stations: true });
     const wind = result.stations!.cases.find((c) => c.name === 'W')!;
     expect(describeSeries(result, wind, null).deflection).toMatch(/[\d.]+ in upward at the tip\.$/);
   });

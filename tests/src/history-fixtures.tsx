@@ -9,8 +9,9 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import { vi } from 'vitest';
 import { evaluateDesign } from '../../shared/engine/design';
-import { designSchema, type DesignDocument } from '../../shared/schemas/design';
+import type { DesignDocument } from '../../shared/schemas/design';
 import type { RevisionDto, UserDto } from '../../shared/schemas/api';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
 export const users: Record<'admin' | 'architect' | 'engineer' | 'engineer2', UserDto> = {
   admin: {
@@ -54,7 +55,7 @@ export function makeRevision(
   input: DesignDocument,
   extra: Partial<Omit<RevisionDto, 'input' | 'result'>> = {},
 ): RevisionDto {
-  const result = evaluateDesign(designSchema.parse(input), { stations: true });
+  const result = evaluateDesign(parsedDesignSchema.parse(input), { stations: true });
   return {
     id,
     cantileverId: 7,

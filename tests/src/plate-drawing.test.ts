@@ -11,7 +11,7 @@ import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign } from '../../shared/engine/examples';
 import { findShape } from '../../shared/engine/shapes/table';
 import type { DesignResult } from '../../shared/engine/types';
-import { connectionSchema } from '../../shared/schemas/connection';
+import { parseDesign, parsedConnectionSchema } from '../../shared/schemas/parsed-design';
 import { designSchema, type DesignDocument } from '../../shared/schemas/design';
 import { plateDrawing, type PlateDrawing } from '../../src/features/desk/lib/plate-drawing';
 import { lengthText } from '../../src/features/desk/lib/plate-drawing-format';
@@ -23,7 +23,7 @@ function withConnection(change: (c: Conn) => Conn, units: 'US' | 'SI' = 'US'): D
   return designSchema.parse({ ...exampleDesign, units, connection: change(exampleDesign.connection!) });
 }
 function draw(doc: Doc): { d: PlateDrawing; result: DesignResult } {
-  const result = evaluateDesign(doc, {});
+  const result = evaluateDesign(parseDesign(doc), {});
   const d = plateDrawing(doc, result);
   if (!d) throw new Error('no drawing');
   return { d, result };
@@ -35,7 +35,7 @@ const dim = (d: PlateDrawing, id: string) => {
   return found;
 };
 function engineGeometry(doc: DesignDocument) {
-  const input = connectionSchema.parse(doc.connection);
+  const input = parsedConnectionSchema.parse(doc.connection);
   const root = rootOutline(doc.member.section, findShape)!;
   return { L: plateLayout(input, root, findShape), geo: readGeometry(input, root, findShape) };
 }

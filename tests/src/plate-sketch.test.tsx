@@ -4,6 +4,7 @@ import { render, screen, within } from '@testing-library/react';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign } from '../../shared/engine/examples';
 import { designSchema } from '../../shared/schemas/design';
+import { parseDesign } from '../../shared/schemas/parsed-design';
 import { PlateSketch } from '../../src/features/desk/components/plate-sketch';
 
 describe('PlateSketch', () => {
@@ -11,7 +12,7 @@ describe('PlateSketch', () => {
     ...exampleDesign,
     connection: { ...exampleDesign.connection!, pier: { length: '10 in', width: '10 in' } },
   });
-  const result = evaluateDesign(doc, {});
+  const result = evaluateDesign(parseDesign(doc), {});
 
   it('renders one titled drawing whose dimensions are all in the table, problems in red words', () => {
     render(<PlateSketch doc={doc} result={result} />);

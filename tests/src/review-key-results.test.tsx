@@ -4,12 +4,12 @@ import { KeyResults } from '../../src/features/review/components/key-results';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign } from '../../shared/engine/examples';
 import { formatQuantity } from '../../shared/engine/units';
-import { designSchema } from '../../shared/schemas/design';
 import { displayCheck } from '../../shared/words/check-display';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
 describe('review key results', () => {
   it('shows the service deflections of the engine checks, unfactored, with their limits', () => {
-    const result = evaluateDesign(designSchema.parse(exampleDesign));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign));
     render(<KeyResults result={result} input={exampleDesign} />);
     const total = result.checks.find((c) => c.id === 'member.deflection.total');
     if (!total?.demand) throw new Error('the example design has a total-load deflection check');
@@ -24,7 +24,7 @@ describe('review key results', () => {
 describe('concrete bearing in stress units', () => {
   it('reads a large-moment bearing check as psi (US) and MPa (SI), the same ratio, the moments kept in the note', () => {
     for (const units of ['US', 'SI'] as const) {
-      const result = evaluateDesign(designSchema.parse({ ...exampleDesign, units }));
+      const result = evaluateDesign(parsedDesignSchema.parse({ ...exampleDesign, units }));
       const check = result.checks.find((c) => c.id === 'plate.bearing');
       const fpMax = result.connection?.availableBearingStress as { value: number; unit: string };
       if (!check?.demand || check.ratio === null) throw new Error('the example design checks bearing');
@@ -44,7 +44,7 @@ describe('concrete bearing in stress units', () => {
   });
 
   it('shows bearing on Review in stress units, never kip·ft', () => {
-    const result = evaluateDesign(designSchema.parse(exampleDesign));
+    const result = evaluateDesign(parsedDesignSchema.parse(exampleDesign));
     render(<KeyResults result={result} input={exampleDesign} />);
     const tile = screen.getByText('Concrete bearing under the plate').parentElement as HTMLElement;
     expect(tile).toHaveTextContent(/\d psi/);

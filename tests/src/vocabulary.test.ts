@@ -20,6 +20,7 @@ import {
 } from '../../shared/words/check-words';
 import { KNOWN_PATHS, pathGroup, pathWords } from '../../shared/words/field-words';
 import { CHECK_BAR, CHECK_TEXT, DESIGN_TEXT, TREND_TEXT } from '../../src/lib/verdict-style';
+import { parsedDesignSchema } from '../../shared/schemas/parsed-design';
 
 interface Def {
   type: string;
@@ -92,7 +93,7 @@ describe('field names in words', () => {
     let seen = 0;
     for (const doc of bad) {
       try {
-        evaluateDesign(designSchema.parse(doc));
+        evaluateDesign(parsedDesignSchema.parse(doc));
       } catch (e) {
         if (!(e instanceof DesignInputError)) throw e;
         for (const issue of e.issues) {

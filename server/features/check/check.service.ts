@@ -14,7 +14,7 @@ export async function checkDesign(
   // A project's imported shapes only for its members; without one, the organisation's.
   if (body.projectId !== undefined) await projectForMember(ctx.db, body.projectId, user.id);
   const custom = await listShapesInScope(ctx.db, body.projectId ?? null);
-  const answer = await ctx.engine.run({ input: body.input, custom, stations: true });
+  const answer = await ctx.engine.run({ input: body.input, custom, stations: body.stations === true });
   if (!answer.ok) throw designNotComputed(answer.issues, 'input');
   return answer.json;
 }

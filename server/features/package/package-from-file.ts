@@ -7,6 +7,7 @@ import { plateScheduleRow } from '../../../shared/engine/connection/plate-schedu
 import { evaluateDesign } from '../../../shared/engine/design';
 import { findShape } from '../../../shared/engine/shapes/table';
 import type { DesignInput } from '../../../shared/schemas/design';
+import { parseDesign } from '../../../shared/schemas/parsed-design';
 import type { PackageData } from './package-data';
 import { layoutFor } from './package-root';
 
@@ -16,7 +17,8 @@ export function packageFromDocument(
   input: DesignInput,
   source: { name: string; text: string; modified: Date },
 ): PackageData {
-  const result = evaluateDesign(input, { stations: true, shapes: findShape });
+  const parsed = parseDesign(input);
+  const result = evaluateDesign(parsed, { stations: true, shapes: findShape });
   return {
     projectName: 'not stored in a project',
     site: '',
@@ -39,6 +41,8 @@ export function packageFromDocument(
     input,
     result,
     layout: layoutFor(input, findShape),
-    scheduleRow: input.connection ? plateScheduleRow(source.name, input.connection, result.connection) : null,
+    scheduleRow: parsed.connection
+      ? plateScheduleRow(source.name, parsed.connection, result.connection)
+      : null,
   };
 }

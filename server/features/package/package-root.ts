@@ -6,13 +6,14 @@ import { plateLayout, type PlateLayout } from '../../../shared/engine/connection
 import type { ShapeLookup } from '../../../shared/engine/shapes/types';
 import { rootOutline } from '../../../shared/engine/connection/root-outline';
 import type { DesignInput } from '../../../shared/schemas/design';
+import { parsedConnectionSchema } from '../../../shared/schemas/parsed-design';
 
 export function layoutFor(input: DesignInput, find: ShapeLookup): PlateLayout | null {
   if (!input.connection) return null;
   const root = rootOutline(input.member.section, find);
   if (!root) return null;
   try {
-    return plateLayout(input.connection, root, find);
+    return plateLayout(parsedConnectionSchema.parse(input.connection), root, find);
   } catch {
     return null;
   }

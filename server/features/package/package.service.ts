@@ -7,6 +7,7 @@ import { plateScheduleRow } from '../../../shared/engine/connection/plate-schedu
 import { lookupWith } from '../../../shared/engine/shapes/table';
 import type { DesignResult } from '../../../shared/engine/types';
 import type { DesignInput } from '../../../shared/schemas/design';
+import { parsedConnectionSchema } from '../../../shared/schemas/parsed-design';
 import type { AppContext } from '../../context';
 import { toIso } from '../../db/knex';
 import { revisionForMember, type CantileverRow, type RevisionRow } from '../projects/project-access';
@@ -72,7 +73,11 @@ export async function packageData(
     result,
     layout: layoutFor(input, find),
     scheduleRow: input.connection
-      ? plateScheduleRow(`${cantilever.name} (rev ${revision.number})`, input.connection, result.connection)
+      ? plateScheduleRow(
+          `${cantilever.name} (rev ${revision.number})`,
+          parsedConnectionSchema.parse(input.connection),
+          result.connection,
+        )
       : null,
   };
 }

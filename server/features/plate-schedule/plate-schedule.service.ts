@@ -12,6 +12,7 @@ import {
 } from '../../../shared/engine/connection/plate-schedule';
 import { CAUTION, type DesignResult } from '../../../shared/engine/types';
 import type { DesignInput } from '../../../shared/schemas/design';
+import { parsedConnectionSchema } from '../../../shared/schemas/parsed-design';
 import type { AppContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import {
@@ -64,7 +65,7 @@ function lineFor(
       'Approved on': approval?.approvedAt.slice(0, 10) ?? '',
       Quantity: String(cantilever.quantity ?? 1),
     },
-    row: plateScheduleRow(mark, input.connection, result.connection),
+    row: plateScheduleRow(mark, parsedConnectionSchema.parse(input.connection), result.connection),
   };
 }
 

@@ -13,7 +13,7 @@ import { evaluateDesign } from '../../../shared/engine/design';
 import { lookupWith, normalizeLabel } from '../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../shared/engine/shapes/types';
 import { DesignInputError, type DesignResult } from '../../../shared/engine/types';
-import type { DesignInput } from '../../../shared/schemas/design';
+import type { ParsedDesign } from '../../../shared/schemas/parsed-design';
 import { badRequest } from '../../lib/http-error';
 import { listShapesInScope } from '../shapes/shapes.repository';
 
@@ -28,7 +28,7 @@ export interface EvaluateOptions {
 
 export async function evaluateWithSections(
   db: Knex | Knex.Transaction,
-  input: DesignInput,
+  input: ParsedDesign,
   options: EvaluateOptions,
 ): Promise<{ result: DesignResult; sections: ShapeRecord[] }> {
   const pinnedCustom = (options.pinned ?? []).filter((s) => s.custom);
@@ -56,7 +56,7 @@ export function designNotComputed(engineIssues: readonly { path: string; message
 
 export async function evaluateOnServer(
   db: Knex | Knex.Transaction,
-  input: DesignInput,
+  input: ParsedDesign,
   options: EvaluateOptions,
 ): Promise<DesignResult> {
   return (await evaluateWithSections(db, input, options)).result;

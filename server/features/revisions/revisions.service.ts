@@ -22,6 +22,7 @@ import {
 } from '../projects/project-access';
 import { assertMayChange } from './edit-rights';
 import { mailDecision, mailSubmission, type SubmitNotice } from './review-mail';
+import { parseDesign } from '../../../shared/schemas/parsed-design';
 import { evaluateWithSections, storedSections } from './evaluate';
 import {
   getRevisionDto,
@@ -61,7 +62,7 @@ export async function saveRevision(
     const latest = await latestRevision(trx, cantilever.id);
     if ((latest?.number ?? null) !== body.baseRevision) throw await stale(trx, latest);
     assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input);
-    const { result, sections } = await evaluateWithSections(trx, body.input, {
+    const { result, sections } = await evaluateWithSections(trx, parseDesign(body.input), {
       stations: true,
       projectId: cantilever.project_id,
       pinned: storedSections(latest?.sections_json),

@@ -14,8 +14,7 @@
  * A brace can only raise the buckling moment (adding a restraint never lowers an eigenvalue), so each
  * station's strength is never taken below its strength with the braces removed (`unbraced`).
  */
-import type { MemberInput } from '../../schemas/member';
-import { toInternal } from '../units';
+import type { ParsedMember } from '../../schemas/parsed-design';
 import {
   cantileverK,
   type LoadHeight,
@@ -47,14 +46,14 @@ export interface LateralSupport {
   given: boolean;
 }
 
-export function readLateralSupport(member: MemberInput): LateralSupport {
+export function readLateralSupport(member: ParsedMember): LateralSupport {
   const ls = member.lateralSupport;
   return {
     topFlange: ls?.topFlange ?? 'braced',
     loadAt: ls?.loadAt ?? 'top-flange',
     root: ls?.root ?? 'fixed',
     tip: ls?.tip ?? 'free',
-    braces: (ls?.braces ?? []).map((b) => toInternal(b, 'length')).sort((a, b) => a - b),
+    braces: (ls?.braces ?? []).map((b) => b.value).sort((a, b) => a - b),
     factor: ls?.effectiveLengthFactor,
     given: ls !== undefined,
   };

@@ -4,7 +4,7 @@
  * Each check reports its own governing combination; the result describes the combination that
  * governs the plate. See METHOD.md for the method, assumptions and limits.
  */
-import type { ConnectionInput } from '../../schemas/connection';
+import type { ParsedConnection } from '../../schemas/parsed-design';
 import type { Check, ConnectionResult, Method, RootDemand, RootFootprint } from '../types';
 import type { ShapeLookup } from '../shapes/types';
 import type { UnitSystem } from '../units';
@@ -26,7 +26,6 @@ import { SIDE_FACE_BLOWOUT, blowoutCapacity, evaluateSideFaceBlowout } from './c
 import { STEEL_TENSION, evaluateSteelTension, steelTensionCapacity } from './check-steel-tension';
 import { POST_COMBINED, evaluatePost, postStrength } from './check-post';
 import { WELD_STRENGTH, evaluateWeld } from './check-weld';
-import { toInternal } from '../units';
 
 /**
  * A layout that cannot be built: a rod at or beyond the plate's or the pier's edge, a plate larger
@@ -96,10 +95,10 @@ interface ConnectionEntry {
 const demandFreeCache = new WeakMap<ShapeLookup, Map<string, ConnectionEntry>>();
 const CACHE_LIMIT = 500;
 
-function demandFree(input: ConnectionInput, root: RootFootprint, ctx: ConnectionContext): DemandFree {
+function demandFree(input: ParsedConnection, root: RootFootprint, ctx: ConnectionContext): DemandFree {
   const { units, method } = ctx;
   const { plate: p, anchors: a, concrete: c, pier } = input;
-  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N}|${p.B}|${p.thickness}|${p.Fy}|${a.perSide}|${a.diameter}|${a.grade}|${a.offset}|${a.gauge}|${a.embedment}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc}|${c.cracked}|${c.lambda}|${pier.length}|${pier.width}|${pier.depth}`;
+  const key = `${method}|${units}|${input.arrangement}|${input.footprint?.shape}|${p.N.text}|${p.B.text}|${p.thickness.text}|${p.Fy.text}|${a.perSide}|${a.diameter.text}|${a.grade}|${a.offset.text}|${a.gauge.text}|${a.embedment.text}|${a.supplementaryReinforcement}|${a.torqued}|${c.fc.text}|${c.cracked}|${c.lambda}|${pier.length.text}|${pier.width.text}|${pier.depth?.text}`;
   const rootKey = `${root.label}|${root.family}|${root.d}|${root.bf}|${root.tf}|${root.tw}`;
   let byKey = demandFreeCache.get(ctx.shapes);
   if (!byKey) {
@@ -161,7 +160,7 @@ function copyCheck(c: Check): Check {
  * combination; every other check names the combination that governs it.
  */
 export function checkConnection(
-  input: ConnectionInput,
+  input: ParsedConnection,
   demands: RootDemand[],
   root: RootFootprint,
   ctx: ConnectionContext,
@@ -226,7 +225,7 @@ export function checkConnection(
   if (input.post && geo.arrangement === 'post-base' && input.footprint) {
     const shape = ctx.shapes(input.footprint.shape);
     const strength = shape
-      ? postStrength(shape, toInternal(input.post.height, 'length'), method)
+      ? postStrength(shape, input.post.height.value, method)
       : ({
           ok: false,
           reason: `the post section "${input.footprint.shape}" is not in the shapes table`,
@@ -237,7 +236,7 @@ export function checkConnection(
   }
   if (input.weld) {
     const weld = {
-      size: toInternal(input.weld.size, 'length'),
+      size: input.weld.size.value,
       electrode: input.weld.electrode ?? 'E70',
       plateThickness: geo.t,
     };

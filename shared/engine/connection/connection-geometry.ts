@@ -4,9 +4,9 @@
  * tension row (for a face plate: up), y along B. Plate and pier are centred on each other.
  */
 import type { ConnectionInput } from '../../schemas/connection';
+import type { ParsedConnection } from '../../schemas/parsed-design';
 import type { RootFootprint } from '../types';
 import type { ShapeLookup } from '../shapes/types';
-import { toInternal } from '../units';
 import { resolveFootprint, type FootprintResolution } from './footprint';
 import { F1554_GRADES, heavyHexBearingArea, rodSize, tensileStressArea, type RodSize } from './rod-data';
 
@@ -46,33 +46,33 @@ export interface ConnectionGeometry {
   edgeSide: number;
 }
 
-/** Parses the connection input (quantities are cached by units.ts, so this is cheap per call). */
+/** Reads the parsed connection into the numbers and distances the checks use. */
 export function readGeometry(
-  input: ConnectionInput,
+  input: ParsedConnection,
   root: RootFootprint,
   shapes: ShapeLookup,
 ): ConnectionGeometry {
   const a = input.anchors;
-  const da = toInternal(a.diameter, 'length');
+  const da = a.diameter.value;
   const rod = rodSize(da);
   const perSide = a.perSide;
-  const f = toInternal(a.offset, 'length');
-  const g = perSide > 1 ? toInternal(a.gauge, 'length') : 0;
-  const pierLength = toInternal(input.pier.length, 'length');
-  const pierWidth = toInternal(input.pier.width, 'length');
+  const f = a.offset.value;
+  const g = perSide > 1 ? a.gauge.value : 0;
+  const pierLength = input.pier.length.value;
+  const pierWidth = input.pier.width.value;
   const rowSpan = (perSide - 1) * g;
   const steel = F1554_GRADES[a.grade];
   return {
     arrangement: input.arrangement,
-    N: toInternal(input.plate.N, 'length'),
-    B: toInternal(input.plate.B, 'length'),
-    t: toInternal(input.plate.thickness, 'length'),
-    Fy: toInternal(input.plate.Fy ?? '36 ksi', 'stress'),
+    N: input.plate.N.value,
+    B: input.plate.B.value,
+    t: input.plate.thickness.value,
+    Fy: input.plate.Fy.value,
     perSide,
     da,
     f,
     g,
-    hef: toInternal(a.embedment, 'length'),
+    hef: a.embedment.value,
     grade: a.grade,
     fya: steel.fy,
     // ACI 318-19 17.6.1.2: futa <= min(1.9 fya, 125 ksi).
@@ -80,14 +80,14 @@ export function readGeometry(
     rod,
     Ase: rod ? tensileStressArea(rod.diameter, rod.threadsPerInch) : null,
     Abrg: rod ? heavyHexBearingArea(rod.diameter) : null,
-    fc: toInternal(input.concrete.fc, 'stress'),
+    fc: input.concrete.fc.value,
     cracked: input.concrete.cracked ?? true,
     lambda: input.concrete.lambda ?? 1,
     conditionA: a.supplementaryReinforcement ?? false,
     torqued: a.torqued ?? false,
     pierLength,
     pierWidth,
-    pierDepth: input.pier.depth ? toInternal(input.pier.depth, 'length') : undefined,
+    pierDepth: input.pier.depth ? input.pier.depth.value : undefined,
     footprint: resolveFootprint(input.footprint?.shape, root, shapes),
     rowSpan,
     edgeBeyondRow: pierLength / 2 - f,

@@ -4,6 +4,7 @@
  * face plate), so the compression edge is x = -N/2; y along B.
  */
 import type { ConnectionInput } from '../../schemas/connection';
+import type { ParsedConnection } from '../../schemas/parsed-design';
 import type { ConnectionResult, RootFootprint } from '../types';
 import type { ShapeLookup } from '../shapes/types';
 import { convert, type Quantity } from '../units';
@@ -76,7 +77,7 @@ export function footprintOutline(fp: Footprint): FootprintOutline {
 }
 
 /** The plan layout of a connection, in inches. */
-export function plateLayout(input: ConnectionInput, root: RootFootprint, shapes: ShapeLookup): PlateLayout {
+export function plateLayout(input: ParsedConnection, root: RootFootprint, shapes: ShapeLookup): PlateLayout {
   const geo = readGeometry(input, root, shapes);
   return {
     arrangement: geo.arrangement,

@@ -3,9 +3,9 @@
  * writer (shared/csv/csv-writer.ts: RFC 4180, cells neutralised against formula injection). Dimensions in inches,
  * written the shop's way (1-1/2), whatever unit system the design uses.
  */
-import type { ConnectionInput } from '../../schemas/connection';
+import type { ParsedConnection, ParsedQuantity } from '../../schemas/parsed-design';
 import type { ConnectionResult } from '../types';
-import { convert, toInternal, type Quantity } from '../units';
+import { convert, type Quantity } from '../units';
 import { inchFraction } from './inch-fraction';
 import { nextStandardThickness } from './plate-thickness';
 import { rodEdgeMinimum } from './rod-positions';
@@ -48,13 +48,13 @@ const HEADERS: Record<keyof PlateScheduleRow, string> = {
   governingCombination: 'Governing combination',
 };
 
-const inches = (text: string) => toInternal(text, 'length');
+const inches = (q: ParsedQuantity) => q.value;
 const toIn = (q: Quantity) => convert(q.value, q.unit, 'in');
 
 /** One schedule row from a connection input and its result (result null: the requirement columns stay blank). */
 export function plateScheduleRow(
   name: string,
-  input: ConnectionInput,
+  input: ParsedConnection,
   result: ConnectionResult | null,
 ): PlateScheduleRow {
   const a = input.anchors;
@@ -65,7 +65,7 @@ export function plateScheduleRow(
     mark: name,
     arrangement: input.arrangement,
     plate: `${inchFraction(inches(input.plate.N))} x ${inchFraction(inches(input.plate.B))} x ${inchFraction(inches(input.plate.thickness))}`,
-    plateFy: String(Number(toInternal(input.plate.Fy ?? '36 ksi', 'stress').toPrecision(4))),
+    plateFy: String(Number(input.plate.Fy.value.toPrecision(4))),
     rods: `${2 * a.perSide} x ${inchFraction(da)}`,
     rodGrade: `ASTM ${a.grade.replace('-', ' Gr ')}`,
     rowOffset: inchFraction(inches(a.offset)),

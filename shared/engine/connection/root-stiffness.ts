@@ -19,10 +19,9 @@
  * Grout under a post base is not an input: taken as 1.5 in (common practice, no source; a longer
  * stretch length errs toward more rotation); none under a face plate.
  */
-import type { ConnectionInput } from '../../schemas/connection';
+import type { ParsedConnection } from '../../schemas/parsed-design';
 import type { ShapeLookup } from '../shapes/types';
 import type { RootFootprint } from '../types';
-import { toInternal } from '../units';
 import { readGeometry } from './connection-geometry';
 
 export const POST_BASE_GROUT = 1.5;
@@ -47,7 +46,7 @@ export interface RootStiffness {
 export type RootStiffnessResult = RootStiffness | { ok: false; reason: string };
 
 export function rootStiffness(
-  input: ConnectionInput,
+  input: ParsedConnection,
   root: RootFootprint,
   shapes: ShapeLookup,
   E = 29000,
@@ -81,7 +80,7 @@ export function rootStiffness(
     const shape = shapes(input.footprint.shape);
     if (!shape)
       return { ok: false, reason: `the post section "${input.footprint.shape}" is not in the shapes table` };
-    postFlexibility = toInternal(input.post.height, 'length') / (E * shape.Ix);
+    postFlexibility = input.post.height.value / (E * shape.Ix);
   }
   return {
     ok: true,

@@ -3,11 +3,11 @@
  * in internal units (kip/in, kip, in). Area loads act on the tributary width (the spacing); the
  * self-weight of a tapered member varies linearly with x because its area does.
  */
-import type { LoadCase, LoadsInput } from '../../schemas/member';
+import type { LoadCase } from '../../schemas/member';
+import type { ParsedLoads } from '../../schemas/parsed-design';
 import { LOAD_CASES } from '../../schemas/member';
 import type { MemberSection } from '../sections/section-types';
 import { STEEL_DENSITY } from '../sections/steel-grades';
-import { toInternal } from '../units';
 
 export interface PointLoad {
   P: number;
@@ -42,7 +42,7 @@ function entryOf(byCase: Map<LoadCase, CaseLoads>, c: LoadCase): CaseLoads {
 
 /** Loads of each case present (a case is present when it carries a non-zero load). */
 export function gatherCaseLoads(
-  loads: LoadsInput,
+  loads: ParsedLoads,
   section: MemberSection,
   L: number,
   spacing: number,
@@ -55,16 +55,16 @@ export function gatherCaseLoads(
     d.q1 += sw.q1;
   }
   for (const a of loads.area) {
-    const v = toInternal(a.value, 'areaLoad') * spacing;
+    const v = a.value.value * spacing;
     if (v !== 0) entryOf(byCase, a.case).q0 += v;
   }
   for (const l of loads.line) {
-    const v = toInternal(l.value, 'lineLoad');
+    const v = l.value.value;
     if (v !== 0) entryOf(byCase, l.case).q0 += v;
   }
   for (const p of loads.point) {
-    const P = toInternal(p.value, 'force');
-    if (P !== 0) entryOf(byCase, p.case).points.push({ P, a: toInternal(p.at, 'length') });
+    const P = p.value.value;
+    if (P !== 0) entryOf(byCase, p.case).points.push({ P, a: p.at.value });
   }
   const present: CaseLoads[] = [];
   for (const c of LOAD_CASES) {

@@ -3,22 +3,19 @@
  * see: an unknown shape, a taper on a shape that is not a W, a tip not shallower than the root, a
  * tip too shallow to leave a web, plates that do not make an I.
  */
-import type { MemberInput } from '../../schemas/member';
+import type { ParsedPlates, ParsedSection } from '../../schemas/parsed-design';
 import type { ShapeLookup } from '../shapes/types';
 import type { MemberSection } from './section-types';
 import { catalogSection, missingDimensions } from './catalog-section';
 import { builtUpSection, taperedRolledSection } from './tapered-section';
-import { toInternal } from '../units';
 
 export interface FieldProblem {
   path: string;
   message: string;
 }
 
-type SectionInput = MemberInput['section'];
-
 /** Returns the section, or the problems that make it impossible (internal units, in). */
-export function resolveSection(section: SectionInput, shapes: ShapeLookup): MemberSection | FieldProblem[] {
+export function resolveSection(section: ParsedSection, shapes: ShapeLookup): MemberSection | FieldProblem[] {
   if (section.plates) return resolvePlates(section.plates);
   const label = section.shape ?? '';
   const shape = shapes(label);
@@ -39,11 +36,14 @@ export function resolveSection(section: SectionInput, shapes: ShapeLookup): Memb
   if (shape.family !== 'W') {
     return [{ path, message: `a web taper applies to W shapes only, not ${shape.family} (${shape.label})` }];
   }
-  const tip = toInternal(section.tipDepth, 'length');
+  const tip = section.tipDepth.value;
   const d = shape.d ?? 0;
   if (tip >= d) {
     return [
-      { path, message: `must be less than the depth of ${shape.label} (${d} in), got "${section.tipDepth}"` },
+      {
+        path,
+        message: `must be less than the depth of ${shape.label} (${d} in), got "${section.tipDepth.text}"`,
+      },
     ];
   }
   const minTip = 2 * (shape.kdes ?? shape.tf ?? 0) + 0.25;
@@ -51,21 +51,21 @@ export function resolveSection(section: SectionInput, shapes: ShapeLookup): Memb
     return [
       {
         path,
-        message: `is too shallow: ${shape.label} needs at least ${round(minTip)} in to keep a web clear of the fillets, got "${section.tipDepth}"`,
+        message: `is too shallow: ${shape.label} needs at least ${round(minTip)} in to keep a web clear of the fillets, got "${section.tipDepth.text}"`,
       },
     ];
   }
   return taperedRolledSection(shape, tip);
 }
 
-function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSection | FieldProblem[] {
+function resolvePlates(plates: ParsedPlates): MemberSection | FieldProblem[] {
   const base = 'member.section.plates';
   const p = {
-    rootDepth: toInternal(plates.rootDepth, 'length'),
-    tipDepth: toInternal(plates.tipDepth, 'length'),
-    flangeWidth: toInternal(plates.flangeWidth, 'length'),
-    flangeThickness: toInternal(plates.flangeThickness, 'length'),
-    webThickness: toInternal(plates.webThickness, 'length'),
+    rootDepth: plates.rootDepth.value,
+    tipDepth: plates.tipDepth.value,
+    flangeWidth: plates.flangeWidth.value,
+    flangeThickness: plates.flangeThickness.value,
+    webThickness: plates.webThickness.value,
   };
   const problems: FieldProblem[] = [];
   // Plates a shop can weld (common practice, no source): thicknesses 1/8 to 4 in, widths and
@@ -80,7 +80,7 @@ function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSecti
     if (p[key] < min || p[key] > max) {
       problems.push({
         path: `${base}.${key}`,
-        message: `must be between ${min} and ${max} in, got "${plates[key]}"`,
+        message: `must be between ${min} and ${max} in, got "${plates[key].text}"`,
       });
     }
   }
@@ -89,25 +89,25 @@ function resolvePlates(plates: NonNullable<SectionInput['plates']>): MemberSecti
   if (p.tipDepth > p.rootDepth) {
     problems.push({
       path: `${base}.tipDepth`,
-      message: `must not exceed the root depth (${plates.rootDepth}), got "${plates.tipDepth}"`,
+      message: `must not exceed the root depth (${plates.rootDepth.text}), got "${plates.tipDepth.text}"`,
     });
   }
   if (p.tipDepth < minDepth) {
     problems.push({
       path: `${base}.tipDepth`,
-      message: `is too shallow: two ${plates.flangeThickness} flanges need at least ${round(minDepth)} in to leave a web, got "${plates.tipDepth}"`,
+      message: `is too shallow: two ${plates.flangeThickness.text} flanges need at least ${round(minDepth)} in to leave a web, got "${plates.tipDepth.text}"`,
     });
   }
   if (p.rootDepth < minDepth) {
     problems.push({
       path: `${base}.rootDepth`,
-      message: `is too shallow to leave a web between the flanges, got "${plates.rootDepth}"`,
+      message: `is too shallow to leave a web between the flanges, got "${plates.rootDepth.text}"`,
     });
   }
   if (p.webThickness >= p.flangeWidth) {
     problems.push({
       path: `${base}.webThickness`,
-      message: `must be thinner than the flange width (${plates.flangeWidth}), got "${plates.webThickness}"`,
+      message: `must be thinner than the flange width (${plates.flangeWidth.text}), got "${plates.webThickness.text}"`,
     });
   }
   return problems.length ? problems : builtUpSection(p);

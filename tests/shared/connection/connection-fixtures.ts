@@ -3,7 +3,8 @@
  * helpers to vary it. Not a test file (no assertions); the tests import it.
  */
 import { expect } from 'vitest';
-import { connectionSchema, type ConnectionInput } from '../../../shared/schemas/connection';
+import type { ConnectionInput } from '../../../shared/schemas/connection';
+import { parsedConnectionSchema, type ParsedConnection } from '../../../shared/schemas/parsed-design';
 import type { ConnectionContext } from '../../../shared/engine/connection/check-connection';
 import { findShape } from '../../../shared/engine/shapes/table';
 import type { RootDemand, RootFootprint } from '../../../shared/engine/types';
@@ -16,8 +17,8 @@ export const ASD_US: ConnectionContext = { units: 'US', method: 'ASD', shapes: f
 
 type DeepPartial<T> = { [K in keyof T]?: T[K] extends object ? DeepPartial<T[K]> : T[K] };
 
-/** A post-base connection that passes under modest demands; `over` replaces parts of it. */
-export function connection(over: DeepPartial<ConnectionInput> = {}): ConnectionInput {
+/** A post-base connection that passes under modest demands (parsed); `over` replaces parts of it. */
+export function connection(over: DeepPartial<ConnectionInput> = {}): ParsedConnection {
   const base = {
     arrangement: 'post-base',
     plate: { N: '20 in', B: '16 in', thickness: '1.5 in', Fy: '36 ksi' },
@@ -40,7 +41,7 @@ export function connection(over: DeepPartial<ConnectionInput> = {}): ConnectionI
     concrete: { ...base.concrete, ...over.concrete },
     pier: { ...base.pier, ...over.pier },
   };
-  return connectionSchema.parse(merged);
+  return parsedConnectionSchema.parse(merged);
 }
 
 /** Two combinations of our scenario: dead alone, and dead plus live (kip, kip·in). */

@@ -4,6 +4,7 @@ import { checkConnection, type ConnectionContext } from '../../../shared/engine/
 import { solveBearing } from '../../../shared/engine/connection/bearing';
 import { basicBreakout, breakoutTension } from '../../../shared/engine/connection/breakout-tension';
 import type { ConnectionInput } from '../../../shared/schemas/connection';
+import { parseConnection } from '../../../shared/schemas/parsed-design';
 import { findShape } from '../../../shared/engine/shapes/table';
 import type { RootDemand } from '../../../shared/engine/types';
 import { W12X26_ROOT, expectWithin, numbersIn } from './connection-fixtures';
@@ -78,7 +79,7 @@ describe('connection properties (fast-check)', () => {
   it('never returns NaN or Infinity, never passes an uncomputed check, never a negative rod tension', () => {
     fc.assert(
       fc.property(inputArb, demandArb, ctxArb, (a, demands, ctx) => {
-        const { result, checks } = checkConnection(toInput(a), demands, W12X26_ROOT, ctx);
+        const { result, checks } = checkConnection(parseConnection(toInput(a)), demands, W12X26_ROOT, ctx);
         expect(numbersIn({ result, checks }).every(Number.isFinite)).toBe(true);
         for (const c of checks) {
           if (c.ratio === null) expect(c.ok).toBe(false);
@@ -112,12 +113,12 @@ describe('connection properties (fast-check)', () => {
   it('a thicker plate never needs more: the requirement does not depend on t, and the ratio falls', () => {
     fc.assert(
       fc.property(inputArb, demandArb, len(0.25, 2), (a, demands, extra) => {
-        const thin = checkConnection(toInput(a), demands, W12X26_ROOT, {
+        const thin = checkConnection(parseConnection(toInput(a)), demands, W12X26_ROOT, {
           units: 'US',
           method: 'LRFD',
           shapes: findShape,
         });
-        const thick = checkConnection(toInput(a, a.t + extra), demands, W12X26_ROOT, {
+        const thick = checkConnection(parseConnection(toInput(a, a.t + extra)), demands, W12X26_ROOT, {
           units: 'US',
           method: 'LRFD',
           shapes: findShape,

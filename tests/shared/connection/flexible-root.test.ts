@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { rootStiffness } from '../../../shared/engine/connection/root-stiffness';
 import { connectionSchema } from '../../../shared/schemas/connection';
+import { parseConnection } from '../../../shared/schemas/parsed-design';
 import { findShape } from '../../../shared/engine/shapes/table';
 import { analyseMember } from '../../../shared/engine/member/analysis';
 import { firstFrequency } from '../../../shared/engine/member/frequency';
@@ -37,7 +38,7 @@ describe('root stiffness by components', () => {
   it('rod stretch: 2 rods of 3/4 in (As 0.334 in^2), Ls = 8 x 0.75 + 1.5 + 1.25 + 0.25 + 0.375 = 9.375 in', () => {
     // Stretch length: 8 da + grout (1.5 in, common practice, no source) + plate + washer (1/4 in,
     // DG1 Table 2.3 [pub]) + half a nut (da/2). k = n E As / Ls = 2 x 29000 x 0.334 / 9.375 = 2066.3 kip/in.
-    const s = rootStiffness(conn(), W12X26_ROOT, findShape);
+    const s = rootStiffness(parseConnection(conn()), W12X26_ROOT, findShape);
     if (!s.ok) throw new Error(s.reason);
     expect(s.stretchLength).toBeCloseTo(9.375, 12);
     expect(rel(s.kRods, (2 * 29000 * 0.334) / 9.375)).toBeLessThan(2e-3);
@@ -48,7 +49,7 @@ describe('root stiffness by components', () => {
     // leff = min(14, 2 x 2 pi x 0.9 = 11.31) = 11.31 in; k_plate = 0.425 x 29000 x 11.31 x 1.25^3 / 0.9^3.
     // Concrete: Ec = 57 sqrt(4000) = 3605 ksi (ACI 318-19 19.2.2.1), beff = 0.38 + 3.125, leff = 6.49 + 3.125,
     // k_c = Ec sqrt(beff leff) / 1.275. z = 7 + 6.1 - 0.19 = 12.91 in.
-    const s = rootStiffness(conn(), W12X26_ROOT, findShape);
+    const s = rootStiffness(parseConnection(conn()), W12X26_ROOT, findShape);
     if (!s.ok) throw new Error(s.reason);
     const kr = (2 * 29000 * 0.334) / 9.375;
     const kp = (0.425 * 29000 * Math.min(14, 4 * Math.PI * 0.9) * 1.25 ** 3) / 0.9 ** 3;
@@ -62,7 +63,7 @@ describe('root stiffness by components', () => {
 
   it('a post adds h / (E I): HSS8X8X1/2 (Ix 125 in^4), 12 in: 12 / (29000 x 125) = 3.31e-6 rad per kip-in', () => {
     const s = rootStiffness(
-      conn({ footprint: { shape: 'HSS8X8X1/2' }, post: { height: '12 in' } }),
+      parseConnection(conn({ footprint: { shape: 'HSS8X8X1/2' }, post: { height: '12 in' } })),
       W12X26_ROOT,
       findShape,
     );
@@ -97,7 +98,7 @@ function doc(flexibleRoot?: boolean, over: Record<string, unknown> = {}): Design
 describe('deflection and frequency with the root rotation', () => {
   it('tip = member + theta L with theta = (M + V offset) / S: D + L (M 22.4 kip-ft = 268.8 kip-in)', () => {
     const r = run(doc());
-    const s = rootStiffness(conn(), W12X26_ROOT, findShape);
+    const s = rootStiffness(parseConnection(conn()), W12X26_ROOT, findShape);
     if (!s.ok) throw new Error(s.reason);
     const theta = 268.8 * s.flexibility;
     const total = check(r, 'member.deflection.total');
@@ -166,7 +167,7 @@ describe('deflection and frequency with the root rotation', () => {
           ...(v.h > 0 ? { post: { height: `${v.h} in` } } : {}),
         });
         const flex = (v: typeof a) => {
-          const s = rootStiffness(conn(over(v)), W12X26_ROOT, findShape);
+          const s = rootStiffness(parseConnection(conn(over(v))), W12X26_ROOT, findShape);
           if (!s.ok) throw new Error(s.reason);
           return s.flexibility;
         };

@@ -6,9 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { DesignDocument } from '../../../shared/schemas/design';
-import { designSchema } from '../../../shared/schemas/design';
 import { evaluateDesign } from '../../../shared/engine/design';
 import { check, rel, run } from '../engine/design-helpers';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 
 /** W12X26, 8 ft, D 0.30 kip/ft, L 0.40 kip/ft: LRFD 1.2D + 1.6L gives Mu 32.0 kip-ft, Vu 8.0 kip (REFERENCES.md [calc]). */
 function doc(connection: Partial<NonNullable<DesignDocument['connection']>> = {}): DesignDocument {
@@ -96,10 +96,10 @@ describe('post.combined, AISC 360-16 H1.1 with E3 and F7', () => {
 
   it('a post on a face plate, or a post without its section, is refused naming the field', () => {
     expect(() =>
-      evaluateDesign(designSchema.parse(doc({ arrangement: 'face-plate', post: { height: '12 in' } }))),
+      evaluateDesign(parsedDesignSchema.parse(doc({ arrangement: 'face-plate', post: { height: '12 in' } }))),
     ).toThrow(/connection.post/);
     const d = doc({ post: { height: '12 in' } });
     delete d.connection!.footprint;
-    expect(() => evaluateDesign(designSchema.parse(d))).toThrow(/connection.footprint/);
+    expect(() => evaluateDesign(parsedDesignSchema.parse(d))).toThrow(/connection.footprint/);
   });
 });

@@ -8,9 +8,9 @@ import { solveBearing } from '../../../shared/engine/connection/bearing';
 import { requiredThickness } from '../../../shared/engine/connection/plate-thickness';
 import { strengthCombinations, allowableCombinations } from '../../../shared/engine/member/combinations';
 import type { DesignDocument } from '../../../shared/schemas/design';
-import { designSchema } from '../../../shared/schemas/design';
 import { evaluateDesign } from '../../../shared/engine/design';
 import { check, memberDoc, run } from '../engine/design-helpers';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 
 const w12 = { label: 'W12X26', kind: 'I' as const, d: 12.2, bf: 6.49, tf: 0.38, tw: 0.23 };
 
@@ -90,7 +90,7 @@ describe('tapers steeper than 1:4 and impossible layouts', () => {
       section: { shape: 'W12X26', tipDepth: '6 in' },
       loads: { selfWeight: true, area: [], line: [], point: [] },
     });
-    expect(() => evaluateDesign(designSchema.parse(d))).toThrow(
+    expect(() => evaluateDesign(parsedDesignSchema.parse(d))).toThrow(
       /member.section.tipDepth: makes the taper steeper than 1:4/,
     );
     const ok = memberDoc({
@@ -98,7 +98,7 @@ describe('tapers steeper than 1:4 and impossible layouts', () => {
       section: { shape: 'W12X26', tipDepth: '6 in' },
       loads: { selfWeight: true, area: [], line: [], point: [] },
     });
-    expect(() => evaluateDesign(designSchema.parse(ok))).not.toThrow();
+    expect(() => evaluateDesign(parsedDesignSchema.parse(ok))).not.toThrow();
   });
 
   it('rods outside the plate: the layout fails and every check resting on it is not computed', () => {

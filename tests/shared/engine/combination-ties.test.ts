@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designSchema } from '../../../shared/schemas/design';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 import { evaluateDesign } from '../../../shared/engine/design';
 import { exampleDesign } from '../../../shared/engine/examples';
 import { clearlyGreater } from '../../../shared/engine/ties';
@@ -8,7 +8,7 @@ import { governing } from '../../../shared/engine/connection/check-row';
 describe('physically tied combinations', () => {
   it('keeps the earlier combination governing when two service combinations tie exactly', () => {
     // ASCE 7-16 2.4.1 (from memory): D + L and D + 0.75L + 0.75S give the same load when L = 3S.
-    const doc = designSchema.parse({
+    const doc = parsedDesignSchema.parse({
       ...exampleDesign,
       loads: {
         ...exampleDesign.loads,
@@ -24,7 +24,7 @@ describe('physically tied combinations', () => {
   });
 
   it('lets a later combination govern once it is larger by more than rounding noise', () => {
-    const doc = designSchema.parse({
+    const doc = parsedDesignSchema.parse({
       ...exampleDesign,
       loads: {
         ...exampleDesign.loads,

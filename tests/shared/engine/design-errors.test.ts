@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { assertFinite } from '../../../shared/engine/finite-guard';
+import { assertFinite, assertStationsFinite } from '../../../shared/engine/finite-guard';
 import { DesignInputError } from '../../../shared/engine/types';
 import { designSchema } from '../../../shared/schemas/design';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 import { toFieldIssues } from '../../../shared/schemas/quantity';
 import { memberDoc, run } from './design-helpers';
 
@@ -139,12 +140,31 @@ describe('sizes outside what the engine checks', () => {
     expect(() => assertFinite({ x: Number.NaN })).toThrow(/not a finite number/);
     expect(() => assertFinite({ x: [1, { y: 2 }], s: 'text', n: null })).not.toThrow();
   });
+
+  it('the station guard refuses NaN or Infinity in any station array, and passes real ones', () => {
+    const stations = run(memberDoc({ loads: { area: [{ case: 'L', value: '60 psf' }] } }), {
+      stations: true,
+    }).stations!;
+    expect(() => assertStationsFinite(stations)).not.toThrow();
+    for (const bad of [Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY]) {
+      for (const mutate of [
+        (s: typeof stations) => (s.x[3] = bad),
+        (s: typeof stations) => (s.depth[0] = bad),
+        (s: typeof stations) => (s.cases[0].M[5] = bad),
+        (s: typeof stations) => s.combinations.at(-1)!.deflection.splice(-1, 1, bad),
+        (s: typeof stations) => (s.combinations[0].rotation![2] = bad),
+      ]) {
+        const copy = structuredClone(stations);
+        mutate(copy);
+        expect(() => assertStationsFinite(copy)).toThrow(/not a finite number/);
+      }
+    }
+  });
 });
 
 describe("a user's imported shapes", () => {
   it('are used through options.shapes; one without the dimensions its checks need is refused', async () => {
     const { lookupWith } = await import('../../../shared/engine/shapes/table');
-    const { designSchema } = await import('../../../shared/schemas/design');
     const { evaluateDesign } = await import('../../../shared/engine/design');
     // A custom welded W of our own: plates 10 x 6 x 3/8 in flanges, 1/4 in web, no torsional columns.
     const custom = {
@@ -164,12 +184,12 @@ describe("a user's imported shapes", () => {
       J: 0.3,
       custom: true,
     };
-    const doc = designSchema.parse(memberDoc({ shape: 'MYW10', loads: someLoad }));
+    const doc = parsedDesignSchema.parse(memberDoc({ shape: 'MYW10', loads: someLoad }));
     const r = evaluateDesign(doc, { shapes: lookupWith([custom]) });
     expect(r.member.section.label).toBe('MYW10');
     expect(r.checks.every((c) => Number.isFinite(c.ratio))).toBe(true);
     const broken = { ...custom, label: 'BROKEN', tw: undefined };
-    const bad = designSchema.parse(memberDoc({ shape: 'BROKEN', loads: someLoad }));
+    const bad = parsedDesignSchema.parse(memberDoc({ shape: 'BROKEN', loads: someLoad }));
     expect(() => evaluateDesign(bad, { shapes: lookupWith([broken]) })).toThrow(/BROKEN lacks tw/);
   });
 });

@@ -1,7 +1,8 @@
 /** Small helpers for engine tests: build a validated document and read results in fixed units. */
-import { designSchema, type DesignDocument } from '../../../shared/schemas/design';
+import type { DesignDocument } from '../../../shared/schemas/design';
 import { evaluateDesign, type EvaluateOptions } from '../../../shared/engine/design';
 import type { Check, DesignResult } from '../../../shared/engine/types';
+import { parsedDesignSchema } from '../../../shared/schemas/parsed-design';
 
 /** A member-only document with no loads but the ones given (self-weight off unless asked). */
 export function memberDoc(over: {
@@ -30,7 +31,7 @@ export function memberDoc(over: {
 }
 
 export function run(doc: DesignDocument, options?: EvaluateOptions): DesignResult {
-  return evaluateDesign(designSchema.parse(doc), options);
+  return evaluateDesign(parsedDesignSchema.parse(doc), options);
 }
 
 export function check(result: DesignResult, id: string): Check {

@@ -10,8 +10,8 @@ import { rootOutline } from '../../../../shared/engine/connection/root-outline';
 import { lookupWith } from '../../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { DesignResult } from '../../../../shared/engine/types';
-import { formatQuantity, toInternal, type Quantity, type UnitSystem } from '../../../../shared/engine/units';
-import { connectionSchema } from '../../../../shared/schemas/connection';
+import { formatQuantity, type Quantity, type UnitSystem } from '../../../../shared/engine/units';
+import { parsedConnectionSchema } from '../../../../shared/schemas/parsed-design';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { lengthText, washerText } from './plate-drawing-format';
 import { planView } from './plate-drawing-plan';
@@ -55,7 +55,7 @@ export function plateDrawing(
   result: DesignResult | null,
   custom: readonly ShapeRecord[] = [],
 ): PlateDrawing | null {
-  const parsed = connectionSchema.safeParse(doc.connection);
+  const parsed = parsedConnectionSchema.safeParse(doc.connection);
   if (!doc.connection || !parsed.success) return null;
   const find = lookupWith(custom);
   const root = rootOutline(doc.member.section, find);
@@ -75,7 +75,7 @@ export function plateDrawing(
   const pierMin = pierEdgeMinimum(geo.da, geo.torqued);
   const bearing = bearingZoneFromResult(L, result?.connection ?? null);
   const plan = planView({ layout: L, units, roles, grade: geo.grade, pierEdgeMinimum: pierMin, bearing });
-  const postHeight = !face && input.post ? toInternal(input.post.height, 'length') : undefined;
+  const postHeight = !face && input.post ? input.post.height.value : undefined;
   const section = sectionView({
     arrangement: L.arrangement,
     units,

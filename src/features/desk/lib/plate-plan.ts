@@ -13,7 +13,7 @@ import { lookupWith } from '../../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { DesignResult } from '../../../../shared/engine/types';
 import { rootOutline } from '../../../../shared/engine/connection/root-outline';
-import { connectionSchema } from '../../../../shared/schemas/connection';
+import { parsedConnectionSchema } from '../../../../shared/schemas/parsed-design';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 
 export interface PlatePlan {
@@ -26,7 +26,7 @@ export function platePlan(
   result: DesignResult | null,
   custom: readonly ShapeRecord[] = [],
 ): PlatePlan | null {
-  const parsed = connectionSchema.safeParse(doc.connection);
+  const parsed = parsedConnectionSchema.safeParse(doc.connection);
   if (!doc.connection || !parsed.success) return null;
   const find = lookupWith(custom);
   const root = rootOutline(doc.member.section, find);

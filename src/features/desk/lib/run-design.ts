@@ -1,5 +1,5 @@
 /**
- * One live computation: validate the form's document with the shared schema, then run the shared
+ * One live computation: validate and parse the form's document with the shared schema (parsedDesignSchema), then run the shared
  * engine with the station arrays for the charts. Used by the web worker (and directly where no
  * worker exists, e.g. under jsdom). Never throws: every outcome is an answer.
  */
@@ -7,7 +7,7 @@ import { evaluateDesign } from '../../../../shared/engine/design';
 import { lookupWith } from '../../../../shared/engine/shapes/table';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import { DesignInputError, type DesignResult } from '../../../../shared/engine/types';
-import { designSchema } from '../../../../shared/schemas/design';
+import { parsedDesignSchema } from '../../../../shared/schemas/parsed-design';
 import { toFieldIssues, type FieldIssue } from '../../../../shared/schemas/quantity';
 
 export type DesignAnswer =
@@ -17,7 +17,7 @@ export type DesignAnswer =
 
 export function runDesign(doc: unknown, extraShapes: readonly ShapeRecord[] = []): DesignAnswer {
   const started = performance.now();
-  const parsed = designSchema.safeParse(doc);
+  const parsed = parsedDesignSchema.safeParse(doc);
   if (!parsed.success)
     return { kind: 'invalid', issues: toFieldIssues(parsed.error), ms: performance.now() - started };
   try {

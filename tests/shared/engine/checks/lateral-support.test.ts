@@ -9,10 +9,10 @@ import fc from 'fast-check';
 import { cbF11 } from '../../../../shared/engine/checks/lateral-support';
 import { cantileverK } from '../../../../shared/engine/checks/cantilever-effective-length';
 import type { DesignDocument } from '../../../../shared/schemas/design';
-import { designSchema } from '../../../../shared/schemas/design';
 import { evaluateDesign } from '../../../../shared/engine/design';
 import { DesignInputError } from '../../../../shared/engine/types';
 import { check, memberDoc, rel, run } from '../design-helpers';
+import { parsedDesignSchema } from '../../../../shared/schemas/parsed-design';
 
 const E = 29000;
 const Fy = 50;
@@ -135,17 +135,17 @@ describe('segments between braces', () => {
   });
 
   it('a brace beyond the tip, or braces together with unbracedLength, are refused naming the field', () => {
-    expect(() => evaluateDesign(designSchema.parse(doc('W12X26', '10 ft', { braces: ['12 ft'] })))).toThrow(
-      DesignInputError,
-    );
+    expect(() =>
+      evaluateDesign(parsedDesignSchema.parse(doc('W12X26', '10 ft', { braces: ['12 ft'] }))),
+    ).toThrow(DesignInputError);
     try {
-      evaluateDesign(designSchema.parse(doc('W12X26', '10 ft', { braces: ['12 ft'] })));
+      evaluateDesign(parsedDesignSchema.parse(doc('W12X26', '10 ft', { braces: ['12 ft'] })));
     } catch (e) {
       expect((e as DesignInputError).issues[0].path).toBe('member.lateralSupport.braces[0]');
     }
     const both = doc('W12X26', '10 ft', { braces: ['4 ft'] });
     both.member.unbracedLength = '4 ft';
-    expect(() => evaluateDesign(designSchema.parse(both))).toThrow(/member.unbracedLength/);
+    expect(() => evaluateDesign(parsedDesignSchema.parse(both))).toThrow(/member.unbracedLength/);
   });
 
   it('property: a brace never makes the governing ratio worse', () => {

@@ -15,6 +15,7 @@ import { analyseMember } from '../../../../shared/engine/member/analysis';
 import { builtUpSection } from '../../../../shared/engine/sections/tapered-section';
 import { connection, expectWithin, LRFD_US, W12X26_ROOT } from '../../connection/connection-fixtures';
 import { toInternal } from '../../../../shared/engine/units';
+import { parsedQuantity } from '../../../../shared/schemas/parsed-design';
 
 describe('plate.thickness: rods beside the section, not beyond the tension flange', () => {
   // W12X26 footprint: d 12.2, bf 6.49, tf 0.380 in (AISC Shapes Database v15.0 [pub]).
@@ -107,7 +108,11 @@ function taperContext(M: (x: number) => number): CheckContext {
     Lb: 12,
     combos: [{ name: '1.6L', factors: { L: 1.6 }, response }],
     signed: false,
-    lateral: readLateralSupport({ length: '1 ft', spacing: '1 ft', section: { shape: 'W12X26' } }),
+    lateral: readLateralSupport({
+      length: parsedQuantity('1 ft', 'length'),
+      spacing: parsedQuantity('1 ft', 'length'),
+      section: { shape: 'W12X26' },
+    }),
   };
 }
 
