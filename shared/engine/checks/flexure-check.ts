@@ -106,6 +106,7 @@ function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor
     loaded: false,
   };
   const tol = model.L * 1e-9;
+  const lrfd = method === 'LRFD';
   for (const seg of segments) {
     let i0 = 0;
     while (i0 < last && x[i0] < seg.from - tol) i0++;
@@ -133,7 +134,8 @@ function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor
         w.loaded = true;
         const s = strengthAt(i);
         if (s.outOfScope !== undefined && w.outside < 0) w.outside = i;
-        const cap = available(s.nominal, method, PHI_B, OMEGA_B);
+        // available() written out: this runs for every station of every combination.
+        const cap = lrfd ? PHI_B * s.nominal : s.nominal / OMEGA_B;
         if (!(cap > 0)) {
           if (!w.noCapacity) w.noCapacity = { node: i, strength: s };
           continue;
