@@ -3,8 +3,9 @@
  * time. For each setup (one instance on SQLite; one and two instances on one PostgreSQL, a
  * throwaway cluster from scripts/lib/pg-cluster.ts) the server entry (server/index.ts) runs in its
  * own process(es) on a fresh demo database; a signed-in demo engineer then measures, one after
- * the other: /api/health, the project, the revisions list, one revision, POST /api/check, and a
- * 50-client mix of the reads and the check. Prints req/s, p50/p99 latency and errors, with each
+ * the other: /api/health, the project, the revisions list, one revision, POST /api/check (the
+ * result, and "check+stn" with the station arrays), and a 50-client mix of the reads and the check.
+ * The server is the bundle npm start runs (scripts/lib/server-build.ts), built first if stale. Prints req/s, p50/p99 latency and errors, with each
  * figure's ratio to /api/health in the same run; `--json` prints one object.
  *
  * Options: --duration <s> per measurement (default 5), --connections <n> (default 10),
@@ -17,6 +18,7 @@ import autocannon from 'autocannon';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../server/db/seed';
 import { startFakeSmtp } from '../server/mail/fake-smtp';
 import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
+import { serverBuildStep, serverOutDir } from './lib/server-build';
 import { startServerProcess, type ServerProcess } from './lib/server-process';
 
 const args = process.argv.slice(2);
@@ -40,8 +42,11 @@ interface Figure {
   ratio?: number;
 }
 
+/** The bundled server, as npm start runs it (built first when out of date). */
+const BUNDLE = join(serverOutDir(process.cwd()), 'serve.js');
+
 function startInstance(env: Record<string, string>, name: string): Promise<ServerProcess> {
-  return startServerProcess(env, name, 90_000);
+  return startServerProcess(env, name, 90_000, BUNDLE);
 }
 
 async function signIn(url: string): Promise<string> {
@@ -133,6 +138,7 @@ async function runSetup(label: string, databaseUrl: string, count: number): Prom
       path: '/api/check',
       body: JSON.stringify({ input: revision.input }),
     };
+    const checkStations: Req = { ...check, body: JSON.stringify({ input: revision.input, stations: true }) };
     const reads: Record<string, Req> = {
       project: { method: 'GET', path: `/api/projects/${projectId}` },
       revisions: { method: 'GET', path: `/api/cantilevers/${cantilever.id}/revisions` },
@@ -152,6 +158,7 @@ async function runSetup(label: string, databaseUrl: string, count: number): Prom
     for (const [name, req] of Object.entries(reads))
       figures.push(await measure(name, instances, cookie, [req], CONNECTIONS));
     figures.push(await measure('check', instances, cookie, [check], CONNECTIONS));
+    figures.push(await measure('check+stn', instances, cookie, [checkStations], CONNECTIONS));
     figures.push(
       await measure('mix-50', instances, cookie, [reads.project, reads.revisions, reads.revision, check], 50),
     );
@@ -181,6 +188,8 @@ function print(label: string, figures: Figure[]): void {
 }
 
 async function main(): Promise<void> {
+  const build = serverBuildStep(process.cwd());
+  await build.run();
   const all: Record<string, Figure[]> = {};
   const setups: { key: string; label: string; count: number; pg: boolean }[] = [
     { key: 'sqlite', label: 'SQLite, one instance', count: 1, pg: false },

@@ -93,7 +93,11 @@ export function createApp(config: Config, deps: AppDeps): ReachlineApp {
 
   const store = new GuardedSessionStore(deps.db);
   let decoy: Promise<string> | null = null;
-  const passport = createPassport(deps.db, () => (decoy ??= decoyHash(config.passwordCost)));
+  const passport = createPassport(
+    deps.db,
+    () => (decoy ??= decoyHash(config.passwordCost)),
+    (req) => store.takeAccount(req.sessionID),
+  );
 
   const api = express.Router();
   api.use(sameOrigin({ appOrigin: config.appOrigin, allowedHosts }));

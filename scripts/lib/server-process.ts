@@ -1,5 +1,5 @@
 /**
- * The real server entry (server/index.ts, through tsx) in a child process, configured by
+ * The real server entry (server/index.ts through tsx, or the bundle npm start runs) in a child process, configured by
  * environment variables; resolves with its URL once it prints "running at". Used by the
  * multi-instance and durability tests and by `npm run bench:load`.
  */
@@ -18,8 +18,11 @@ export function startServerProcess(
   env: Record<string, string>,
   name: string,
   timeoutMs = 60_000,
+  /** A bundled entry to run with plain Node instead (the `serve.js` npm start runs). */
+  bundle?: string,
 ): Promise<ServerProcess> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const args = bundle ? [bundle] : ['--import', 'tsx', 'server/index.ts'];
+  const child = spawn(process.execPath, args, {
     env: { ...process.env, ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

@@ -7,16 +7,18 @@
  * wrong password is told: the answer never confirms a password.
  */
 import type { Knex } from 'knex';
-import { Passport } from 'passport';
+import type { Handler, Request, RequestHandler } from 'express';
+import { Passport, type Authenticator } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { findUserByEmail, findUserById, toUserDto } from '../features/users/users.repository';
+import { findUserByEmail, findUserById, toUserDto, type UserRow } from '../features/users/users.repository';
 import { verifyPassword } from '../lib/password';
 
 export interface SignInFailure {
   message: string;
 }
 
-export type PassportInstance = InstanceType<typeof Passport>;
+/** An Authenticator whose authenticate() returns an Express handler (the package's default is `any`). */
+export type PassportInstance = Authenticator<Handler, RequestHandler>;
 
 export const SIGN_IN_FAILED = 'The e-mail or the password is not right.';
 
@@ -30,8 +32,16 @@ function sessionKey(value: unknown): { id: number; v: number } | null {
   return null;
 }
 
-export function createPassport(db: Knex, decoy: () => Promise<string>): PassportInstance {
-  const passport = new Passport();
+/** The account the session store read with this request's session, if it did (session-store.ts). */
+export type PrefetchedAccount = (req: Request) => UserRow | undefined;
+
+export function createPassport(
+  db: Knex,
+  decoy: () => Promise<string>,
+  prefetched: PrefetchedAccount = () => undefined,
+): PassportInstance {
+  // The package types the constructor with its `any` defaults; authenticate() returns Express middleware.
+  const passport = new Passport() as PassportInstance;
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
       (async () => {
@@ -50,12 +60,19 @@ export function createPassport(db: Knex, decoy: () => Promise<string>): Passport
       )
       .catch((err: unknown) => done(err));
   });
-  passport.deserializeUser((value: unknown, done) => {
-    const key = sessionKey(value);
-    if (!key) return done(null, false);
-    findUserById(db, key.id)
-      .then((row) => done(null, row && row.active && row.session_version === key.v ? toUserDto(row) : false))
-      .catch((err: unknown) => done(err));
-  });
+  const accept = (row: UserRow | undefined, key: { id: number; v: number }) =>
+    row && row.active && row.session_version === key.v ? toUserDto(row) : false;
+  passport.deserializeUser(
+    // Passport passes the request first when the function takes three arguments.
+    (req: Request, value: unknown, done: (err: unknown, user?: Express.User | false) => void) => {
+      const key = sessionKey(value);
+      if (!key) return done(null, false);
+      const row = prefetched(req);
+      if (row && row.id === key.id) return done(null, accept(row, key));
+      findUserById(db, key.id)
+        .then((found) => done(null, accept(found, key)))
+        .catch((err: unknown) => done(err));
+    },
+  );
   return passport;
 }

@@ -6,6 +6,8 @@
 import type { Knex } from 'knex';
 import type { SessionData } from 'express-session';
 import { ConnectSessionKnexStore } from 'connect-session-knex';
+import { dialectOf } from '../db/knex';
+import type { UserRow } from '../features/users/users.repository';
 
 type Callback = (err?: unknown) => void;
 
@@ -15,6 +17,27 @@ type Callback = (err?: unknown) => void;
  * session and instance costs a minute of sliding at worst and saves a write on nearly every request.
  */
 const TOUCH_EVERY_MS = 60_000;
+
+/**
+ * The session and its account in one query: the account id is read from the stored session
+ * ({ passport: { user: { id, v } } }, see passport.ts). A session without one, or with the bare id
+ * older sessions hold, joins nothing and Passport reads the account itself.
+ */
+function sessionWithAccountSql(db: Knex): string {
+  return dialectOf(db, 'the session store') === 'sqlite'
+    ? `select s.sess as sess__, u.* from sessions s
+       left join users u on u.id = json_extract(s.sess, '$.passport.user.id')
+       where s.sid = ? and datetime(?) <= datetime(s.expired)`
+    : `select s.sess as sess__, u.* from sessions s
+       left join users u on json_typeof(s.sess->'passport'->'user'->'id') = 'number'
+         and u.id = (s.sess->'passport'->'user'->>'id')::integer
+       where s.sid = ? and cast(? as timestamptz) <= s.expired`;
+}
+
+type SessionAccountRow = Partial<UserRow> & { sess__: string | SessionData };
+
+/** How long an account read with its session waits for Passport in the same request. */
+const HANDOFF_MS = 5_000;
 
 export class GuardedSessionStore extends ConnectSessionKnexStore {
   constructor(db: Knex) {
@@ -27,9 +50,24 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
     });
     // The table check at construction fails when the database closes first; every call re-awaits it.
     this.ready.catch(() => undefined);
+    this.sql = sessionWithAccountSql(db);
+  }
+
+  /**
+   * The account read with this session by the request's own `get`, once (a second call, or a
+   * request that did not read the session, gets undefined and Passport asks the database).
+   */
+  takeAccount(sid: string): UserRow | undefined {
+    const held = this.accounts.get(sid);
+    if (!held) return undefined;
+    this.accounts.delete(sid);
+    return Date.now() - held.at < HANDOFF_MS ? held.row : undefined;
   }
 
   private readonly touched = new Map<string, number>();
+  private readonly sql: string;
+  /** Accounts read with their session, waiting for Passport's deserialize in the same request. */
+  private readonly accounts = new Map<string, { row: UserRow; at: number }>();
 
   override set(sid: string, session: SessionData, callback?: Callback): Promise<void> {
     this.remember(sid);
@@ -41,15 +79,40 @@ export class GuardedSessionStore extends ConnectSessionKnexStore {
     this.touched.set(sid, Date.now());
   }
 
-  override get(
+  /** The session, with its account put aside for Passport: one query instead of two per request. */
+  override async get(
     sid: string,
     callback: (err: unknown, session?: SessionData | null) => void,
   ): Promise<SessionData | null> {
-    return super.get(sid, callback).catch(() => null);
+    let rows: SessionAccountRow[];
+    try {
+      await this.ready;
+      const { knex } = this.options;
+      const result: unknown = await knex.raw(this.sql, [sid, new Date().toISOString()]);
+      rows = (Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as SessionAccountRow[];
+    } catch (err) {
+      callback(err);
+      return null;
+    }
+    const row = rows[0];
+    if (!row) {
+      this.accounts.delete(sid);
+      callback(null, null);
+      return null;
+    }
+    const { sess__: stored, ...account } = row;
+    const session = (typeof stored === 'string' ? JSON.parse(stored) : stored) as SessionData;
+    if (account.id !== undefined && account.id !== null) {
+      if (this.accounts.size > 10_000) this.accounts.clear();
+      this.accounts.set(sid, { row: account as UserRow, at: Date.now() });
+    } else this.accounts.delete(sid);
+    callback(null, session);
+    return session;
   }
 
   override destroy(sid: string, callback?: Callback): Promise<number> {
     this.touched.delete(sid);
+    this.accounts.delete(sid);
     return super.destroy(sid, callback).catch(() => 0);
   }
 

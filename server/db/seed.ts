@@ -27,7 +27,7 @@ export const DEMO_ACCOUNTS: { email: string; displayName: string; role: Role }[]
 ];
 
 export async function isEmpty(db: Knex): Promise<boolean> {
-  const [row] = (await db('users').count({ n: '*' })) as { n: number | string }[];
+  const [row] = await db('users').count<{ n: number | string }[]>({ n: '*' });
   return Number(row.n) === 0;
 }
 

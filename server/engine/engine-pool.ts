@@ -46,6 +46,7 @@ export function createEnginePool(threads: number): EnginePool {
     // Every task waits its turn (an unbounded queue): a burst of checks is slow, never refused.
     // The request body limit and the proxy's time limit bound what can pile up.
     maxQueue: Infinity,
+    recordTiming: false,
   });
   return {
     threads,

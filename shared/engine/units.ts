@@ -117,7 +117,7 @@ function parseUncached(text: string, dimension: Dimension): ParseResult {
   if (!math.isUnit(parsed)) {
     return { ok: false, message: `needs a unit, got ${quoted(text)} (for example ${example(dimension)})` };
   }
-  const unit = parsed as Unit;
+  const unit = parsed;
   if (!unit.equalBase(math.unit(`1 ${target}`))) {
     return { ok: false, message: `must be ${DIMENSION_WORDS[dimension]}, got ${quoted(text)}` };
   }

@@ -283,4 +283,6 @@ export const checkRequestSchema = z.object({
   input: parsedDesignSchema,
   /** Adds this project's imported shapes (members only). */
   projectId: z.number().int().positive().optional(),
+  /** Adds the station arrays (V, M, deflection along x), as the CLI's --stations does. */
+  stations: z.boolean().optional(),
 });

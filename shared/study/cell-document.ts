@@ -53,8 +53,10 @@ export function cellParsed(
   const units: UnitSystem = base.units;
   let member = base.member;
   let loads = base.loads;
-  if (values.section !== undefined)
-    member = { ...member, section: withShape(base, String(values.section), shapes) };
+  if (values.section !== undefined) {
+    if (typeof values.section !== 'string') throw new TypeError('a section axis value is a shape name');
+    member = { ...member, section: withShape(base, values.section, shapes) };
+  }
   if (values.taperRatio !== undefined)
     member = { ...member, section: withRatio(member.section, Number(values.taperRatio), units, shapes) };
   if (values.tipDepth !== undefined)

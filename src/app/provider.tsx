@@ -4,10 +4,10 @@ import { RouterProvider } from 'react-router-dom';
 import { createQueryClient } from '../lib/query-client';
 import { createAppRouter } from './router';
 
-/** The app's providers: one QueryClient and the router. */
+/** The app's providers: one QueryClient and the router (whose loaders fill that client's cache). */
 export function AppProvider() {
   const [queryClient] = useState(createQueryClient);
-  const [router] = useState(createAppRouter);
+  const [router] = useState(() => createAppRouter(queryClient));
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />

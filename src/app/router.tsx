@@ -1,3 +1,4 @@
+import type { QueryClient } from '@tanstack/react-query';
 import { lazy, Suspense, type ComponentType, type LazyExoticComponent } from 'react';
 import { createBrowserRouter, Navigate } from 'react-router-dom';
 import { paths, routePatterns } from '../config/paths';
@@ -5,6 +6,7 @@ import { RequireAuth } from '../features/auth/components/require-auth';
 import { Loading } from '../components/ui/status';
 import { AppLayout } from '../components/layouts/app-layout';
 import { RouteError } from './routes/route-error';
+import { deskLoader } from './routes/design-desk-loader';
 
 const SignInRoute = lazy(() => import('./routes/sign-in'));
 const ProjectsRoute = lazy(() => import('./routes/projects'));
@@ -29,8 +31,11 @@ function page(Component: LazyExoticComponent<ComponentType>) {
   );
 }
 
-/** Every route is split into its own chunk; the sign-in chunk carries no engine and no charts. */
-export function createAppRouter() {
+/**
+ * Every route is split into its own chunk; the sign-in chunk carries no engine and no charts. The
+ * desk's loader fills the query cache (`ensureQueryData`) before the desk renders.
+ */
+export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     { path: routePatterns.signIn, element: page(SignInRoute), errorElement: <RouteError /> },
     {
@@ -43,7 +48,12 @@ export function createAppRouter() {
             { index: true, element: <Navigate to={paths.projects} replace /> },
             { path: routePatterns.projects, element: page(ProjectsRoute) },
             { path: routePatterns.project, element: page(ProjectRoute) },
-            { path: routePatterns.desk, element: page(DesignDeskRoute) },
+            {
+              path: routePatterns.desk,
+              loader: deskLoader(queryClient),
+              hydrateFallbackElement: <Loading label="Opening the design desk…" />,
+              element: page(DesignDeskRoute),
+            },
             { path: routePatterns.history, element: page(HistoryRoute) },
             { path: routePatterns.compare, element: page(CompareRoute) },
             { path: routePatterns.review, element: page(ReviewRoute) },

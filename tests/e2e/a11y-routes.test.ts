@@ -224,6 +224,20 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
   });
 });
 
+describe('the audit itself', () => {
+  it('catches a nameless button and a skipped heading level in one axe run', async () => {
+    const { page } = await e2e.newSession();
+    await page.setContent(
+      '<html lang="en"><head><title>audit probe</title></head><body><main>' +
+        '<h1>Deck</h1><h3>Skipped a level</h3><button></button>' +
+        // content outside every landmark breaks `region`, a best-practice rule that is not run
+        '</main><div>outside every landmark</div></body></html>',
+    );
+    const rules = (await seriousA11yProblems(page)).map((p) => p.rule).sort();
+    expect(rules).toEqual(['button-name', 'heading-order']);
+  });
+});
+
 describe('on a phone (390 x 844)', () => {
   it('the header folds into a menu that opens, is audited, and closes with Escape back to its button', async () => {
     const page = await pageFor('admin');

@@ -17,25 +17,30 @@ export interface A11yProblem {
 
 const TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 
-/** Serious and critical violations on the page (or inside `include`, a CSS selector), and headings out of order. */
+/**
+ * Serious and critical violations on the page (or inside `include`, a CSS selector), and headings out
+ * of order. One axe run per call: the WCAG rules by tag plus `heading-order` enabled by name (axe runs
+ * a rule named in `rules` whatever the tags), in the page itself (`setLegacyMode`: the app has no
+ * frames, and the default mode injects axe three times and opens a blank page per run to merge
+ * per-frame results).
+ */
 export async function seriousA11yProblems(page: Page, include?: string): Promise<A11yProblem[]> {
-  let builder = new AxeBuilder({ page }).withTags(TAGS);
+  let builder = new AxeBuilder({ page })
+    .options({ runOnly: { type: 'tag', values: TAGS }, rules: { 'heading-order': { enabled: true } } })
+    .setLegacyMode();
   if (include) builder = builder.include(include);
   const { violations } = await builder.analyze();
   // Headings out of order is rated "moderate" (a best-practice rule outside the WCAG tags), but a
   // screen-reader user moves by headings, so it fails here too, whatever its impact.
-  let headings = new AxeBuilder({ page }).withRules(['heading-order']);
-  if (include) headings = headings.include(include);
-  const order = (await headings.analyze()).violations;
-  return [...violations.filter((v) => v.impact === 'serious' || v.impact === 'critical'), ...order].map(
-    (v) => ({
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical' || v.id === 'heading-order')
+    .map((v) => ({
       rule: v.id,
       impact: v.impact ?? 'unknown',
       help: v.help,
       targets: v.nodes.slice(0, 5).map((n) => n.target.join(' ')),
       count: v.nodes.length,
-    }),
-  );
+    }));
 }
 
 /** Throws with a readable list when the page has a serious or critical violation. */

@@ -1,16 +1,17 @@
 /**
- * Browser-test harness: the real server (real SQLite file, real fake-SMTP, the built client from
- * dist/) on a random loopback port, seeded with the demo, and headless Debian Chromium driven by
- * playwright-core (one browser for the run, from e2e-global-setup.ts; a fresh context per
- * session). One harness per test file; close() removes every temporary file.
+ * Browser-test harness: the real server (real SQLite file, a copy of the migrated template
+ * database, real fake-SMTP, the built client from dist/) on a random loopback port, seeded with the
+ * demo, and headless Debian Chromium driven by playwright-core (one browser for the run, from
+ * e2e-global-setup.ts; a fresh context per session). One harness per test file; close() removes
+ * every temporary file.
  */
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { inject } from 'vitest';
 import { connectChromium } from './chromium';
 import { startServer } from '../../server/start';
+import { freshTestDirs } from './test-db';
 
 export const DEMO_PASSWORD = 'reachline-demo';
 export type DemoRole = 'admin' | 'architect' | 'fabricator' | 'engineer';
@@ -29,15 +30,16 @@ export interface E2E {
 }
 
 export async function startE2E(): Promise<E2E> {
-  const dir = mkdtempSync(join(tmpdir(), 'reachline-e2e-'));
-  const uploadDir = join(dir, 'uploads');
-  mkdirSync(uploadDir, { recursive: true });
+  // A copy of the migrated template database (tests/helpers/test-db.ts): the server's own migrate
+  // finds nothing to do, and it seeds the demo into the empty copy.
+  const dirs = await freshTestDirs();
+  mkdirSync(dirs.uploadDir, { recursive: true });
   mkdirSync(SCREEN_DIR, { recursive: true });
   const server = await startServer({
     port: 0,
-    databaseUrl: join(dir, 'reachline.sqlite'),
-    uploadDir,
-    dataDir: dir,
+    databaseUrl: dirs.databaseUrl,
+    uploadDir: dirs.uploadDir,
+    dataDir: dirs.root,
     // Browser tests sign the same accounts in many times; the limit itself is tested in tests/server.
     loginRateLimit: 500,
     // A low scrypt cost for the seeded accounts, as in the API tests: every sign-in verifies a hash.
@@ -70,7 +72,7 @@ export async function startE2E(): Promise<E2E> {
     for (const c of contexts) await c.close().catch(() => undefined);
     await chromium.browser.close();
     await server.close();
-    rmSync(dir, { recursive: true, force: true });
+    dirs.remove();
     if (errors.length > 0) throw new Error(`uncaught errors in the page:\n${errors.join('\n')}`);
   }
 

@@ -29,6 +29,9 @@ function startChild(): Promise<ServerProcess> {
       UPLOAD_DIR: join(dir, 'uploads'),
       SEED_DEMO: '1',
       LOG_LEVEL: 'warn',
+      // Saves compute in-line; only POST /api/check uses the engine's worker threads, and each
+      // restart would otherwise load the engine again in a thread this test never calls.
+      ENGINE_THREADS: '0',
     },
     'the server',
   );

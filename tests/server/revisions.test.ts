@@ -186,7 +186,15 @@ describe('saving revisions', () => {
       ratio: expect.any(Number),
     });
     expect(res.body.caution).toMatch(/design aid/);
-    expect(Array.isArray(res.body.stations.x)).toBe(true);
+    // As the CLI without --stations: the station arrays only when asked for.
+    expect(res.body.stations).toBeUndefined();
+    const withStations = await architect
+      .post('/api/check')
+      .send({ input: baseDesign(), stations: true })
+      .expect(200);
+    expect(withStations.body.stations.x[0]).toBe(0);
+    expect(withStations.body.stations.x.length).toBeGreaterThan(10);
+    expect(withStations.body.checks).toEqual(res.body.checks);
     expect(await env.db('revisions').count({ n: '*' })).toEqual(before);
     const unknown = await architect
       .post('/api/check')

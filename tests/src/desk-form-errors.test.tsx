@@ -1,32 +1,13 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { act, fireEvent, render, screen } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { FormProvider, useForm } from 'react-hook-form';
 import { describe, expect, it } from 'vitest';
-import { exampleDesign } from '../../shared/engine/examples';
-import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
-import { EngineIssuesContext } from '../../src/features/desk/components/field-context';
 import { QuantityField } from '../../src/features/desk/components/quantity-field';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { issuesByField } from '../../src/features/desk/lib/issue-paths';
+import { DeskFormHarness } from './desk-harness';
 
-function Harness({
-  children,
-  issues = new Map<string, string>(),
-}: {
-  children: ReactNode;
-  issues?: Map<string, string>;
-}) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: exampleDesign,
-  });
-  return (
-    <FormProvider {...form}>
-      <EngineIssuesContext.Provider value={issues}>{children}</EngineIssuesContext.Provider>
-    </FormProvider>
-  );
+function Harness({ children, issues }: { children: ReactNode; issues?: Map<string, string> }) {
+  return <DeskFormHarness issues={issues}>{children}</DeskFormHarness>;
 }
 
 async function type(label: string, value: string) {

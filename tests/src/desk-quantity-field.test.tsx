@@ -1,28 +1,21 @@
 /** A quantity field is one Tab stop; its unit list opens from the keyboard and converts what is typed. */
-import { zodResolver } from '@hookform/resolvers/zod';
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { ReactNode } from 'react';
-import { FormProvider, useForm, type UseFormGetValues } from 'react-hook-form';
+import type { UseFormGetValues } from 'react-hook-form';
 import { describe, expect, it } from 'vitest';
-import { exampleDesign } from '../../shared/engine/examples';
-import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
+import type { DesignDocument } from '../../shared/schemas/design';
 import { QuantityField } from '../../src/features/desk/components/quantity-field';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { unitOptions } from '../../src/features/desk/components/unit-menu';
+import { DeskFormHarness } from './desk-harness';
 
 let read: UseFormGetValues<DesignDocument> = () => {
   throw new Error('no form');
 };
 
 function Harness({ children }: { children: ReactNode }) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: exampleDesign,
-  });
-  read = form.getValues;
-  return <FormProvider {...form}>{children}</FormProvider>;
+  return <DeskFormHarness onForm={(form) => (read = form.getValues)}>{children}</DeskFormHarness>;
 }
 
 const box = (name: string) => screen.getByRole('combobox', { name });

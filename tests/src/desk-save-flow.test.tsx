@@ -3,44 +3,46 @@
  * message box), Ctrl/Cmd+S saves, the sentence is in the future tense, and focus lands on the
  * status line after saving. The network is faked at fetch.
  */
-import { zodResolver } from '@hookform/resolvers/zod';
 import { act, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useState } from 'react';
-import { FormProvider, useForm, useFormState } from 'react-hook-form';
+import { FormProvider, useFormState } from 'react-hook-form';
 import { RouterProvider, createMemoryRouter } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../../shared/engine/examples';
-import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
+import type { ShapeRecord } from '../../shared/engine/shapes/types';
 import type { FieldIssue } from '../../shared/schemas/quantity';
 import { DeskSave } from '../../src/features/desk/components/desk-save';
-import { EngineIssuesContext } from '../../src/features/desk/components/field-context';
+import { DeskIssuesContext } from '../../src/features/desk/components/field-context';
+import { useDeskForm } from '../../src/features/desk/hooks/use-desk-form';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { IssueSummary } from '../../src/features/desk/components/desk-inputs';
 import { makeRevision, stubFetch } from './history-fixtures';
 
+const NO_SHAPES: ShapeRecord[] = [];
+
 function Desk({ startBase, issues = [] }: { startBase: number | null; issues?: FieldIssue[] }) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: exampleDesign,
-  });
-  const { isDirty } = useFormState({ control: form.control });
-  const [base, setBase] = useState(startBase);
+  const desk = useDeskForm(exampleDesign, NO_SHAPES);
+  const { isDirty } = useFormState({ control: desk.form.control });
+  const [base, setBase] = useState(
+    startBase === null ? null : makeRevision(20 + startBase, startBase, exampleDesign),
+  );
   return (
-    <FormProvider {...form}>
-      <EngineIssuesContext.Provider value={new Map()}>
+    <FormProvider {...desk.form}>
+      <DeskIssuesContext.Provider value={desk.issues}>
         <DeskSave
           cantileverId={7}
           base={base}
-          setBase={(r) => setBase(r.number)}
+          setBase={setBase}
           dirty={isDirty}
           mayEdit
           toUserUnits={(d) => d}
+          problems={desk.problems}
+          onRefused={desk.refuse}
         />
         <IssueSummary issues={issues} failure={null} />
         <ReachGroup disabled={false} />
-      </EngineIssuesContext.Provider>
+      </DeskIssuesContext.Provider>
     </FormProvider>
   );
 }
@@ -99,6 +101,19 @@ describe('desk: saving a revision', () => {
     });
     expect(screen.queryByRole('dialog')).toBeNull();
     expect(document.activeElement).toBe(length());
+  });
+
+  it('waits for the worker to answer for what was just typed before it lists the problems', async () => {
+    stubFetch(() => undefined);
+    renderDesk();
+    await act(async () => {
+      // typed and saved in one go: the worker has not answered for "9" when the save is asked for
+      fireEvent.change(length(), { target: { value: '9' } });
+      fireEvent.click(screen.getByRole('button', { name: /Save revision/ }));
+    });
+    const dialog = await screen.findByRole('dialog', { name: 'This design cannot be saved yet' });
+    expect(within(dialog).getByRole('button', { name: 'Reach: length, root to tip' })).toBeInTheDocument();
+    expect(dialog.textContent).toContain('needs a unit');
   });
 
   it('Ctrl+S opens the save, says which revision it makes, saves on a second Ctrl+S and focuses the result', async () => {

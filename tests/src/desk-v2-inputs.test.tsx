@@ -1,13 +1,12 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { act, fireEvent, render, screen, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { FormProvider, useForm, type UseFormGetValues } from 'react-hook-form';
+import type { UseFormGetValues } from 'react-hook-form';
 import { describe, expect, it } from 'vitest';
+import { DeskFormHarness } from './desk-harness';
 import { evaluateDesign } from '../../shared/engine/design';
 import { exampleDesign, exampleMemberOnly } from '../../shared/engine/examples';
 import { formatQuantity } from '../../shared/engine/units';
-import { designSchema, type DesignDocument, type DesignInput } from '../../shared/schemas/design';
-import { EngineIssuesContext } from '../../src/features/desk/components/field-context';
+import type { DesignDocument } from '../../shared/schemas/design';
 import { LoadsGroup } from '../../src/features/desk/components/loads-group';
 import { ReachGroup } from '../../src/features/desk/components/reach-group';
 import { SteelSummary } from '../../src/features/desk/components/steel-summary';
@@ -24,23 +23,17 @@ let read: UseFormGetValues<DesignDocument> = () => {
 
 function Harness({
   children,
-  issues = new Map<string, string>(),
+  issues,
   doc = exampleDesign,
 }: {
   children: ReactNode;
   issues?: Map<string, string>;
   doc?: DesignDocument;
 }) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: doc,
-  });
-  read = form.getValues;
   return (
-    <FormProvider {...form}>
-      <EngineIssuesContext.Provider value={issues}>{children}</EngineIssuesContext.Provider>
-    </FormProvider>
+    <DeskFormHarness doc={doc} issues={issues} onForm={(form) => (read = form.getValues)}>
+      {children}
+    </DeskFormHarness>
   );
 }
 

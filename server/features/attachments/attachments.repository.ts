@@ -84,7 +84,8 @@ export async function deleteAttachmentRow(db: Db, id: number): Promise<boolean> 
 
 /** The cantilever a revision belongs to, or undefined when there is no such revision. */
 export async function cantileverOfRevision(db: Db, revisionId: number): Promise<number | undefined> {
-  const row = (await db('revisions').where({ id: revisionId }).first('cantilever_id')) as
-    { cantilever_id: number } | undefined;
+  const row = await db('revisions')
+    .where({ id: revisionId })
+    .first<{ cantilever_id: number } | undefined>('cantilever_id');
   return row?.cantilever_id;
 }

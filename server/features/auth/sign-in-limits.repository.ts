@@ -7,12 +7,12 @@ import type { Knex } from 'knex';
 import { nowIso } from '../../db/knex';
 
 export async function countFailures(db: Knex, keys: string[], since: Date): Promise<Map<string, number>> {
-  const rows = (await db('sign_in_failures')
+  const rows = await db('sign_in_failures')
     .whereIn('key', keys)
     .where('created_at', '>=', since.toISOString())
     .groupBy('key')
     .select('key')
-    .count({ n: '*' })) as { key: string; n: number | string }[];
+    .count<{ key: string; n: number | string }[]>({ n: '*' });
   return new Map(rows.map((r) => [r.key, Number(r.n)]));
 }
 

@@ -1,13 +1,17 @@
 /** Cantilevers (Knex only). */
 import type { Knex } from 'knex';
-import type { CantileverDto } from '../../../shared/schemas/api';
+import type { CantileverDto, ReviewState } from '../../../shared/schemas/api';
 import { nowIso, toBool, toIso, insertReturningId } from '../../db/knex';
 import type { CantileverRow } from '../projects/project-access';
-import { latestApprovals, reviewStates } from '../revisions/revisions.repository';
+import { latestApprovals, latestStateColumn } from '../revisions/revisions.repository';
 
 type Db = Knex | Knex.Transaction;
 
-type ListedRow = CantileverRow & { current_number: number | null; current_ok: number | boolean | null };
+type ListedRow = CantileverRow & {
+  current_number: number | null;
+  current_ok: number | boolean | null;
+  review_state: ReviewState | null;
+};
 
 export async function listCantilevers(
   db: Db,
@@ -15,15 +19,16 @@ export async function listCantilevers(
 ): Promise<CantileverDto[]> {
   const q = db('cantilevers as c')
     .leftJoin('revisions as r', 'r.id', 'c.current_revision_id')
-    .select('c.*', 'r.number as current_number', 'r.ok as current_ok')
+    .select(
+      'c.*',
+      'r.number as current_number',
+      'r.ok as current_ok',
+      latestStateColumn(db, 'c.current_revision_id', 'review_state'),
+    )
     .orderBy('c.name');
   if (where.projectId !== undefined) q.where('c.project_id', where.projectId);
   if (where.id !== undefined) q.where('c.id', where.id);
   const rows = (await q) as ListedRow[];
-  const states = await reviewStates(
-    db,
-    rows.map((r) => r.current_revision_id).filter((id): id is number => id !== null),
-  );
   const approved = await latestApprovals(
     db,
     rows.map((r) => r.id),
@@ -35,7 +40,7 @@ export async function listCantilevers(
     description: r.description,
     currentRevisionId: r.current_revision_id,
     currentRevisionNumber: r.current_number ?? null,
-    reviewState: r.current_revision_id === null ? null : (states.get(r.current_revision_id) ?? 'draft'),
+    reviewState: r.current_revision_id === null ? null : (r.review_state ?? 'draft'),
     ok: r.current_ok === null || r.current_ok === undefined ? null : toBool(r.current_ok),
     updatedAt: toIso(r.updated_at),
     quantity: Number(r.quantity ?? 1),

@@ -13,8 +13,16 @@ export async function checkDesign(
 ): Promise<string> {
   // A project's imported shapes only for its members; without one, the organisation's.
   if (body.projectId !== undefined) await projectForMember(ctx.db, body.projectId, user.id);
-  const custom = await listShapesInScope(ctx.db, body.projectId ?? null);
-  const answer = await ctx.engine.run({ input: body.input, custom, stations: true });
-  if (!answer.ok) throw designNotComputed(answer.issues, 'input');
+  const stations = body.stations === true;
+  // The published table first: the imported shapes are read only for a document that names one.
+  let answer = await ctx.engine.run({ input: body.input, custom: 'built-in first', stations });
+  if (!answer.ok && 'needsImportedShapes' in answer) {
+    const custom = await listShapesInScope(ctx.db, body.projectId ?? null);
+    answer = await ctx.engine.run({ input: body.input, custom, stations });
+  }
+  if (!answer.ok) {
+    if ('needsImportedShapes' in answer) throw new Error('the engine asked for imported shapes twice');
+    throw designNotComputed(answer.issues, 'input');
+  }
   return answer.json;
 }

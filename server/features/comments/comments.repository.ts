@@ -13,11 +13,11 @@ interface CommentRow {
 }
 
 export async function listComments(db: Knex, revisionId: number): Promise<CommentDto[]> {
-  const rows = (await db('comments as c')
+  const rows = await db('comments as c')
     .join('users as u', 'u.id', 'c.author_id')
     .where('c.revision_id', revisionId)
     .orderBy('c.id')
-    .select('c.*', 'u.display_name as author_name')) as CommentRow[];
+    .select<CommentRow[]>('c.*', 'u.display_name as author_name');
   return rows.map((r) => ({
     id: r.id,
     revisionId: r.revision_id,

@@ -40,10 +40,10 @@ export interface RevisionRow {
 const memberOf = (userId: number) => (j: Knex.JoinClause) => j.andOnVal('m.user_id', userId);
 
 export async function projectForMember(db: Db, projectId: number, userId: number): Promise<ProjectRow> {
-  const project = (await db('projects as p')
+  const project = await db('projects as p')
     .join('project_members as m', (j) => memberOf(userId)(j.on('m.project_id', 'p.id')))
     .where('p.id', projectId)
-    .first('p.*')) as ProjectRow | undefined;
+    .first<ProjectRow | undefined>('p.*');
   if (!project) throw notFound('project');
   return project;
 }
@@ -53,10 +53,10 @@ export async function cantileverForMember(
   cantileverId: number,
   userId: number,
 ): Promise<CantileverRow> {
-  const row = (await db('cantilevers as c')
+  const row = await db('cantilevers as c')
     .join('project_members as m', (j) => memberOf(userId)(j.on('m.project_id', 'c.project_id')))
     .where('c.id', cantileverId)
-    .first('c.*')) as CantileverRow | undefined;
+    .first<CantileverRow | undefined>('c.*');
   if (!row) throw notFound('cantilever');
   return row;
 }

@@ -32,7 +32,9 @@ export async function findProject(db: Db, id: number): Promise<ProjectRow | unde
 }
 
 export async function isMember(db: Db, projectId: number, userId: number): Promise<boolean> {
-  const row = await db('project_members').where({ project_id: projectId, user_id: userId }).first();
+  const row = await db('project_members')
+    .where({ project_id: projectId, user_id: userId })
+    .first<{ user_id: number } | undefined>('user_id');
   return row !== undefined;
 }
 
@@ -47,9 +49,9 @@ export async function listProjectsForUser(db: Db, userId: number): Promise<Proje
 }
 
 export async function countCantilevers(db: Db, projectId: number): Promise<number> {
-  const [row] = (await db('cantilevers').where({ project_id: projectId }).count({ n: '*' })) as {
-    n: number | string;
-  }[];
+  const [row] = await db('cantilevers')
+    .where({ project_id: projectId })
+    .count<{ n: number | string }[]>({ n: '*' });
   return Number(row.n);
 }
 

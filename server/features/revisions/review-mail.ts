@@ -122,9 +122,9 @@ export async function mailComment(
   a: { revision: RevisionRow; cantilever: CantileverRow; commenter: Express.User; body: string },
 ): Promise<void> {
   const { revision, cantilever, commenter, body } = a;
-  const earlier = (await db('comments').where({ revision_id: revision.id }).distinct('author_id')) as {
-    author_id: number;
-  }[];
+  const earlier = await db('comments')
+    .where({ revision_id: revision.id })
+    .distinct<{ author_id: number }[]>('author_id');
   const wanted = new Set([revision.author_id, ...earlier.map((e) => e.author_id)]);
   wanted.delete(commenter.id);
   const to = (await activeMembers(db, cantilever.project_id)).filter((m) => wanted.has(m.id));

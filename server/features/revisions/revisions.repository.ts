@@ -24,26 +24,57 @@ interface ReviewRow {
   created_at: string;
 }
 
-type SummaryRow = RevisionRow & { author_name: string; base_number: number | null };
+type SummaryRow = RevisionRow & {
+  author_name: string;
+  base_number: number | null;
+  review_state?: ReviewState | null;
+};
 
-function summarySelect(db: Db) {
+/** The columns a summary reads: not the input and result documents (about 20 kB a revision). */
+const SUMMARY_COLUMNS = [
+  'r.id',
+  'r.cantilever_id',
+  'r.number',
+  'r.author_id',
+  'r.message',
+  'r.engine_version',
+  'r.created_at',
+  'r.ok',
+];
+
+/** Revisions with author and base number; `documents` adds every column of the revision. */
+function summarySelect(db: Db, documents: 'with documents' | 'summary only' = 'with documents') {
   return db('revisions as r')
     .join('users as u', 'u.id', 'r.author_id')
     .leftJoin('revisions as b', 'b.id', 'r.base_revision_id')
-    .select('r.*', 'u.display_name as author_name', 'b.number as base_number');
+    .select(
+      ...(documents === 'with documents' ? ['r.*'] : SUMMARY_COLUMNS),
+      'u.display_name as author_name',
+      'b.number as base_number',
+    );
+}
+
+/**
+ * The latest review state of the revision in `revisionColumn`, as a column named `alias` of the
+ * outer query (null when never submitted, which reads as 'draft'): one query instead of two.
+ */
+export function latestStateColumn(db: Db, revisionColumn: string, alias: string): Knex.QueryBuilder {
+  return db('reviews as lv')
+    .select('lv.state')
+    .where('lv.revision_id', db.ref(revisionColumn))
+    .orderBy('lv.id', 'desc')
+    .limit(1)
+    .as(alias);
 }
 
 /** The latest review state of each revision ('draft' when never submitted). */
 export async function reviewStates(db: Db, revisionIds: number[]): Promise<Map<number, ReviewState>> {
   const states = new Map<number, ReviewState>();
   if (revisionIds.length === 0) return states;
-  const rows = (await db('reviews')
+  const rows = await db('reviews')
     .whereIn('revision_id', revisionIds)
     .orderBy('id')
-    .select('revision_id', 'state')) as {
-    revision_id: number;
-    state: ReviewState;
-  }[];
+    .select<{ revision_id: number; state: ReviewState }[]>('revision_id', 'state');
   for (const row of rows) states.set(row.revision_id, row.state);
   return states;
 }
@@ -65,22 +96,19 @@ function toSummary(row: SummaryRow, state: ReviewState): RevisionSummaryDto {
 }
 
 export async function listRevisionSummaries(db: Db, cantileverId: number): Promise<RevisionSummaryDto[]> {
-  const rows = (await summarySelect(db)
+  const rows = (await summarySelect(db, 'summary only')
+    .select(latestStateColumn(db, 'r.id', 'review_state'))
     .where('r.cantilever_id', cantileverId)
     .orderBy('r.number', 'desc')) as SummaryRow[];
-  const states = await reviewStates(
-    db,
-    rows.map((r) => r.id),
-  );
-  return rows.map((r) => toSummary(r, states.get(r.id) ?? 'draft'));
+  return rows.map((r) => toSummary(r, r.review_state ?? 'draft'));
 }
 
 export async function listReviews(db: Db, revisionId: number): Promise<ReviewDto[]> {
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('users as u', 'u.id', 'v.reviewer_id')
     .where('v.revision_id', revisionId)
     .orderBy('v.id')
-    .select('v.*', 'u.display_name as reviewer_name')) as ReviewRow[];
+    .select<ReviewRow[]>('v.*', 'u.display_name as reviewer_name');
   return rows.map((r) => ({
     id: r.id,
     revisionId: r.revision_id,
@@ -214,25 +242,21 @@ export async function latestApprovals(
 ): Promise<Map<number, LatestApproval>> {
   const out = new Map<number, LatestApproval>();
   if (cantileverIds.length === 0) return out;
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
     .join('users as u', 'u.id', 'v.reviewer_id')
     .where('v.state', 'approved')
     .whereIn('r.cantilever_id', [...cantileverIds])
     .orderBy('r.number')
-    .select(
+    .select<
+      { id: number; number: number; cantilever_id: number; approver_name: string; approved_at: string }[]
+    >(
       'r.id',
       'r.number',
       'r.cantilever_id',
       'u.display_name as approver_name',
       'v.created_at as approved_at',
-    )) as {
-    id: number;
-    number: number;
-    cantilever_id: number;
-    approver_name: string;
-    approved_at: string;
-  }[];
+    );
   for (const row of rows) {
     out.set(row.cantilever_id, {
       revisionId: row.id,
@@ -265,7 +289,7 @@ export async function latestApprovedRevisions(
 
 /** Revisions waiting for review in the projects `userId` belongs to, not written by them. */
 export async function listSubmittedFor(db: Db, userId: number): Promise<AwaitingReviewDto[]> {
-  const rows = (await db('reviews as v')
+  const rows = await db('reviews as v')
     .join('revisions as r', 'r.id', 'v.revision_id')
     .join('cantilevers as c', 'c.id', 'r.cantilever_id')
     .join('projects as p', 'p.id', 'c.project_id')
@@ -276,7 +300,19 @@ export async function listSubmittedFor(db: Db, userId: number): Promise<Awaiting
     .where('v.state', 'submitted')
     .whereNot('r.author_id', userId)
     .orderBy('v.id')
-    .select(
+    .select<
+      {
+        revision_id: number;
+        number: number;
+        message: string;
+        cantilever_id: number;
+        cantilever_name: string;
+        project_id: number;
+        project_name: string;
+        author_name: string;
+        submitted_at: string;
+      }[]
+    >(
       'r.id as revision_id',
       'r.number',
       'r.message',
@@ -286,17 +322,7 @@ export async function listSubmittedFor(db: Db, userId: number): Promise<Awaiting
       'p.name as project_name',
       'u.display_name as author_name',
       'v.created_at as submitted_at',
-    )) as {
-    revision_id: number;
-    number: number;
-    message: string;
-    cantilever_id: number;
-    cantilever_name: string;
-    project_id: number;
-    project_name: string;
-    author_name: string;
-    submitted_at: string;
-  }[];
+    );
   const states = await reviewStates(
     db,
     rows.map((r) => r.revision_id),

@@ -33,8 +33,7 @@ function plateGoverning(states: readonly ComboState[], t: number, fpMax: number)
 function dropNonFinite(result: ConnectionResult): void {
   for (const key in result) {
     const v = result[key];
-    if (v && typeof v === 'object' && 'value' in v && !Number.isFinite((v as { value: unknown }).value))
-      delete result[key];
+    if (v && typeof v === 'object' && 'value' in v && !Number.isFinite(v.value)) delete result[key];
   }
 }
 

@@ -23,7 +23,7 @@ export function buildGrid(L: number, n: number, extra: readonly number[]): Grid 
     if (Math.abs(x[k] - a) > tol && Math.abs(x[k + 1] - a) > tol && !x.includes(a)) x.push(a);
   }
   if (x.length > n + 1) x.sort((p, q) => p - q);
-  const mid: number[] = new Array(x.length - 1);
+  const mid = new Array<number>(x.length - 1);
   for (let i = 0; i < mid.length; i++) mid[i] = (x[i] + x[i + 1]) / 2;
   return { L, x, mid };
 }

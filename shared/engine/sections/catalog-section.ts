@@ -47,7 +47,7 @@ export function catalogProps(s: ShapeRecord): SectionProps {
 export function missingDimensions(s: ShapeRecord): string[] {
   const need: (keyof ShapeRecord)[] =
     s.family === 'HSS' ? ['Ht', 'B', 'tdes'] : s.family === 'PIPE' ? ['OD', 'tdes'] : ['d', 'bf', 'tf', 'tw'];
-  return need.filter((k) => !(typeof s[k] === 'number' && (s[k] as number) > 0)).map(String);
+  return need.filter((k) => !(typeof s[k] === 'number' && s[k] > 0)).map(String);
 }
 
 const built = new WeakMap<ShapeRecord, MemberSection>();

@@ -1,10 +1,11 @@
 import { LogOut, Menu, X } from 'lucide-react';
 import { useEffect, useId, useRef, useState } from 'react';
-import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
+import { NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useMe } from '../../lib/api/me/get-me';
 import { useLogout } from '../../lib/api/me/logout';
 import { CAUTION } from '../../../shared/engine/types';
+import { Loading } from '../ui/status';
 import { Brand } from './brand';
 
 function navClass({ isActive }: { isActive: boolean }): string {
@@ -21,6 +22,8 @@ export function AppLayout() {
   const logout = useLogout();
   const navigate = useNavigate();
   const location = useLocation();
+  // A route loader (the desk's) is reading the next page's data; the page shown stays until then.
+  const loadingNext = useNavigation().state === 'loading';
   const user = me.data;
   const isAdmin = user?.role === 'admin';
   const [open, setOpen] = useState(false);
@@ -124,6 +127,7 @@ export function AppLayout() {
         </div>
       </header>
       <main id="main" className="min-w-0 flex-1">
+        {loadingNext ? <Loading label="Opening…" /> : null}
         <Outlet />
       </main>
       {/* Every signed-in screen shows results or leads to them, so every one carries the caution:

@@ -1,6 +1,5 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useCallback, useEffect, useMemo, useState, type ReactNode } from 'react';
-import { FormProvider, useForm, useFormState } from 'react-hook-form';
+import { FormProvider, useFormState, useWatch } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import type { ShapeRecord } from '../../../../shared/engine/shapes/types';
 import type { UnitSystem } from '../../../../shared/engine/units';
@@ -10,17 +9,17 @@ import {
   type RevisionDto,
   type UserDto,
 } from '../../../../shared/schemas/api';
-import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
+import type { DesignDocument } from '../../../../shared/schemas/design';
 import { paths } from '../../../config/paths';
 import { useUpdateMe } from '../../../lib/api/me/update-me';
 import type { DeskProposal } from '../../../lib/desk-proposal';
 import { studyState } from '../../../lib/study-handoff';
 import { ShapePickerDialog } from '../../../components/shapes/shape-picker-dialog';
 import { useShapes } from '../../../lib/api/shapes/get-shapes';
-import { useLiveDesign } from '../hooks/use-live-design';
+import { useDeskForm } from '../hooks/use-desk-form';
 import { useUnitsSwitch } from '../hooks/use-units-switch';
 import { useDiffersFromSaved } from '../hooks/use-differs-from-saved';
-import { issuesByField } from '../lib/issue-paths';
+import { prepareDocument } from '../lib/prepare-document';
 import { DeskHeader } from './desk-header';
 import { DeskInputs, IssueSummary } from './desk-inputs';
 import { DeskResults } from './desk-results';
@@ -28,18 +27,18 @@ import { PlateScheduleLink } from './plate-schedule-link';
 import { PackageLink } from '../../../components/ui/package-link';
 import { SubmitForReview } from '../../../components/submit-for-review';
 import { DeskSave } from './desk-save';
-import { EngineIssuesContext } from './field-context';
+import { DeskIssuesContext } from './field-context';
 import { DeskSide } from './desk-side';
 
 const NO_SHAPES: ShapeRecord[] = [];
 
 export interface DeskEditorProps {
   cantilever: CantileverDto;
+  /** The revision the desk opens on (the route loader's choice); null when nothing is saved yet. */
   revision: RevisionDto | null;
+  /** The opening document, already in the person's unit system. */
   initialDoc: DesignDocument;
   user: UserDto;
-  /** Turns a document from the server into the person's unit system. */
-  toUserUnits: (doc: DesignDocument) => DesignDocument;
   /** The cantilever's files panel (the attachments feature, composed by the route). */
   files: ReactNode;
   /** A document handed over by the reach study: loaded as unsaved changes on top of the revision. */
@@ -47,37 +46,31 @@ export interface DeskEditorProps {
 }
 
 /** The design desk: inputs on the left, live results on the right, saving as revisions. */
-export function DeskEditor({
-  cantilever,
-  revision,
-  initialDoc,
-  user,
-  toUserUnits,
-  files,
-  proposal,
-}: DeskEditorProps) {
-  const form = useForm<DesignDocument, unknown, DesignInput>({
-    resolver: zodResolver(designSchema),
-    mode: 'onChange',
-    defaultValues: initialDoc,
-  });
+export function DeskEditor({ cantilever, revision, initialDoc, user, files, proposal }: DeskEditorProps) {
+  const shapes = useShapes(cantilever.projectId);
+  const custom = useMemo(() => shapes.data?.shapes.filter((s) => s.custom) ?? NO_SHAPES, [shapes.data]);
+  const { form, live, busy, issues, problems, refuse } = useDeskForm(initialDoc, custom);
   const { isDirty: formSaysDirty } = useFormState({ control: form.control });
   const differsFromSaved = useDiffersFromSaved(form);
   // react-hook-form can keep isDirty set after every field is typed back to its saved value, so the
   // marker also asks whether the document really differs; isDirty still covers the reset after a save.
   const isDirty = formSaysDirty && differsFromSaved;
-  const [baseRevision, setBase] = useState<{ id: number; number: number } | null>(
-    revision ? { id: revision.id, number: revision.number } : null,
-  );
+  // The revision the desk stands on: the one it opened on, then each revision saved (or taken from
+  // a conflict) here. The only copy: header, save, plate schedule, package, submit and list read it.
+  const [baseRevision, setBase] = useState<RevisionDto | null>(revision);
   const base = baseRevision?.number ?? null;
-  const [units, setUnits] = useState<UnitSystem>(initialDoc.units === 'SI' ? 'SI' : 'US');
+  // The unit system is the document's own `units` field; the switch rewrites it with the quantities.
+  const units: UnitSystem = useWatch({ control: form.control, name: 'units' }) === 'SI' ? 'SI' : 'US';
   const [picker, setPicker] = useState<'member' | 'footprint' | null>(null);
-  const shapes = useShapes(cantilever.projectId);
-  const custom = useMemo(() => shapes.data?.shapes.filter((s) => s.custom) ?? NO_SHAPES, [shapes.data]);
-  const { live, busy, submit } = useLiveDesign(custom);
   const switchUnits = useUnitsSwitch(form);
   const updateMe = useUpdateMe();
   const rights = EDIT_RIGHTS[user.role];
+
+  // A document from the server written in the unit system the desk shows now.
+  const toUserUnits = useCallback(
+    (doc: DesignDocument) => prepareDocument(doc, form.getValues('units') === 'SI' ? 'SI' : 'US'),
+    [form],
+  );
 
   const navigate = useNavigate();
   const [fromStudy] = useState(() => proposal ?? null);
@@ -93,15 +86,9 @@ export function DeskEditor({
     [navigate, cantilever.id, form, isDirty],
   );
 
-  useEffect(() => {
-    submit(form.getValues());
-    return form.subscribe({ formState: { values: true }, callback: ({ values }) => submit(values) });
-  }, [form, submit]);
-
   const onUnits = useCallback(
     (to: UnitSystem) => {
       switchUnits(to);
-      setUnits(to);
       updateMe.mutate({ units: to });
     },
     [switchUnits, updateMe],
@@ -109,7 +96,6 @@ export function DeskEditor({
 
   const openMember = useCallback(() => setPicker('member'), []);
   const openFootprint = useCallback(() => setPicker('footprint'), []);
-  const engineIssues = useMemo(() => issuesByField(live.issues), [live.issues]);
   const hasConnection = live.doc?.connection !== undefined;
   const baseId = baseRevision?.id ?? null;
   // Memoised so that the results (a memo component) skip the re-render of every keystroke.
@@ -134,7 +120,7 @@ export function DeskEditor({
   );
 
   function applyShape(target: 'member' | 'footprint', label: string) {
-    const opts = { shouldDirty: true, shouldValidate: true } as const;
+    const opts = { shouldDirty: true } as const;
     if (target === 'member') {
       const section = form.getValues('member.section');
       form.setValue('member.section', section.plates ? { shape: label } : { ...section, shape: label }, opts);
@@ -154,7 +140,7 @@ export function DeskEditor({
 
   return (
     <FormProvider {...form}>
-      <EngineIssuesContext.Provider value={engineIssues}>
+      <DeskIssuesContext.Provider value={issues}>
         <div className="flex flex-col">
           <DeskHeader
             cantilever={cantilever}
@@ -168,11 +154,13 @@ export function DeskEditor({
             save={
               <DeskSave
                 cantileverId={cantilever.id}
-                base={base}
+                base={baseRevision}
                 setBase={setBase}
                 dirty={isDirty}
                 mayEdit={rights.member || rights.connection}
                 toUserUnits={toUserUnits}
+                problems={problems}
+                onRefused={refuse}
               />
             }
           />
@@ -207,7 +195,7 @@ export function DeskEditor({
               {baseRevision &&
               !isDirty &&
               (rights.member || rights.connection) &&
-              (baseRevision.id !== revision?.id || revision.reviewState === 'draft') ? (
+              baseRevision.reviewState === 'draft' ? (
                 <SubmitForReview
                   key={baseRevision.id}
                   cantileverId={cantilever.id}
@@ -233,7 +221,7 @@ export function DeskEditor({
               : (form.getValues('member.section.shape') ?? null)
           }
         />
-      </EngineIssuesContext.Provider>
+      </DeskIssuesContext.Provider>
     </FormProvider>
   );
 }

@@ -1,15 +1,13 @@
 import { Save } from 'lucide-react';
-import { useContext, useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useFormContext } from 'react-hook-form';
 import type { RevisionDto } from '../../../../shared/schemas/api';
-import { designSchema, type DesignDocument, type DesignInput } from '../../../../shared/schemas/design';
-import { toFieldIssues } from '../../../../shared/schemas/quantity';
+import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Button } from '../../../components/ui/button';
 import { ApiError } from '../../../lib/api-client';
 import { errorText } from '../../../lib/error-text';
 import { focusField } from '../lib/focus-field';
-import { mergeIssues, toFieldName, type Issue } from '../lib/issue-paths';
-import { EngineIssuesContext } from './field-context';
+import type { Issue } from '../lib/issue-paths';
 import { staleLatest, useSaveRevision } from '../../../lib/api/revisions/save-revision';
 import { replaceKeepingDirty } from '../hooks/use-units-switch';
 import { ConflictDialog } from './conflict-dialog';
@@ -25,8 +23,8 @@ function isSaveKey(e: KeyboardEvent): boolean {
 }
 
 /**
- * "Save revision" (also Ctrl/Cmd+S): a design with invalid inputs gets the list of those inputs,
- * not a message box; otherwise it asks for a message and posts against the base revision. A stale
+ * "Save revision" (also Ctrl/Cmd+S): a design with invalid inputs gets the list of those inputs (the
+ * worker's answer for the document on screen, awaited if it is still computing), not a message box; otherwise it asks for a message and posts against the base revision. A stale
  * base opens the conflict dialog (keep mine on top of the latest, or load the latest with mine kept
  * to restore). After a save, focus goes to the line that says which revision was saved.
  */
@@ -37,16 +35,24 @@ export function DeskSave({
   dirty,
   mayEdit,
   toUserUnits,
+  problems: checkProblems,
+  onRefused,
 }: {
   cantileverId: number;
-  base: number | null;
-  /** The revision the desk now stands on (its number is shown; its id names the plate schedule). */
-  setBase: (revision: { id: number; number: number }) => void;
+  /** The revision the desk stands on (null: nothing saved yet); a save is made on top of it. */
+  base: RevisionDto | null;
+  /** Moves the desk onto a revision (one just saved, or the latest from a conflict). */
+  setBase: (revision: RevisionDto) => void;
   dirty: boolean;
   mayEdit: boolean;
   toUserUnits: (doc: DesignDocument) => DesignDocument;
+  /** Every problem of the document on screen, once the worker has answered for it. */
+  problems: () => Promise<Issue[]>;
+  /** Shows at their fields the problems the server found in a refused save (until the next edit). */
+  onRefused: (issues: Issue[]) => void;
 }) {
-  const form = useFormContext<DesignDocument, unknown, DesignInput>();
+  const form = useFormContext<DesignDocument>();
+  const baseNumber = base?.number ?? null;
   const save = useSaveRevision(cantileverId);
   const [open, setOpen] = useState(false);
   const [message, setMessage] = useState('');
@@ -57,19 +63,12 @@ export function DeskSave({
   const [status, setStatus] = useState<string | null>(null);
   const statusRef = useRef<HTMLParagraphElement>(null);
   const focusAfter = useRef<string | null>(null);
-  const engineIssues = useContext(EngineIssuesContext);
 
   /** Validates first: invalid inputs open the list of them instead of the message box. */
   async function openSave() {
     setStatus(null);
     setError(null);
-    // trigger() marks the fields in red; the list comes from the same schema the form resolves with.
-    const valid = await form.trigger();
-    const parsed = designSchema.safeParse(form.getValues());
-    const list = mergeIssues(parsed.success ? [] : toFieldIssues(parsed.error), engineIssues);
-    if (!valid && list.length === 0)
-      list.push({ path: '(document)', message: 'has a problem the form could not place on a field' });
-    setProblems(list);
+    setProblems(await checkProblems());
     setOpen(true);
   }
 
@@ -92,7 +91,7 @@ export function DeskSave({
     setError(null);
     const input = form.getValues();
     save.mutate(
-      { baseRevision: base, message: text, input },
+      { baseRevision: baseNumber, message: text, input },
       {
         onSuccess: (revision) => {
           setBase(revision);
@@ -115,10 +114,7 @@ export function DeskSave({
               path: i.path.replace(/^input\./, ''),
               message: i.message,
             }));
-            for (const issue of issues) {
-              const name = toFieldName(issue.path);
-              form.setError(name as 'member.length', { type: 'server', message: issue.message });
-            }
+            onRefused(issues);
             setProblems(issues);
             return;
           }
@@ -128,7 +124,7 @@ export function DeskSave({
     );
   }
 
-  const nothingToSave = !dirty && base !== null;
+  const nothingToSave = !dirty && baseNumber !== null;
   const onKey = useRef<(e: KeyboardEvent) => void>(() => undefined);
   useEffect(() => {
     onKey.current = (e: KeyboardEvent) => {
@@ -139,7 +135,7 @@ export function DeskSave({
       const dialogForm = document.getElementById(SAVE_FORM_ID);
       if (dialogForm instanceof HTMLFormElement) dialogForm.requestSubmit();
       else if (open) return;
-      else if (nothingToSave) setStatus(`Nothing to save: the inputs are those of revision ${base}.`);
+      else if (nothingToSave) setStatus(`Nothing to save: the inputs are those of revision ${baseNumber}.`);
       else void openSave();
     };
   });
@@ -193,7 +189,7 @@ export function DeskSave({
         {dirty ? null : status}
       </p>
       <Button
-        variant={dirty || base === null ? 'primary' : 'secondary'}
+        variant={dirty || baseNumber === null ? 'primary' : 'secondary'}
         disabled={nothingToSave}
         aria-keyshortcuts="Control+S Meta+S"
         title="Save revision (Ctrl+S)"
@@ -210,8 +206,8 @@ export function DeskSave({
           error={error}
           initialMessage={message}
           nextLabel={
-            base
-              ? `Saves as revision ${base + 1}, on top of revision ${base}.`
+            baseNumber
+              ? `Saves as revision ${baseNumber + 1}, on top of revision ${baseNumber}.`
               : 'Saves as revision 1, the first of this cantilever.'
           }
           problems={problems}

@@ -1,10 +1,14 @@
 import { createContext, useContext } from 'react';
 
-/** Problems the engine found that the schema cannot see (an unknown shape, a load past the tip), by field name. */
-export const EngineIssuesContext = createContext<Map<string, string>>(new Map());
+/**
+ * Every problem shown on the desk's fields, by field name: the web worker's answer for the document
+ * on screen (the schema's and the engine's issues) and, until the next edit, what the server refused
+ * in a save. The only channel for field errors: the form itself does not validate.
+ */
+export const DeskIssuesContext = createContext<ReadonlyMap<string, string>>(new Map());
 
-export function useEngineIssue(name: string): string | undefined {
-  return useContext(EngineIssuesContext).get(name);
+export function useFieldIssue(name: string): string | undefined {
+  return useContext(DeskIssuesContext).get(name);
 }
 
 /** A DOM id for a field name: "loads.area.0.value" → "f-loads-area-0-value". */

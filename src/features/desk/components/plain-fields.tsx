@@ -1,23 +1,14 @@
 import { useState, type ReactNode } from 'react';
-import { useFormContext, useFormState, useWatch, type FieldPath } from 'react-hook-form';
+import { useFormContext, useWatch, type FieldPath } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
-import { fieldId, useEngineIssue } from './field-context';
+import { fieldId, useFieldIssue } from './field-context';
 
 type Name = FieldPath<DesignDocument>;
 
-function errorAt(errors: unknown, name: string): string | undefined {
-  let node: unknown = errors;
-  for (const part of name.split('.')) node = (node as Record<string, unknown> | undefined)?.[part];
-  const message = (node as { message?: unknown } | undefined)?.message;
-  return typeof message === 'string' ? message : undefined;
-}
-
-/** The schema's or the engine's error for one field name. */
+/** The problem shown at one field (the worker's or the server's; the form does not validate). */
 export function useFieldError(name: string): string | undefined {
-  const { errors } = useFormState<DesignDocument>({ name: name as Name });
-  const engineIssue = useEngineIssue(name);
-  return errorAt(errors, name) ?? engineIssue;
+  return useFieldIssue(name);
 }
 
 /** A whole number or ratio; the browser keeps what is typed, the schema says what is wrong. */

@@ -3,7 +3,7 @@ import { useController, useFormContext, type FieldPath } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
 import { Field, describedBy, inputClass } from '../../../components/ui/field';
 import { fieldUnit, UNIT_CHOICES } from '../lib/field-units';
-import { fieldId, useEngineIssue } from './field-context';
+import { fieldId, useFieldIssue } from './field-context';
 import { useUnitMenu } from './unit-menu';
 
 export interface QuantityFieldProps {
@@ -145,16 +145,14 @@ export function QuantityInput({
 
 /**
  * A quantity typed with its unit ("10 ft"), with a small list that rewrites the same physical
- * value in another unit. The error (schema or engine) sits right under it in plain words.
+ * value in another unit. The error (the worker's: schema or engine) sits right under it in plain words.
  */
 export function QuantityField(props: QuantityFieldProps) {
   const { control } = useFormContext<DesignDocument>();
   const {
     field: { value, onChange, onBlur, ref },
-    fieldState,
   } = useController({ control, name: props.name as FieldPath<DesignDocument> });
-  const engineIssue = useEngineIssue(props.name);
-  const error = fieldState.error?.message ?? engineIssue;
+  const error = useFieldIssue(props.name);
   const text = typeof value === 'string' ? value : '';
   return (
     <QuantityInput {...props} text={text} error={error} onText={onChange} onBlur={onBlur} inputRef={ref} />

@@ -1,11 +1,7 @@
-import { useMemo } from 'react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';
 import type { DesignDocument } from '../../../../shared/schemas/design';
-import { lengthQ } from '../../../../shared/schemas/quantity';
 import { QuantityInput } from './quantity-field';
 import { SelectField, SwitchField, useFieldError } from './plain-fields';
-
-const KEY_SCHEMA = lengthQ();
 
 /**
  * A quantity that is the only required key of an optional object (`connection.post.height`,
@@ -25,18 +21,12 @@ function ObjectQuantityField({
   const { control } = useFormContext<DesignDocument>();
   const {
     field: { value, onChange, onBlur, ref },
-    fieldState,
   } = useController({ control, name: object });
   const name = `${object}.${keyName}`;
   const keyError = useFieldError(name);
   const objectError = useFieldError(object);
   const current = value as Record<string, unknown> | undefined;
   const text = typeof current?.[keyName] === 'string' ? (current[keyName] as string) : '';
-  // The form keeps the schema's errors by registered name (here the object), so the key's own
-  // error is read from the same schema the document is checked with.
-  const checked = useMemo(() => (text ? KEY_SCHEMA.safeParse(text) : null), [text]);
-  const schemaError =
-    checked && !checked.success ? checked.error.issues[0]?.message : fieldState.error?.message;
   return (
     <QuantityInput
       name={name}
@@ -44,7 +34,7 @@ function ObjectQuantityField({
       hint={hint}
       optional
       text={text}
-      error={schemaError ?? keyError ?? objectError}
+      error={keyError ?? objectError}
       onBlur={onBlur}
       inputRef={ref}
       onText={(next) => onChange(next === undefined ? undefined : { ...current, [keyName]: next })}

@@ -12,7 +12,10 @@ export interface LiveDesign {
   result: DesignResult | null;
   /** The request id behind `result` (for the redraw measure). */
   resultId: number;
-  /** Problems with the newest document (schema or engine); empty when it computed. */
+  /**
+   * Problems with the newest document, the schema's and the engine's (the desk validates here, in the
+   * worker, and nowhere else); empty when it computed.
+   */
   issues: FieldIssue[];
   /** The engine failed unexpectedly on the newest document. */
   failure: string | null;
@@ -80,6 +83,8 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
   const queued = useRef<{ id: number; doc: unknown } | null>(null);
   const nextId = useRef(0);
   const docs = useRef(new Map<number, DesignDocument>());
+  const latest = useRef<LiveDesign>(EMPTY);
+  const waiters = useRef<((answer: LiveDesign) => void)[]>([]);
 
   useEffect(() => {
     const e = startEngine((reply) => {
@@ -91,14 +96,10 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
       else inFlight.current = false;
       const doc = docs.current.get(reply.id) ?? null;
       for (const id of docs.current.keys()) if (id <= reply.id) docs.current.delete(id);
-      // One task from the answer to the charts' final commit: as a sync update, the charts' effects
-      // (which hand the new data to each chart's store) and the re-render they cause run in the same
-      // task, instead of after a browser frame that would paint the half-updated results.
-      flushSync(() => {
-        setBusy(Boolean(next));
-        setLive((prev) => {
-          if (reply.kind === 'result') {
-            return {
+      const prev = latest.current;
+      const answer: LiveDesign =
+        reply.kind === 'result'
+          ? {
               result: reply.result,
               resultId: reply.id,
               issues: NO_ISSUES,
@@ -106,13 +107,19 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
               stale: Boolean(next),
               engineMs: reply.ms,
               doc,
-            };
-          }
-          if (reply.kind === 'invalid')
-            return { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms };
-          return { ...prev, issues: NO_ISSUES, failure: reply.message, stale: true, engineMs: reply.ms };
-        });
+            }
+          : reply.kind === 'invalid'
+            ? { ...prev, issues: reply.issues, failure: null, stale: true, engineMs: reply.ms }
+            : { ...prev, issues: NO_ISSUES, failure: reply.message, stale: true, engineMs: reply.ms };
+      latest.current = answer;
+      // One task from the answer to the charts' final commit: as a sync update, the charts' effects
+      // (which hand the new data to each chart's store) and the re-render they cause run in the same
+      // task, instead of after a browser frame that would paint the half-updated results.
+      flushSync(() => {
+        setBusy(Boolean(next));
+        setLive(answer);
       });
+      if (!next) for (const waiter of waiters.current.splice(0)) waiter(answer);
       finishRedraw(reply.id);
     });
     engine.current = e;
@@ -147,5 +154,14 @@ export function useLiveDesign(customShapes: ShapeRecord[]) {
     setBusy(true);
   }, []);
 
-  return { live, busy, submit };
+  /** The answer for the newest document submitted, once the worker has given it (at once when idle). */
+  const settled = useCallback(
+    (): Promise<LiveDesign> =>
+      inFlight.current || queued.current
+        ? new Promise((resolve) => waiters.current.push(resolve))
+        : Promise.resolve(latest.current),
+    [],
+  );
+
+  return { live, busy, submit, settled };
 }

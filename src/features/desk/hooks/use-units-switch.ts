@@ -1,10 +1,10 @@
 import { useCallback, useRef } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import type { UnitSystem } from '../../../../shared/engine/units';
-import type { DesignDocument, DesignInput } from '../../../../shared/schemas/design';
+import type { DesignDocument } from '../../../../shared/schemas/design';
 import { switchUnits, type SwitchRecord } from '../lib/switch-units';
 
-type Form = UseFormReturn<DesignDocument, unknown, DesignInput>;
+type Form = UseFormReturn<DesignDocument>;
 
 /** Replaces the saved baseline and the edited values together, so a switch alone leaves nothing unsaved. */
 export function replaceKeepingDirty(form: Form, baseline: DesignDocument, values: DesignDocument): void {
