@@ -14,7 +14,7 @@ import { vibrationCheck } from './checks/vibration-check';
 import type { CheckContext } from './checks/check-context';
 import { assertFinite, assertStationsFinite } from './finite-guard';
 import { inputProblems, MAX_TAPER_SLOPE } from './input-limits';
-import { analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
+import { Arena, analyseMember, combine, DEFAULT_INTERVALS } from './member/analysis';
 import { gatherCaseLoads, selfWeightLine, type CaseLoads } from './member/case-loads';
 import { allowableCombinations, serviceCombinations, strengthCombinations } from './member/combinations';
 import { firstFrequency } from './member/frequency';
@@ -45,6 +45,10 @@ export interface EvaluateOptions {
   /** Equal intervals along the member (point loads add nodes); for convergence studies. */
   intervals?: number;
 }
+
+// Room for about 60 stations with five cases and their combinations; a larger design takes a
+// second block for its rest (Arena.take).
+const ENGINE_ARENA = new Arena(60 * (2 + 6 * 5 + 16));
 
 /**
  * Evaluates a parsed design document (parsedDesignSchema output, or parseDesign of a validated one).
@@ -82,6 +86,9 @@ export function evaluateDesign(input: ParsedDesign, options: EvaluateOptions = {
     caseLoads,
     options.intervals ?? DEFAULT_INTERVALS,
     lateral.braces,
+    // One arena for every design: nothing of the model outlives this call (the result holds
+    // numbers and arrays of its own), so the next design reuses the block instead of allocating.
+    ENGINE_ARENA.reset(),
   );
   const present = new Set(caseLoads.map((c) => c.case));
   const seismic = input.loads.seismic;

@@ -43,56 +43,77 @@ interface SideWorst {
   loaded: boolean;
 }
 
-/** Nominal strength at each station for a segment and Cb, never below the same station with no braces. */
-type StrengthsFor = (segment: Segment, Cb: number) => (node: number) => Strength;
+/** The nominal strength at each station for one unbraced length and Cb, computed when first asked. */
+class StationStrengths {
+  private readonly list: Strength[] = [];
+  private fn: ReturnType<typeof flexuralStrengthOf> | null = null;
 
-function strengthFinder(ctx: CheckContext, floor: Segment | null): StrengthsFor {
-  const { model, section, Fy, E } = ctx;
-  // One lookup per (Le, Cb), kept and handed out again: the same pair is asked for by every
-  // combination (numbers as Map keys, no key text to build per call).
-  const tables = new Map<number, Map<number, (node: number) => Strength>>();
-  const table = (Le: number, Cb: number): ((node: number) => Strength) => {
-    let byCb = tables.get(Le);
+  constructor(
+    private readonly ctx: CheckContext,
+    private readonly Le: number,
+    private readonly Cb: number,
+  ) {}
+
+  at(node: number): Strength {
+    const { section, model, Fy, E } = this.ctx;
+    const i = section.prismatic ? 0 : node;
+    let hit = this.list[i];
+    if (!hit) {
+      this.fn ??= flexuralStrengthOf(section, { Fy, E, Lb: this.Le, Cb: this.Cb });
+      hit = this.fn(model.props[i]);
+      this.list[i] = hit;
+    }
+    return hit;
+  }
+}
+
+/**
+ * Nominal strength at each station for a segment and Cb, never below the same station with no
+ * braces (`floor`). One table per (Le, Cb), kept and handed out again: the same pair is asked for by
+ * every combination (numbers as Map keys, no key text to build per call). Classes rather than
+ * closures: these are made for every design of a study.
+ */
+class StrengthFinder {
+  private readonly tables = new Map<number, Map<number, StationStrengths>>();
+
+  constructor(
+    private readonly ctx: CheckContext,
+    private readonly floor: Segment | null,
+  ) {}
+
+  table(Le: number, Cb: number): StationStrengths {
+    let byCb = this.tables.get(Le);
     if (!byCb) {
       byCb = new Map();
-      tables.set(Le, byCb);
+      this.tables.set(Le, byCb);
     }
-    let lookup = byCb.get(Cb);
-    if (!lookup) {
-      const list: Strength[] = [];
-      let fn: ReturnType<typeof flexuralStrengthOf> | null = null;
-      lookup = (node) => {
-        const i = section.prismatic ? 0 : node;
-        let hit = list[i];
-        if (!hit) {
-          fn ??= flexuralStrengthOf(section, { Fy, E, Lb: Le, Cb });
-          hit = fn(model.props[i]);
-          list[i] = hit;
-        }
-        return hit;
-      };
-      byCb.set(Cb, lookup);
+    let found = byCb.get(Cb);
+    if (!found) {
+      found = new StationStrengths(this.ctx, Le, Cb);
+      byCb.set(Cb, found);
     }
-    return lookup;
-  };
-  return (segment, Cb) => {
-    const own = table(segment.Le, Cb);
-    if (!floor || floor === segment) return own;
-    const base = table(floor.Le, 1);
-    return (node) => {
-      const a = own(node);
-      const b = base(node);
-      return b.nominal > a.nominal ? b : a;
-    };
-  };
+    return found;
+  }
+
+  /** The floor's table for `segment`, or null when the segment is its own floor. */
+  floorOf(segment: Segment): StationStrengths | null {
+    return !this.floor || this.floor === segment ? null : this.table(this.floor.Le, 1);
+  }
+}
+
+function strengthAt(own: StationStrengths, floor: StationStrengths | null, node: number): Strength {
+  const a = own.at(node);
+  if (!floor) return a;
+  const b = floor.at(node);
+  return b.nominal > a.nominal ? b : a;
 }
 
 function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor: Segment | null): SideWorst {
   const { model, method } = ctx;
   const x = model.grid.x;
   const last = x.length - 1; // the tip carries no moment
-  const strengthsFor = strengthFinder(ctx, floor);
-  const first = strengthsFor(segments[0], 1)(0);
+  const finder = new StrengthFinder(ctx, floor);
+  const first = strengthAt(finder.table(segments[0].Le, 1), finder.floorOf(segments[0]), 0);
   const w: SideWorst = {
     ratio: 0,
     combo: 0,
@@ -106,15 +127,18 @@ function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor
     loaded: false,
   };
   const tol = model.L * 1e-9;
+  const lrfd = method === 'LRFD';
   for (const seg of segments) {
     let i0 = 0;
     while (i0 < last && x[i0] < seg.from - tol) i0++;
     let i1 = i0;
     while (i1 < last && x[i1] <= seg.to + tol) i1++;
+    const floorTable = finder.floorOf(seg);
     if (sign === 1 && w.outside < 0 && !ctx.section.prismatic) {
       // A station outside the clauses fails the check whatever its moment (web slenderness alone).
-      const any = strengthsFor(seg, 1);
-      for (let i = i0; i < i1 && w.outside < 0; i++) if (any(i).outOfScope !== undefined) w.outside = i;
+      const any = finder.table(seg.Le, 1);
+      for (let i = i0; i < i1 && w.outside < 0; i++)
+        if (strengthAt(any, floorTable, i).outOfScope !== undefined) w.outside = i;
     }
     for (let c = 0; c < ctx.combos.length; c++) {
       const M = ctx.combos[c].response.M;
@@ -123,17 +147,23 @@ function worstOfSide(ctx: CheckContext, sign: 1 | -1, segments: Segment[], floor
         let Mmax = 0;
         for (let i = i0; i < i1; i++) Mmax = Math.max(Mmax, Math.abs(M[i]));
         const len = seg.to - seg.from;
-        const at = (t: number) => momentOfCombination(model, ctx.combos[c].factors, seg.from + t * len);
-        Cb = cbF11(Mmax, at(0.25), at(0.5), at(0.75));
+        const factors = ctx.combos[c].factors;
+        Cb = cbF11(
+          Mmax,
+          momentOfCombination(model, factors, seg.from + 0.25 * len),
+          momentOfCombination(model, factors, seg.from + 0.5 * len),
+          momentOfCombination(model, factors, seg.from + 0.75 * len),
+        );
       }
-      const strengthAt = strengthsFor(seg, Cb);
+      const own = finder.table(seg.Le, Cb);
       for (let i = i0; i < i1; i++) {
         const demand = sign * M[i];
         if (!(demand > 0)) continue;
         w.loaded = true;
-        const s = strengthAt(i);
+        const s = strengthAt(own, floorTable, i);
         if (s.outOfScope !== undefined && w.outside < 0) w.outside = i;
-        const cap = available(s.nominal, method, PHI_B, OMEGA_B);
+        // available() written out: this runs for every station of every combination.
+        const cap = lrfd ? PHI_B * s.nominal : s.nominal / OMEGA_B;
         if (!(cap > 0)) {
           if (!w.noCapacity) w.noCapacity = { node: i, strength: s };
           continue;

@@ -46,7 +46,9 @@ function compactWeb(p: SectionProps, o: IFlexureOptions): Strength {
   const { Fy, E, Lb, Cb } = o;
   const c = o.c ?? 1;
   const Mp = Fy * p.Zx;
-  const list: Strength[] = [{ nominal: Mp, clause: 'F2.1', limitState: 'yielding' }];
+  // The smallest limit state, the first one on a tie (as governing() picks from a list): this runs at
+  // every station of every tapered design, so no list and no object for a limit state that does not govern.
+  let best: Strength = { nominal: Mp, clause: 'F2.1', limitState: 'yielding' };
   const Lp = 1.76 * p.ry * Math.sqrt(E / Fy);
   const jc = (p.J * c) / (p.Sx * p.ho);
   const Lr =
@@ -60,7 +62,8 @@ function compactWeb(p: SectionProps, o: IFlexureOptions): Strength {
       const Fcr = ((Cb * Math.PI ** 2 * E) / (s * s)) * Math.sqrt(1 + 0.078 * jc * s * s);
       Mn = Fcr * p.Sx;
     }
-    list.push({ nominal: Math.min(Mn, Mp), clause: 'F2.2', limitState: 'lateral-torsional buckling' });
+    const ltb = Math.min(Mn, Mp);
+    if (ltb < best.nominal) best = { nominal: ltb, clause: 'F2.2', limitState: 'lateral-torsional buckling' };
   }
   const f = flangeLimits(p, o);
   if (f.lambda > f.lambdaP) {
@@ -68,9 +71,10 @@ function compactWeb(p: SectionProps, o: IFlexureOptions): Strength {
       f.lambda <= f.lambdaR
         ? Mp - (Mp - 0.7 * Fy * p.Sx) * ((f.lambda - f.lambdaP) / (f.lambdaR - f.lambdaP))
         : (0.9 * E * f.kc * p.Sx) / (f.lambda * f.lambda);
-    list.push({ nominal: Mn, clause: 'F3.2', limitState: 'compression flange local buckling' });
+    if (Mn < best.nominal)
+      best = { nominal: Mn, clause: 'F3.2', limitState: 'compression flange local buckling' };
   }
-  return governing(list);
+  return best;
 }
 
 /** F4, doubly symmetric (Iyc / Iy = 0.5 > 0.23, Sxt = Sxc, hc = h). */

@@ -48,6 +48,17 @@ export class Arena {
     this.block = new Float64Array(blockSize);
   }
 
+  /**
+   * Starts over in the same block, for a caller whose earlier views are all dropped (the engine's
+   * entry, one design at a time): the block is zeroed where it was used, and the next design then
+   * allocates nothing. Views handed out before are overwritten.
+   */
+  reset(): this {
+    this.block.fill(0, 0, this.used);
+    this.used = 0;
+    return this;
+  }
+
   take(n: number): Float64Array {
     if (this.used + n > this.block.length) {
       this.block = new Float64Array(Math.max(this.blockSize, n));
@@ -70,6 +81,8 @@ export function analyseMember(
   intervals = DEFAULT_INTERVALS,
   /** Further positions that must be nodes (bottom-flange braces: a segment ends on a node). */
   extraNodes: readonly number[] = [],
+  /** Where the station arrays are cut from; default a new arena (a reused one: see Arena.reset). */
+  arenaIn?: Arena,
 ): MemberModel {
   const points = [...caseLoads.flatMap((c) => c.points.map((p) => p.a)), ...extraNodes];
   // A prismatic member under uniform and point loads is integrated exactly on any grid.
@@ -77,7 +90,7 @@ export function analyseMember(
   const { x, mid } = grid;
   const props: SectionProps[] = x.map((xi) => section.at(xi / L));
   // Room for EI, every case's six arrays and eight combinations; more take a second block.
-  const arena = new Arena(x.length * (2 + 6 * caseLoads.length + 16));
+  const arena = arenaIn ?? new Arena(x.length * (2 + 6 * caseLoads.length + 16));
   const EInode = arena.take(x.length);
   const EImid = arena.take(mid.length);
   for (let i = 0; i < x.length; i++) EInode[i] = E * props[i].Ix;

@@ -4,7 +4,7 @@
  * tip too shallow to leave a web, plates that do not make an I.
  */
 import type { ParsedPlates, ParsedSection } from '../../schemas/parsed-design';
-import type { ShapeLookup } from '../shapes/types';
+import type { ShapeLookup, ShapeRecord } from '../shapes/types';
 import type { MemberSection } from './section-types';
 import { catalogSection, missingDimensions } from './catalog-section';
 import { builtUpSection, taperedRolledSection } from './tapered-section';
@@ -55,7 +55,27 @@ export function resolveSection(section: ParsedSection, shapes: ShapeLookup): Mem
       },
     ];
   }
-  return taperedRolledSection(shape, tip);
+  return taperedOf(shape, tip);
+}
+
+// A section is the same for the same shape and tip depth (as catalogSection keeps a catalog shape):
+// a reach study asks for each tip depth at every length, and keeping the section also keeps its
+// properties along the member (member/analysis.ts).
+const tapered = new WeakMap<ShapeRecord, Map<number, MemberSection>>();
+
+function taperedOf(shape: ShapeRecord, tip: number): MemberSection {
+  let byTip = tapered.get(shape);
+  if (!byTip) {
+    byTip = new Map();
+    tapered.set(shape, byTip);
+  }
+  let section = byTip.get(tip);
+  if (!section) {
+    section = taperedRolledSection(shape, tip);
+    if (byTip.size >= 200) byTip.clear();
+    byTip.set(tip, section);
+  }
+  return section;
 }
 
 function resolvePlates(plates: ParsedPlates): MemberSection | FieldProblem[] {

@@ -30,6 +30,11 @@ function taperedSection(
   const root = propsAt(plates, 0);
   const tip = propsAt(plates, 1);
   const steel = DEFAULT_STEEL[family];
+  // The properties at each fraction asked for, kept: a section is kept per shape and tip depth
+  // (resolve-section.ts), and the fractions x / L of the nodes repeat from one length to the next
+  // (about a hundred distinct ones over a 60-length study), so a study computes each once. The
+  // same fraction gives the same properties, so a kept one is exactly a new one.
+  const memo = new Map<number, SectionProps>();
   // Methods rather than arrow properties: a section is built for every design of a study.
   return {
     label: label[0],
@@ -41,7 +46,15 @@ function taperedSection(
     root,
     tip,
     at(t) {
-      return t <= 0 ? root : t >= 1 ? tip : propsAt(plates, t);
+      if (t <= 0) return root;
+      if (t >= 1) return tip;
+      let p = memo.get(t);
+      if (!p) {
+        p = propsAt(plates, t);
+        if (memo.size >= 1024) memo.clear();
+        memo.set(t, p);
+      }
+      return p;
     },
     IxAt(t) {
       return iSectionIx(rootDepth + (tipDepth - rootDepth) * t, bf, tf, tw);
