@@ -1,6 +1,7 @@
 import type { FieldChange } from '../../../shared/schemas/diff';
 import { pathWords, valueWords } from '../../../shared/words/field-words';
 import { ScrollBox } from '../ui/scroll-box';
+import { ColumnHeads } from '../ui/column-heads';
 
 interface ChangedInputsTableProps {
   changes: FieldChange[];
@@ -19,19 +20,7 @@ export function ChangedInputsTable({ changes, labelA, labelB }: ChangedInputsTab
         <caption className="sr-only">
           Changed inputs, {labelA} then {labelB}
         </caption>
-        <thead>
-          <tr className="border-b border-concrete-300 text-left text-concrete-700">
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Input
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              {labelA}
-            </th>
-            <th scope="col" className="py-1 font-medium">
-              {labelB}
-            </th>
-          </tr>
-        </thead>
+        <ColumnHeads names={['Input', labelA, labelB]} />
         <tbody>
           {changes.map((change) => (
             <tr key={change.path} className="border-b border-concrete-100 align-top">

@@ -4,6 +4,7 @@ import type { RatioRow, RatioTrend } from '../../lib/ratio-rows';
 import { TREND_TEXT } from '../../lib/verdict-style';
 import { RatioCell } from './ratio-cell';
 import { ScrollBox } from '../ui/scroll-box';
+import { ColumnHeads } from '../ui/column-heads';
 
 const ICONS: Record<RatioTrend, LucideIcon> = {
   up: ArrowUp,
@@ -29,25 +30,7 @@ export function RatioTable({ rows, labelA, labelB }: { rows: RatioRow[]; labelA:
         <caption className="sr-only">
           Check ratios, {labelA} and {labelB}
         </caption>
-        <thead>
-          <tr className="border-b border-concrete-300 text-left text-concrete-700">
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Check
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              {labelA}
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              {labelB}
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Change
-            </th>
-            <th scope="col" className="py-1 font-medium">
-              Trend
-            </th>
-          </tr>
-        </thead>
+        <ColumnHeads names={['Check', labelA, labelB, 'Change', 'Trend']} />
         <tbody>
           {rows.map((row) => {
             const Icon = ICONS[row.trend];

@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { useUpdateUser, type UpdateUserBody } from '../api/update-user';
 import { ScrollBox } from '../../../components/ui/scroll-box';
 import { errorText } from '../../../lib/error-text';
+import { ColumnHeads } from '../../../components/ui/column-heads';
 
 const TEMP_ALPHABET = 'abcdefghjkmnpqrstuvwxyz23456789';
 
@@ -41,25 +42,9 @@ export function AccountsTable({ users, meId }: { users: UserDto[]; meId: number 
       <ScrollBox label="Accounts">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">Accounts</caption>
-          <thead>
-            <tr className="border-b border-concrete-300 text-left text-concrete-700">
-              <th scope="col" className="py-1 pr-3 font-medium">
-                Name
-              </th>
-              <th scope="col" className="py-1 pr-3 font-medium">
-                E-mail
-              </th>
-              <th scope="col" className="py-1 pr-3 font-medium">
-                Role
-              </th>
-              <th scope="col" className="py-1 pr-3 font-medium">
-                Status
-              </th>
-              <th scope="col" className="py-1 font-medium">
-                <span className="sr-only">Actions</span>
-              </th>
-            </tr>
-          </thead>
+          <ColumnHeads
+            names={['Name', 'E-mail', 'Role', 'Status', <span className="sr-only">Actions</span>]}
+          />
           <tbody>
             {users.map((user) => (
               <tr key={user.id} className="border-b border-concrete-100">

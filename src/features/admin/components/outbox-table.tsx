@@ -4,6 +4,7 @@ import type { OutboxDto } from '../../../../shared/schemas/api';
 import { Button } from '../../../components/ui/button';
 import { ScrollBox } from '../../../components/ui/scroll-box';
 import { formatDateTime } from '../../../lib/format';
+import { ColumnHeads } from '../../../components/ui/column-heads';
 
 const STATUS: Record<OutboxDto['status'], { word: string; Icon: LucideIcon; tone: string }> = {
   pending: { word: 'waiting to send', Icon: Hourglass, tone: 'text-concrete-700' },
@@ -19,31 +20,17 @@ export function OutboxTable({ mails }: { mails: OutboxDto[] }) {
     <ScrollBox label="E-mails">
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">E-mails captured, newest first</caption>
-        <thead>
-          <tr className="border-b border-concrete-300 text-left text-concrete-700">
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Time
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              To
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Subject
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Status
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Attempts
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Last error
-            </th>
-            <th scope="col" className="py-1 font-medium">
-              <span className="sr-only">Text</span>
-            </th>
-          </tr>
-        </thead>
+        <ColumnHeads
+          names={[
+            'Time',
+            'To',
+            'Subject',
+            'Status',
+            'Attempts',
+            'Last error',
+            <span className="sr-only">Text</span>,
+          ]}
+        />
         <tbody>
           {mails.map((mail) => {
             const { word, Icon, tone } = STATUS[mail.status];

@@ -2,6 +2,7 @@ import type { Check } from '../../../../shared/engine/types';
 import { formatQuantity } from '../../../../shared/engine/units';
 import { RatioCell } from '../../../components/diff/ratio-cell';
 import { ScrollBox } from '../../../components/ui/scroll-box';
+import { ColumnHeads } from '../../../components/ui/column-heads';
 
 /** Worst first; a check that could not be computed counts as the worst. */
 export function worstFirst(checks: Check[]): Check[] {
@@ -17,25 +18,7 @@ export function CheckList({ checks }: { checks: Check[] }) {
     <ScrollBox label={'Checks of this revision'}>
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Checks of this revision, worst first</caption>
-        <thead>
-          <tr className="border-b border-concrete-300 text-left text-concrete-700">
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Check
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Combination
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Demand
-            </th>
-            <th scope="col" className="py-1 pr-3 font-medium">
-              Capacity
-            </th>
-            <th scope="col" className="py-1 font-medium">
-              Ratio
-            </th>
-          </tr>
-        </thead>
+        <ColumnHeads names={['Check', 'Combination', 'Demand', 'Capacity', 'Ratio']} />
         <tbody>
           {worstFirst(checks).map((check) => (
             <tr key={check.id} className="border-b border-concrete-100 align-top" data-check={check.id}>
