@@ -46,12 +46,13 @@ interface BuilderSingle {
  * (`limit()` and `offset()` parse the value and drop anything else), so writing them into the
  * text is safe and gives one reusable statement per shape.
  */
+const inline = (value: unknown) => value === undefined || Number.isSafeInteger(value);
+
 export function inlineLimits(db: Knex): void {
   const client = db.client as { queryCompiler(builder: BuilderSingle, formatter?: unknown): unknown };
   const compiler = client.queryCompiler.bind(client);
   client.queryCompiler = (builder, formatter) => {
     const single = builder._single;
-    const inline = (value: unknown) => value === undefined || Number.isSafeInteger(value);
     if (
       (single.limit !== undefined || single.offset !== undefined) &&
       inline(single.limit) &&
