@@ -1,9 +1,10 @@
 /**
  * The one test command (`npm test`). First it finds a Chromium for the browser tests (installing
  * Debian's when it may: scripts/lib/chromium.ts). Then, side by side: typecheck, lint, the
- * formatting check and the client build; the vitest runs below in two lanes (each run in its own
- * vitest process, with its own environment): the runs that need the build start as soon as it is
- * done, beside the others, which go one after the other. Every step runs even when an earlier one
+ * formatting check, the client build and the server bundle; the vitest runs below in two lanes
+ * (each run in its own vitest process, with its own environment): the runs that need the build
+ * start as soon as it is done, beside the others, which go one after the other (the machine has
+ * 2 cores: a third lane made the whole slower). Every step runs even when an earlier one
  * fails, so one run shows everything that is wrong. The last line is exactly "N passed, N failed",
  * which CI reads: each vitest test counts, and each other step counts as one.
  */
@@ -11,6 +12,7 @@ import { mkdirSync, rmSync } from 'node:fs';
 import { realHost, resolveChromium } from './lib/chromium';
 import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
 import { report, runNode, type Finished } from './lib/processes';
+import { serverBuildStep } from './lib/server-build';
 import { countReport, type Tally } from './lib/vitest-report';
 
 interface VitestRun {
@@ -26,7 +28,10 @@ interface VitestRun {
    * its output is printed in one block when it ends.
    */
   needsBuild?: boolean;
-  /** Runs on the throwaway PostgreSQL cluster (TEST_PG_URL); fails as one step when PostgreSQL is missing. */
+  /**
+   * Runs on the throwaway PostgreSQL cluster (TEST_PG_URL), in a lane of its own with its output
+   * printed in one block when it ends; fails as one step when PostgreSQL is missing.
+   */
   needsPg?: boolean;
 }
 
@@ -110,6 +115,21 @@ async function sideStep(label: string, args: string[]): Promise<Finished> {
   return r;
 }
 
+async function serverBundleStep(): Promise<void> {
+  const started = Date.now();
+  const step = serverBuildStep(process.cwd());
+  console.log(`=== server build: ${step.doing}`);
+  try {
+    const what = await step.run();
+    report('server build', { ok: true, code: 0, output: what }, started);
+    total.passed += 1;
+  } catch (err) {
+    console.log(`--- server build output:\n${err instanceof Error ? err.message : String(err)}`);
+    report('server build', { ok: false, code: 1, output: '' }, started);
+    total.failed += 1;
+  }
+}
+
 async function vitestRun(run: VitestRun, chromium: string, buffer: boolean): Promise<void> {
   const file = `${OUT_DIR}/vitest-${run.label}.json`;
   rmSync(file, { force: true });
@@ -144,6 +164,9 @@ async function main(): Promise<void> {
 
   const checks = Promise.all(CHECKS.map((c) => sideStep(c.label, c.args)));
   const build = sideStep(BUILD.label, BUILD.args);
+  // The server bundle npm start runs, for the tests that start server processes: they run it once it
+  // is up to date (scripts/lib/server-build.ts freshServerBundle) and the sources through tsx before.
+  const serverBuild = serverBundleStep();
   const afterBuild = (async () => {
     const runs = VITEST_RUNS.filter((run) => run.needsBuild);
     if (runs.length > 0 && !(await build).ok) {
@@ -169,7 +192,7 @@ async function main(): Promise<void> {
     await vitestRun(run, chromium.path, false);
   }
   await afterBuild;
-  await Promise.all([checks, build]);
+  await Promise.all([checks, build, serverBuild]);
   finish();
 }
 

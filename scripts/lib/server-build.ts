@@ -30,6 +30,15 @@ export function serverOutDir(root: string): string {
   return join(root, 'node_modules', '.cache', 'reachline', 'server');
 }
 
+/**
+ * The bundled entry when the bundle is up to date with its sources, else undefined. The stamp is
+ * written only once a build has finished, so a bundle being rebuilt counts as stale.
+ */
+export function freshServerBundle(root: string): string | undefined {
+  const outDir = serverOutDir(root);
+  return staleReason(outDir, inputsHash(root, SERVER_INPUTS)) ? undefined : join(outDir, 'serve.js');
+}
+
 /** The server build step: what it is about to do, and the work (returns what it did). */
 export function serverBuildStep(
   root: string,

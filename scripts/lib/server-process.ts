@@ -1,5 +1,6 @@
 /**
- * The real server entry (server/index.ts through tsx, or the bundle npm start runs) in a child process, configured by
+ * The real server entry (server/index.ts through tsx, or the bundle npm start runs: the tests pass
+ * freshServerBundle when it is up to date) in a child process, configured by
  * environment variables; resolves with its URL once it prints "running at". Used by the
  * multi-instance and durability tests and by `npm run bench:load`.
  */

@@ -82,13 +82,16 @@ describe('reach study', () => {
         }),
     );
     expect(clicked).toBe(true);
-    const status = (await page.getByTestId('study-status').textContent()) ?? '';
+    // The status line follows at the next animation frame (the study repaints once a frame).
+    const statusLine = page.getByTestId('study-status');
+    await expect.poll(() => statusLine.textContent()).toMatch(/^Cancelled after/);
+    const status = (await statusLine.textContent()) ?? '';
     const m = /^Cancelled after (\d+) of 3600 points/.exec(status);
     expect(m).not.toBeNull();
     expect(Number(m?.[1])).toBeLessThan(3600);
     // Nothing more arrives after the cancel.
     await page.waitForTimeout(500);
-    expect(await page.getByTestId('study-status').textContent()).toBe(status);
+    expect(await statusLine.textContent()).toBe(status);
   });
 
   it('the map takes the keyboard: arrows move the focus point and read it out', async () => {

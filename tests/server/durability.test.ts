@@ -9,6 +9,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { freshServerBundle } from '../../scripts/lib/server-build';
 import { startServerProcess, type ServerProcess } from '../../scripts/lib/server-process';
 import { createDb } from '../../server/db/knex';
 import { ON_POSTGRES } from '../helpers/test-db';
@@ -17,7 +18,11 @@ const KILLS = 4;
 const dir = mkdtempSync(join(tmpdir(), 'reachline-durable-'));
 const database = join(dir, 'reachline.sqlite');
 
-/** The real server entry on the test's SQLite file, seeded with the demo. */
+/**
+ * The real server on the test's SQLite file, seeded with the demo: the bundle npm start runs when it
+ * is up to date (npm test builds it beside the other steps), else the sources through tsx (about
+ * three times slower to start, and this test starts five).
+ */
 function startChild(): Promise<ServerProcess> {
   return startServerProcess(
     {
@@ -34,6 +39,8 @@ function startChild(): Promise<ServerProcess> {
       ENGINE_THREADS: '0',
     },
     'the server',
+    60_000,
+    freshServerBundle(process.cwd()),
   );
 }
 

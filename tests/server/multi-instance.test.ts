@@ -8,6 +8,7 @@
  */
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { freshServerBundle } from '../../scripts/lib/server-build';
 import { startServerProcess, type ServerProcess } from '../../scripts/lib/server-process';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { baseDesign, createTestEnv, PASSWORD, TEAM, type TestEnv } from '../helpers/api';
@@ -33,6 +34,7 @@ function startInstance(env: TestEnv, smtpUrl: string, name: string): Promise<Ins
     },
     name,
     45_000,
+    freshServerBundle(process.cwd()),
   );
 }
 
