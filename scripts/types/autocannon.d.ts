@@ -20,6 +20,14 @@ declare module 'autocannon' {
     timeouts: number;
     non2xx: number;
   }
-  function autocannon(options: Options): Promise<Result>;
+  /** A running benchmark: a promise of its result that also reports each answer as it comes. */
+  interface Instance extends Promise<Result> {
+    /** `client` is the connection's own object; `ms` the answer's latency. */
+    on(
+      event: 'response',
+      listener: (client: object, statusCode: number, resBytes: number, ms: number) => void,
+    ): this;
+  }
+  function autocannon(options: Options): Instance;
   export default autocannon;
 }

@@ -1,7 +1,11 @@
 /**
- * The engine off the event loop: `POST /api/check` runs the design (and turns its result into
- * JSON) in a piscina worker pool, so reads keep flowing while designs are computed. With no worker
- * threads configured (ENGINE_THREADS=0, the API tests' default) the same task runs in-line.
+ * The engine of `POST /api/check`, in-line (ENGINE_THREADS=0, the default) or off the event loop
+ * in a piscina worker pool (ENGINE_THREADS=n or auto), where the design is computed and its result
+ * turned into JSON while reads keep flowing. A design takes well under a millisecond now, and on
+ * the 2-core machine the hop to a thread (the parsed document copied over, the answer back, a
+ * thread competing with the event loop for the cores) cost more than it moved: in-line answered
+ * more checks per second and the 50-client mix had the shorter tail (DEVELOPERS.md, Decisions).
+ * Both ways give byte-equal answers (tests/server/engine-pool.test.ts).
  *
  * The worker is engine-worker.js beside the bundle when `npm start` runs the built server, or the
  * TypeScript source through tsx when the server runs from source (tests, scripts, development).
