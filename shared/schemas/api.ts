@@ -4,8 +4,8 @@
  * Errors always have the shape { error: { code, message, issues: [{ path, message }] } }.
  */
 import { z } from 'zod';
-import { designSchema, type DesignDocument } from './design';
-import { parsedDesignSchema } from './parsed-design';
+import type { DesignDocument } from './design';
+import { designWithParsedSchema, parsedDesignSchema } from './parsed-design';
 import type { DesignResult } from '../engine/types';
 import type { ShapeRecord } from '../engine/shapes/types';
 
@@ -124,15 +124,19 @@ export const createCantileverSchema = z.object({
   quantity: quantitySchema.default(1),
   name: z.string().trim().min(1, 'is required').max(120, 'is too long (120 characters at most)'),
   description: z.string().trim().max(500, 'is too long (500 characters at most)').default(''),
-  /** Optional first design; saved as revision 1 with the message "First design". */
-  input: designSchema.optional(),
+  /**
+   * Optional first design; saved as revision 1 with the message "First design". Validated and
+   * parsed in one pass: the handler gets the document as written and the engine's parsed form.
+   */
+  input: designWithParsedSchema.optional(),
 });
 export type CreateCantileverRequest = z.output<typeof createCantileverSchema>;
 export const createRevisionSchema = z.object({
   /** The revision number this save was based on; null for the first revision. */
   baseRevision: z.number().int().positive().nullable(),
   message: z.string().trim().min(1, 'describe what changed').max(500),
-  input: designSchema,
+  /** The document as written (stored, compared) and parsed (the engine's input), from one pass. */
+  input: designWithParsedSchema,
 });
 /** What the server's handlers receive (parsed). */
 export type CreateRevisionRequest = z.output<typeof createRevisionSchema>;

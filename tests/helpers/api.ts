@@ -18,7 +18,7 @@ import { findUserById, insertUser, toUserDto } from '../../server/features/users
 import { hashPassword } from '../../server/lib/password';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { MailWorker } from '../../server/mail/mail-worker';
-import type { Role } from '../../shared/schemas/api';
+import { createRevisionSchema, type Role } from '../../shared/schemas/api';
 import { designSchema, type DesignInput } from '../../shared/schemas/design';
 import { freshTestDirs, type TestDirs } from './test-db';
 
@@ -117,11 +117,8 @@ async function populate(db: Knex, config: Config, dirs: TestDirs, options: TestE
     db,
     architect,
     await cantileverForMember(db, cantileverId, ids.architect),
-    {
-      baseRevision: null,
-      message: 'First design',
-      input: baseDesign(),
-    },
+    // What the route hands the service: the body through its schema (the document validated and parsed).
+    createRevisionSchema.parse({ baseRevision: null, message: 'First design', input: baseDesign() }),
   );
 
   let smtp: FakeSmtp | null = null;

@@ -8,6 +8,7 @@ import { cantileverForMember } from '../../server/features/projects/project-acce
 import { saveRevision } from '../../server/features/revisions/revisions.service';
 import { findUserById, toUserDto } from '../../server/features/users/users.repository';
 import { baseDesign, createTestEnv, type TestEnv } from '../helpers/api';
+import { createRevisionSchema } from '../../shared/schemas/api';
 
 const PNG = Buffer.from(
   'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==',
@@ -221,7 +222,7 @@ describe('attachment details and deletion', () => {
       env.db,
       toUserDto((await findUserById(env.db, env.ids.architect))!),
       await cantileverForMember(env.db, other, env.ids.architect),
-      { baseRevision: null, message: 'Other first', input: baseDesign() },
+      createRevisionSchema.parse({ baseRevision: null, message: 'Other first', input: baseDesign() }),
     );
     otherRevisionId = saved.id;
   });

@@ -22,7 +22,6 @@ import {
 } from '../projects/project-access';
 import { assertMayChange } from './edit-rights';
 import { mailDecision, mailSubmission, type SubmitNotice } from './review-mail';
-import { parseDesign } from '../../../shared/schemas/parsed-design';
 import { evaluateWithSections, storedSections } from './evaluate';
 import {
   getRevisionDto,
@@ -61,8 +60,8 @@ export async function saveRevision(
     await lockCantilever(trx, cantilever.id);
     const latest = await latestRevision(trx, cantilever.id);
     if ((latest?.number ?? null) !== body.baseRevision) throw await stale(trx, latest);
-    assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input);
-    const { result, sections } = await evaluateWithSections(trx, parseDesign(body.input), {
+    assertMayChange(user.role, latest ? JSON.parse(latest.input_json) : undefined, body.input.document);
+    const { result, sections } = await evaluateWithSections(trx, body.input.parsed, {
       stations: true,
       projectId: cantilever.project_id,
       pinned: storedSections(latest?.sections_json),
@@ -73,7 +72,7 @@ export async function saveRevision(
       number: (latest?.number ?? 0) + 1,
       authorId: user.id,
       message: body.message,
-      input: body.input,
+      input: body.input.document,
       result,
       baseRevisionId: latest?.id ?? null,
     });
