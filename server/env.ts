@@ -95,9 +95,10 @@ const envSchema = z.object({
     .union([z.literal('auto'), z.coerce.number().int().min(0).max(64)], {
       error: 'must be auto or a whole number of threads from 0 to 64',
     })
-    // In-line by default: measured on 2 cores (npm run bench:load), the hop to a worker thread cost
-    // more than the engine it moved (POST /api/check 271 -> 488 req/s, the 50-client mix p99
-    // 698 -> 266 ms in-line). See DEVELOPERS.md, Decisions.
+    // In-line by default: measured on 2 cores (npm run bench:load, runs alternated), the checks
+    // per second were about the same either way, and on SQLite the 50-client mix's p99 on open
+    // connections fell from 567-613 ms (checks queued for the thread) to 122-137 ms. See
+    // DEVELOPERS.md, Decisions.
     .default(0),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DATA_DIR: z.string().min(1).default('data'),

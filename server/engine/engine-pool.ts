@@ -3,8 +3,9 @@
  * in a piscina worker pool (ENGINE_THREADS=n or auto), where the design is computed and its result
  * turned into JSON while reads keep flowing. A design takes well under a millisecond now, and on
  * the 2-core machine the hop to a thread (the parsed document copied over, the answer back, a
- * thread competing with the event loop for the cores) cost more than it moved: in-line answered
- * more checks per second and the 50-client mix had the shorter tail (DEVELOPERS.md, Decisions).
+ * thread competing with the event loop for the cores) gained nothing: as many checks per second,
+ * and in the 50-client mix on SQLite the checks queued for the thread while reads went by, a p99
+ * four times as long as in-line (DEVELOPERS.md, Decisions).
  * Both ways give byte-equal answers (tests/server/engine-pool.test.ts).
  *
  * The worker is engine-worker.js beside the bundle when `npm start` runs the built server, or the
