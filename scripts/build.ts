@@ -1,12 +1,19 @@
 /**
  * npm run build: builds the client into dist/ and stamps it (scripts/lib/client-build.ts).
  * `--if-stale` skips the build when dist/ is up to date with the sources, as `npm start` does.
+ * `--server` bundles the server instead, as `npm start` runs it (scripts/lib/server-build.ts; only
+ * when stale): `npm test` does, in a process of its own (Vite's build sets NODE_ENV=production in
+ * the process that runs it, which the test runs started after it would inherit).
  */
 import { clientBuildStep } from './lib/client-build';
+import { serverBuildStep } from './lib/server-build';
 import { timed } from './lib/timing';
 
-const step = clientBuildStep(process.cwd(), !process.argv.includes('--if-stale'));
-timed('Client build', step.doing, step.run).catch((err: unknown) => {
+const server = process.argv.includes('--server');
+const step = server
+  ? serverBuildStep(process.cwd())
+  : clientBuildStep(process.cwd(), !process.argv.includes('--if-stale'));
+timed(server ? 'Server build' : 'Client build', step.doing, step.run).catch((err: unknown) => {
   console.error(err instanceof Error ? err.message : err);
   process.exit(1);
 });

@@ -12,7 +12,6 @@ import { mkdirSync, rmSync } from 'node:fs';
 import { realHost, resolveChromium } from './lib/chromium';
 import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
 import { report, runNode, type Finished } from './lib/processes';
-import { serverBuildStep } from './lib/server-build';
 import { countReport, type Tally } from './lib/vitest-report';
 
 interface VitestRun {
@@ -91,6 +90,11 @@ const CHECKS: { label: string; args: string[] }[] = [
   },
 ];
 const BUILD = { label: 'build', args: ['--import', 'tsx', 'scripts/build.ts', '--if-stale'] };
+/**
+ * The server bundle npm start runs, for the tests that start server processes: they run it once it
+ * is up to date (scripts/lib/server-build.ts freshServerBundle), the sources through tsx before.
+ */
+const SERVER_BUILD = { label: 'server build', args: ['--import', 'tsx', 'scripts/build.ts', '--server'] };
 
 const OUT_DIR = 'tests/output';
 const total: Tally = { passed: 0, failed: 0, skipped: 0 };
@@ -113,21 +117,6 @@ async function sideStep(label: string, args: string[]): Promise<Finished> {
   if (r.ok) total.passed += 1;
   else total.failed += 1;
   return r;
-}
-
-async function serverBundleStep(): Promise<void> {
-  const started = Date.now();
-  const step = serverBuildStep(process.cwd());
-  console.log(`=== server build: ${step.doing}`);
-  try {
-    const what = await step.run();
-    report('server build', { ok: true, code: 0, output: what }, started);
-    total.passed += 1;
-  } catch (err) {
-    console.log(`--- server build output:\n${err instanceof Error ? err.message : String(err)}`);
-    report('server build', { ok: false, code: 1, output: '' }, started);
-    total.failed += 1;
-  }
 }
 
 async function vitestRun(run: VitestRun, chromium: string, buffer: boolean): Promise<void> {
@@ -164,9 +153,7 @@ async function main(): Promise<void> {
 
   const checks = Promise.all(CHECKS.map((c) => sideStep(c.label, c.args)));
   const build = sideStep(BUILD.label, BUILD.args);
-  // The server bundle npm start runs, for the tests that start server processes: they run it once it
-  // is up to date (scripts/lib/server-build.ts freshServerBundle) and the sources through tsx before.
-  const serverBuild = serverBundleStep();
+  const serverBuild = sideStep(SERVER_BUILD.label, SERVER_BUILD.args);
   const afterBuild = (async () => {
     const runs = VITEST_RUNS.filter((run) => run.needsBuild);
     if (runs.length > 0 && !(await build).ok) {

@@ -51,27 +51,39 @@ export function serverBuildStep(
     doing: `${reason}: bundling the server`,
     run: async () => {
       const { build } = await import('vite');
-      await build({
-        configFile: false,
-        root,
-        logLevel: 'warn',
-        publicDir: false,
-        build: {
-          ssr: true,
-          outDir,
-          emptyOutDir: true,
-          target: 'node20',
-          minify: false,
-          rollupOptions: {
-            input: { serve: SERVER_ENTRY, 'engine-worker': ENGINE_WORKER_ENTRY },
-            // Every file in one folder, so a chunk's import.meta.url finds engine-worker.js beside it.
-            output: { entryFileNames: '[name].js', chunkFileNames: '[name]-[hash].js' },
-          },
-        },
-        ssr: { target: 'node', noExternal: ['mathjs'] },
-      });
+      // Vite's build sets NODE_ENV=production in this process when it is unset, and whatever this
+      // process starts next would inherit it: npm start's server would skip the demo seed.
+      const nodeEnv = process.env.NODE_ENV;
+      try {
+        await bundle(build, root, outDir);
+      } finally {
+        if (nodeEnv === undefined) delete process.env.NODE_ENV;
+        else process.env.NODE_ENV = nodeEnv;
+      }
       writeStamp(outDir, hash);
       return 'done';
     },
   };
+}
+
+async function bundle(build: typeof import('vite').build, root: string, outDir: string): Promise<void> {
+  await build({
+    configFile: false,
+    root,
+    logLevel: 'warn',
+    publicDir: false,
+    build: {
+      ssr: true,
+      outDir,
+      emptyOutDir: true,
+      target: 'node20',
+      minify: false,
+      rollupOptions: {
+        input: { serve: SERVER_ENTRY, 'engine-worker': ENGINE_WORKER_ENTRY },
+        // Every file in one folder, so a chunk's import.meta.url finds engine-worker.js beside it.
+        output: { entryFileNames: '[name].js', chunkFileNames: '[name]-[hash].js' },
+      },
+    },
+    ssr: { target: 'node', noExternal: ['mathjs'] },
+  });
 }

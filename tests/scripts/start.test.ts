@@ -58,7 +58,16 @@ describe('the bundled server', { timeout: 120000 }, () => {
   it('migrates and seeds an empty database, listens, answers, and stops on SIGTERM', async () => {
     const step = serverBuildStep(ROOT, bundleDir);
     expect(step.doing).toBe('not built yet: bundling the server');
-    expect(await step.run()).toBe('done');
+    // As npm start runs it: no NODE_ENV (vitest sets one). Vite's build sets NODE_ENV=production
+    // when it is unset; the step must put it back, or the server started next skips the demo.
+    const nodeEnv = process.env.NODE_ENV;
+    delete process.env.NODE_ENV;
+    try {
+      expect(await step.run()).toBe('done');
+      expect(process.env.NODE_ENV).toBeUndefined();
+    } finally {
+      process.env.NODE_ENV = nodeEnv;
+    }
     expect(serverBuildStep(ROOT, bundleDir).doing).toBe('checking the server bundle');
 
     const data = join(temp, 'data');
