@@ -20,6 +20,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { launchChromium } from '../tests/helpers/chromium';
 import { startServer } from '../server/start';
+import { percentile } from './lib/stats';
 
 const args = process.argv.slice(2);
 const json = args.includes('--json');
@@ -140,11 +141,6 @@ async function studyBench(page: import('playwright-core').Page, cantileverId: nu
     complete: mid(await read('study-complete')),
     workers,
   };
-}
-
-function percentile(sorted: number[], p: number): number {
-  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil(p * sorted.length) - 1));
-  return sorted[i];
 }
 
 async function main() {

@@ -29,6 +29,7 @@ import { startFakeSmtp } from '../server/mail/fake-smtp';
 import { findPgBin, startPgCluster, type PgCluster } from './lib/pg-cluster';
 import { serverBuildStep, serverOutDir } from './lib/server-build';
 import { startServerProcess, type ServerProcess } from './lib/server-process';
+import { percentile } from './lib/stats';
 
 const args = process.argv.slice(2);
 const option = (name: string, fallback: string) => {
@@ -113,7 +114,7 @@ async function measure(
     }),
   );
   open.sort((a, b) => a - b);
-  const openP99 = open.length > 0 ? open[Math.min(open.length - 1, Math.floor(open.length * 0.99))] : NaN;
+  const openP99 = percentile(open, 0.99);
   const figure: Figure = {
     name,
     rps: results.reduce((s, r) => s + r.requests.average, 0),

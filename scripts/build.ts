@@ -2,8 +2,7 @@
  * npm run build: builds the client into dist/ and stamps it (scripts/lib/client-build.ts).
  * `--if-stale` skips the build when dist/ is up to date with the sources, as `npm start` does.
  * `--server` bundles the server instead, as `npm start` runs it (scripts/lib/server-build.ts; only
- * when stale): `npm test` does, in a process of its own (Vite's build sets NODE_ENV=production in
- * the process that runs it, which the test runs started after it would inherit).
+ * when stale): `npm test` runs it as one of its side-by-side steps.
  */
 import { clientBuildStep } from './lib/client-build';
 import { serverBuildStep } from './lib/server-build';
