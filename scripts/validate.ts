@@ -27,10 +27,7 @@ interface VitestRun {
    * its output is printed in one block when it ends.
    */
   needsBuild?: boolean;
-  /**
-   * Runs on the throwaway PostgreSQL cluster (TEST_PG_URL), in a lane of its own with its output
-   * printed in one block when it ends; fails as one step when PostgreSQL is missing.
-   */
+  /** Runs on the throwaway PostgreSQL cluster (TEST_PG_URL); fails as one step when PostgreSQL is missing. */
   needsPg?: boolean;
 }
 
