@@ -62,32 +62,43 @@ describe('reach study', () => {
 
   it('cancels a large study part way', async () => {
     await axes(60, 60);
-    await page.getByRole('button', { name: /Run study|Restart study/ }).click();
-    // In the page itself, at the first frame that shows progress: a whole 60 x 60 study can finish
-    // in well under a second, sooner than a poll from the test could see it and click.
-    const clicked = await page.evaluate(
-      () =>
-        new Promise<boolean>((resolve) => {
-          const started = performance.now();
-          const look = () => {
-            const progress = document.querySelector('[data-testid="study-progress"]');
-            const cancel = [...document.querySelectorAll('button')].find((b) => b.textContent === 'Cancel');
-            if (progress && Number(progress.getAttribute('value')) > 0 && cancel && !cancel.disabled) {
-              cancel.click();
-              resolve(true);
-            } else if (performance.now() - started > 30_000) resolve(false);
-            else requestAnimationFrame(look);
-          };
-          look();
-        }),
-    );
-    expect(clicked).toBe(true);
-    // The status line follows at the next animation frame (the study repaints once a frame).
     const statusLine = page.getByTestId('study-status');
-    await expect.poll(() => statusLine.textContent()).toMatch(/^Cancelled after/);
-    const status = (await statusLine.textContent()) ?? '';
+    // The workers race the click: on a busy machine the main thread can paint the first progress
+    // only once the workers have sent every point, and the click then finds the study done (which
+    // is right, and checked). A run the cancel reaches in time is what this test needs: up to five
+    // tries, each a fresh run.
+    let status = '';
+    for (let attempt = 1; attempt <= 5; attempt += 1) {
+      await page.getByRole('button', { name: /Run study|Restart study/ }).click();
+      // In the page itself, at the first frame that shows progress: a whole 60 x 60 study can
+      // finish in well under a second, sooner than a poll from the test could see it and click.
+      const clicked = await page.evaluate(
+        () =>
+          new Promise<boolean>((resolve) => {
+            const started = performance.now();
+            const look = () => {
+              const progress = document.querySelector('[data-testid="study-progress"]');
+              const cancel = [...document.querySelectorAll('button')].find((b) => b.textContent === 'Cancel');
+              if (progress && Number(progress.getAttribute('value')) > 0 && cancel && !cancel.disabled) {
+                cancel.click();
+                resolve(true);
+              } else if (performance.now() - started > 30_000) resolve(false);
+              else requestAnimationFrame(look);
+            };
+            look();
+          }),
+      );
+      expect(clicked).toBe(true);
+      // The status line follows at the next animation frame (the study repaints once a frame).
+      await expect
+        .poll(() => statusLine.textContent())
+        .toMatch(/^(Cancelled after|All 3600 points computed)/);
+      status = (await statusLine.textContent()) ?? '';
+      if (status.startsWith('Cancelled after')) break;
+    }
     const m = /^Cancelled after (\d+) of 3600 points/.exec(status);
-    expect(m).not.toBeNull();
+    expect(m, `no try was cancelled in time; the last said "${status}"`).not.toBeNull();
+    expect(Number(m?.[1])).toBeGreaterThan(0);
     expect(Number(m?.[1])).toBeLessThan(3600);
     // Nothing more arrives after the cancel.
     await page.waitForTimeout(500);
