@@ -6,7 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startE2E, type DemoRole, type E2E } from '../helpers/e2e';
+import { gone, networkQuiet, shown, startE2E, trackRequests, type DemoRole, type E2E } from '../helpers/e2e';
 import { seriousA11yProblems, type A11yProblem } from '../helpers/axe';
 
 const WIDTHS = [
@@ -31,19 +31,20 @@ async function pageFor(role: DemoRole | null): Promise<Page> {
   const existing = pages.get(key);
   if (existing) return existing;
   const { context, page } = await e2e.newSession();
+  trackRequests(page);
   if (role) await e2e.signInAs(context, role);
   pages.set(key, page);
   return page;
 }
 
-const heading = (page: Page) => page.locator('main h1, h1').first().waitFor();
+const heading = (page: Page) => shown(page.locator('main h1, h1').first());
 
 const ROUTES: RouteCase[] = [
   {
     label: 'sign-in',
     role: null,
     path: () => '/sign-in',
-    ready: (p) => p.getByRole('button', { name: /sign in/i }).waitFor(),
+    ready: (p) => shown(p.getByRole('button', { name: /sign in/i })),
   },
   { label: 'projects', role: 'architect', path: () => '/projects', ready: heading },
   { label: 'project', role: 'architect', path: () => `/projects/${ids.project}`, ready: heading },
@@ -51,13 +52,13 @@ const ROUTES: RouteCase[] = [
     label: 'desk (architect)',
     role: 'architect',
     path: () => `/cantilevers/${ids.cantilever}`,
-    ready: (p) => p.getByTestId('tip-deflection').waitFor(),
+    ready: (p) => shown(p.getByTestId('tip-deflection')),
   },
   {
     label: 'desk (fabricator)',
     role: 'fabricator',
     path: () => `/cantilevers/${ids.cantilever}`,
-    ready: (p) => p.getByTestId('tip-deflection').waitFor(),
+    ready: (p) => shown(p.getByTestId('tip-deflection')),
   },
   {
     label: 'history',
@@ -119,7 +120,7 @@ async function widest(page: Page): Promise<string[]> {
 async function open(page: Page, path: string, ready: (page: Page) => Promise<unknown>) {
   await page.goto(path);
   await ready(page);
-  await page.waitForLoadState('networkidle');
+  await networkQuiet(page);
 }
 
 beforeAll(async () => {
@@ -179,7 +180,7 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     const found: string[] = [];
     const dialogAudit = async (dialogName: string) => {
       const dialog = page.getByRole('dialog', { name: dialogName });
-      await dialog.waitFor();
+      await shown(dialog);
       found.push(...(await audit(page, `${dialogName} dialog @${width}`, '[role="dialog"]')));
       return dialog;
     };
@@ -194,7 +195,7 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     await dialogAudit('New cantilever');
     await page.keyboard.press('Escape');
 
-    await open(page, `/cantilevers/${ids.cantilever}`, (p) => p.getByTestId('tip-deflection').waitFor());
+    await open(page, `/cantilevers/${ids.cantilever}`, (p) => shown(p.getByTestId('tip-deflection')));
     // On the phone the input groups start folded: open the two this test uses.
     for (const group of ['Reach', 'Section']) {
       const details = page.locator('details', { has: page.locator('summary', { hasText: group }) }).first();
@@ -204,13 +205,13 @@ describe.each(WIDTHS)('every route at $width x $height', ({ name, width, height 
     const picker = await dialogAudit('Pick a shape');
     await picker.getByRole('searchbox').fill('W10X33');
     await picker.locator('[data-shape="W10X33"]').first().click();
-    await picker.getByText('Torsion constant J').waitFor();
+    await shown(picker.getByText('Torsion constant J'));
     found.push(...(await audit(page, `shape picker with a shape chosen @${width}`, '[role="dialog"]')));
     await page.keyboard.press('Escape');
-    await picker.waitFor({ state: 'detached' });
+    await gone(picker);
 
     await page.getByLabel('Length (root to tip)', { exact: true }).fill('8.5 ft');
-    await page.getByTestId('unsaved').waitFor();
+    await shown(page.getByTestId('unsaved'));
     await page.getByRole('button', { name: 'Save revision' }).click();
     await dialogAudit('Save revision');
     await page.keyboard.press('Escape');
@@ -252,7 +253,7 @@ describe('on a phone (390 x 844)', () => {
     await page.keyboard.press('Enter');
     expect(await button.getAttribute('aria-expanded')).toBe('true');
     const menu = page.locator(`#${menuId}`);
-    await menu.waitFor();
+    await shown(menu);
     await expect.poll(() => audit(page, 'header menu @390')).toEqual([]);
     // every entry is reachable with Tab, and none lies outside the window
     for (const name of ['Projects', 'Shapes', 'Team', 'Outbox']) {
@@ -275,8 +276,8 @@ describe('on a phone (390 x 844)', () => {
     const page = await pageFor('engineer');
     for (const { name, width, height } of WIDTHS) {
       await page.setViewportSize({ width, height });
-      await open(page, `/cantilevers/${ids.cantilever}`, (p) => p.getByTestId('tip-deflection').waitFor());
-      await page.getByTestId('verdict').waitFor();
+      await open(page, `/cantilevers/${ids.cantilever}`, (p) => shown(p.getByTestId('tip-deflection')));
+      await shown(page.getByTestId('verdict'));
       if (name === 'phone') {
         const top = await page.getByTestId('verdict').evaluate((el) => el.getBoundingClientRect().top);
         expect(top).toBeGreaterThanOrEqual(0);

@@ -6,7 +6,7 @@
 import { createHash } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, shown } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -23,7 +23,7 @@ beforeAll(async () => {
   page = session.page;
   await e2e.signInAs(session.context, 'fabricator');
   await page.goto('/cantilevers/1');
-  await page.getByRole('region', { name: 'Attachments' }).waitFor();
+  await shown(page.getByRole('region', { name: 'Attachments' }));
 });
 
 afterAll(async () => {
@@ -37,9 +37,9 @@ describe('attachments on the desk', () => {
       .getByLabel(/Add a file/)
       .setInputFiles({ name: 'pier-detail.png', mimeType: 'image/png', buffer: PNG });
     await files.getByRole('button', { name: 'Upload' }).click();
-    await files.getByRole('status').filter({ hasText: 'Uploaded “pier-detail.png”' }).waitFor();
+    await shown(files.getByRole('status').filter({ hasText: 'Uploaded “pier-detail.png”' }));
     const sha = createHash('sha256').update(PNG).digest('hex');
-    await files.getByText(`sha256 ${sha.slice(0, 10)}`).waitFor();
+    await shown(files.getByText(`sha256 ${sha.slice(0, 10)}`));
     const href = await files.getByRole('link', { name: 'Download pier-detail.png' }).getAttribute('href');
     const downloaded = await page.evaluate(async (h) => {
       const bytes = new Uint8Array(await (await fetch(h)).arrayBuffer());
@@ -58,7 +58,7 @@ describe('attachments on the desk', () => {
       .setInputFiles({ name: 'photo.png', mimeType: 'image/png', buffer: html });
     await files.getByRole('button', { name: 'Upload' }).click();
     const alert = files.getByRole('alert');
-    await alert.waitFor();
+    await shown(alert);
     expect(await alert.textContent()).toContain('This file is not allowed.');
     expect(await files.getByText('photo.png').count()).toBe(0);
   });
@@ -88,10 +88,10 @@ describe('attachments on the desk', () => {
     await revisionChoice.locator('option', { hasText: 'revision 1' }).first().waitFor({ state: 'attached' });
     await revisionChoice.selectOption({ index: 1 }); // the newest revision (0 is "no particular revision")
     await files.getByRole('button', { name: 'Upload' }).click();
-    await files.getByRole('status').filter({ hasText: 'Uploaded “pier-elevation.png”' }).waitFor();
+    await shown(files.getByRole('status').filter({ hasText: 'Uploaded “pier-elevation.png”' }));
     const item = files.getByRole('listitem').filter({ hasText: 'pier-elevation.png' });
-    await item.getByText('Pier elevation with the anchor rods').waitFor();
-    await item.getByText(/^revision \d+$/).waitFor();
+    await shown(item.getByText('Pier elevation with the anchor rods'));
+    await shown(item.getByText(/^revision \d+$/));
     await e2e.screenshot(page, 'desk-attachment-details');
     const href = await item.getByRole('link', { name: 'Download pier-elevation.png' }).getAttribute('href');
 
@@ -101,7 +101,7 @@ describe('attachments on the desk', () => {
     expect(await files.getByText('pier-elevation.png').count()).toBeGreaterThan(0);
     await item.getByRole('button', { name: 'Delete pier-elevation.png' }).click();
     await dialog.getByRole('button', { name: 'Delete the file' }).click();
-    await files.getByText('Deleted “pier-elevation.png”.').waitFor();
+    await shown(files.getByText('Deleted “pier-elevation.png”.'));
     await expect
       .poll(() => files.getByRole('listitem').filter({ hasText: 'pier-elevation.png' }).count())
       .toBe(0);

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import { assertAccessible } from '../helpers/axe';
-import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk, shown, gone } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -89,7 +89,7 @@ describe('desk by keyboard', () => {
     await page.keyboard.press('Alt+ArrowDown');
     expect(await length.getAttribute('aria-expanded')).toBe('true');
     const list = page.locator(`#${await length.getAttribute('aria-controls')}`);
-    await list.waitFor();
+    await shown(list);
     await assertAccessible(page, 'desk, unit list open', `#${await list.getAttribute('id')}`);
     const inches = list.getByRole('option').filter({ hasText: / in$/ });
     const inchesText = (await inches.textContent()) ?? '';
@@ -135,12 +135,12 @@ describe('desk by keyboard', () => {
     const dialog = page.getByRole('dialog', { name: 'Pick a shape' });
     const first = await openMs();
     await page.keyboard.press('Escape');
-    await dialog.waitFor({ state: 'detached' });
+    await gone(dialog);
     const again: number[] = [];
     for (let i = 0; i < 5; i++) {
       again.push(await openMs());
       await page.keyboard.press('Escape');
-      await dialog.waitFor({ state: 'detached' });
+      await gone(dialog);
     }
     again.sort((a, b) => a - b);
     console.log(
@@ -148,7 +148,7 @@ describe('desk by keyboard', () => {
     );
     await browse.click();
     const grid = dialog.getByRole('grid', { name: 'Shapes' });
-    await grid.locator('tr[data-shape]').first().waitFor();
+    await shown(grid.locator('tr[data-shape]').first());
     // the whole table is in the list (aria-rowcount, the head row included), the rows in view are drawn
     const rowCount = Number(await grid.getAttribute('aria-rowcount')) - 1;
     expect(rowCount).toBeGreaterThan(600);
@@ -206,14 +206,14 @@ describe('desk by keyboard', () => {
     await expect.poll(focusedShape).toBe('W10X33');
     await e2e.screenshot(page, 'shape-picker-keys');
     await page.keyboard.press('Enter');
-    await dialog.waitFor({ state: 'detached' });
+    await gone(dialog);
     expect(await page.getByLabel('Shape', { exact: true }).inputValue()).toBe('W10X33');
   });
 
   it('shows the whole value of every quantity box at 390 px wide', async () => {
     await page.setViewportSize({ width: 390, height: 844 });
     try {
-      await page.getByRole('combobox', { name: 'Length (root to tip)', exact: true }).waitFor();
+      await shown(page.getByRole('combobox', { name: 'Length (root to tip)', exact: true }));
       const cut = await page.evaluate(() =>
         [...document.querySelectorAll<HTMLInputElement>('input[role="combobox"]')]
           .filter((el) => el.offsetParent !== null && el.value !== '')

@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk, shown, gone } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -86,7 +86,7 @@ describe('design desk', () => {
   it('Reach: a plain number is refused next to the field, without NaN', async () => {
     const length = await field('Length (root to tip)').inputValue();
     await field('Length (root to tip)').fill('12');
-    await page.getByText('Length (root to tip) needs a unit, got "12"').first().waitFor();
+    await shown(page.getByText('Length (root to tip) needs a unit, got "12"').first());
     expect(await page.locator('body').textContent()).not.toContain('NaN');
     await field('Length (root to tip)').fill(length);
     await settled();
@@ -123,7 +123,7 @@ describe('design desk', () => {
     await expect.poll(() => split.textContent(), { timeout: 10_000 }).toMatch(/Member bending [\d.]+ in/);
     expect(await split.textContent()).toMatch(/Connection rotation [\d.]+ in/);
     await field('Fillet weld size').fill('5');
-    await page.getByText('Fillet weld size needs a unit, got "5"').first().waitFor();
+    await shown(page.getByText('Fillet weld size needs a unit, got "5"').first());
     await field('Fillet weld size').fill('5/16 in');
     await expect
       .poll(() => page.locator('tr[data-check="weld.strength"]').count(), { timeout: 10_000 })
@@ -148,14 +148,14 @@ describe('design desk', () => {
     const dialog = page.getByRole('dialog', { name: 'Pick a shape' });
     await dialog.getByRole('searchbox').fill('W10X33');
     await dialog.locator('tr[data-shape="W10X33"]').click();
-    await dialog.getByText('Torsion constant J').waitFor();
+    await shown(dialog.getByText('Torsion constant J'));
     await e2e.screenshot(page, 'shape-picker');
     await dialog.getByRole('button', { name: 'Use for member' }).click();
-    await dialog.waitFor({ state: 'detached' });
+    await gone(dialog);
     expect(await field('Shape').inputValue()).toBe('W10X33');
     await settled();
     await page.getByLabel('Kind of section').selectOption('plates');
-    await field('Depth at the root').waitFor();
+    await shown(field('Depth at the root'));
     await field('Web thickness').fill('0.3125 in');
     await settled();
     expect(await page.getByTestId('elevation-support').textContent()).toMatch(/built-up/i);
@@ -202,7 +202,7 @@ describe('design desk', () => {
     await save.getByLabel('Message').fill('Shorter reach');
     await save.getByRole('button', { name: 'Save revision' }).click();
     const conflict = page.getByRole('dialog', { name: `Revision ${next} was saved while you worked` });
-    await conflict.waitFor();
+    await shown(conflict);
     const row = conflict.getByRole('row').filter({ hasText: 'Support: plate thickness' });
     expect(await row.textContent()).toContain('2 in');
     expect(
@@ -210,22 +210,22 @@ describe('design desk', () => {
     ).toContain('8 ft');
     await e2e.screenshot(page, 'desk-conflict');
     await conflict.getByRole('button', { name: `Keep my changes on top of revision ${next}` }).click();
-    await save.waitFor();
+    await shown(save);
     expect(await save.getByLabel('Message').inputValue()).toBe('Shorter reach');
     await save.getByRole('button', { name: 'Save revision' }).click();
     await expect
       .poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 })
       .toBe(`rev ${next + 1}`);
     expect(await field('Length (root to tip)').inputValue()).toBe('8 ft');
-    await page.getByTestId('revision-list').getByText('Shorter reach').waitFor();
+    await shown(page.getByTestId('revision-list').getByText('Shorter reach'));
   });
 
   it('asks before leaving with unsaved changes', async () => {
     await field('Length (root to tip)').fill('8.5 ft');
-    await page.getByTestId('unsaved').waitFor();
+    await shown(page.getByTestId('unsaved'));
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
     const ask = page.getByRole('dialog', { name: 'Leave without saving?' });
-    await ask.waitFor();
+    await shown(ask);
     await ask.getByRole('button', { name: 'Stay on the desk' }).click();
     expect(page.url()).toMatch(/\/cantilevers\/\d+$/);
     expect(await field('Length (root to tip)').inputValue()).toBe('8.5 ft');

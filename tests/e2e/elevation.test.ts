@@ -11,7 +11,7 @@ import type { RevisionDto } from '../../shared/schemas/api';
 import type { StationSeries } from '../../shared/engine/types';
 import { formatQuantity } from '../../shared/engine/units';
 import { assertAccessible } from '../helpers/axe';
-import { SCREEN_DIR, startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
+import { SCREEN_DIR, startE2E, type E2E, openDemoDesk, shown } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -75,7 +75,7 @@ const cursorLeft = () =>
 describe('desk elevation', () => {
   it('draws the member with the shear, moment and deflection strips on one axis with its unit', async () => {
     const panel = page.locator(PANEL);
-    await panel.getByTestId('elevation-drawing').waitFor();
+    await shown(panel.getByTestId('elevation-drawing'));
     expect(await panel.locator('.recharts-line-curve').count()).toBe(3);
     for (const key of ['V', 'M', 'd']) expect(await panel.getByTestId(`strip-${key}`).count()).toBe(1);
     const text = (await panel.textContent()) ?? '';
@@ -125,7 +125,7 @@ describe('desk elevation', () => {
     const total = revision.result.checks.find((c) => c.id === 'member.deflection.total')!;
     await page.getByRole('button', { name: `Show ${total.combination} with its limit` }).click();
     const marker = page.locator(`${PANEL} [data-testid="limit-marker"]`);
-    await marker.waitFor();
+    await shown(marker);
     expect(await marker.textContent()).toContain(`limit ${formatQuantity(total.capacity!)} = span/`);
     await page.getByTestId('elevation').focus();
     await page.keyboard.press('End');

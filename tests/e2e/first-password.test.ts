@@ -4,7 +4,7 @@
  * chooses it, and reaches the projects.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, shown, gone } from '../helpers/e2e';
 
 let e2e: E2E;
 
@@ -47,15 +47,15 @@ describe('a new account’s first sign-in', () => {
     await page.getByLabel('E-mail').fill('rafa.welder@reachline.test');
     await page.getByLabel('Password').fill(FIRST);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: 'Choose a new password' }).waitFor();
-    await page.getByText(/was set by an admin, for a new account or after a reset/).waitFor();
+    await shown(page.getByRole('heading', { name: 'Choose a new password' }));
+    await shown(page.getByText(/was set by an admin, for a new account or after a reset/));
     await e2e.screenshot(page, 'first-password');
     const form = page.getByRole('form', { name: 'Change password' });
     await form.getByLabel('Current password').fill(FIRST);
     await form.getByLabel('New password', { exact: true }).fill(OWN);
     await form.getByLabel('New password again').fill(OWN);
     await form.getByRole('button', { name: 'Change password' }).click();
-    await page.getByRole('heading', { name: 'Choose a new password' }).waitFor({ state: 'detached' });
+    await gone(page.getByRole('heading', { name: 'Choose a new password' }));
     const projects = await page.evaluate(async () => (await fetch('/api/projects')).status);
     expect(projects).toBe(200);
   });

@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { assertAccessible } from '../helpers/axe';
-import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk, shown } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -43,7 +43,7 @@ describe('reach study', () => {
     expect(await page.getByTestId('steel-per-beam').textContent()).toMatch(/^[\d.]+ lbf$/);
     expect(await page.getByTestId('summary-tip-depth').textContent()).toBe('7 in');
     await page.getByRole('link', { name: 'Reach study' }).click();
-    await page.getByRole('heading', { name: /Reach study: East deck/ }).waitFor();
+    await shown(page.getByRole('heading', { name: /Reach study: East deck/ }));
     expect(await page.getByTestId('study-start-note').textContent()).toContain(
       "Starting from the desk's inputs.",
     );
@@ -134,10 +134,10 @@ describe('reach study', () => {
     const cx = box.x + ((70 + ((i + 0.5) * 474) / 12) / 560) * box.width;
     const cy = box.y + ((12 + ((10 - 1 - j + 0.5) * 360) / 10) / 420) * box.height;
     await page.mouse.click(cx, cy);
-    await page.getByTestId('from-study').waitFor();
+    await shown(page.getByTestId('from-study'));
     expect(await page.getByTestId('from-study').textContent()).toContain(`Length ${length}`);
     expect(await page.getByLabel('Length (root to tip)', { exact: true }).inputValue()).toBe(length);
-    await page.getByTestId('unsaved').waitFor();
+    await shown(page.getByTestId('unsaved'));
     await expect
       .poll(() => page.getByTestId('verdict').textContent(), { timeout: 15_000 })
       .toMatch(/^Passes/);
@@ -145,15 +145,15 @@ describe('reach study', () => {
 
   it('lightest sections: "use this" puts the shape into the desk', async () => {
     await page.getByRole('link', { name: 'Reach study' }).click();
-    await page.getByRole('heading', { name: /Reach study: East deck/ }).waitFor();
+    await shown(page.getByRole('heading', { name: /Reach study: East deck/ }));
     for (const f of ['HSS', 'Pipe', 'C']) await page.getByLabel(f, { exact: true }).uncheck();
     await page.getByRole('button', { name: 'Find lightest sections' }).click();
     const first = page.locator('[data-testid="lightest-passing"] tbody tr').first();
-    await first.waitFor({ timeout: 60_000 });
+    await shown(first, 60_000);
     const shape = (await first.locator('td').first().textContent()) ?? '';
     expect(shape).toMatch(/^W\d/);
     await first.getByRole('button', { name: `Use ${shape} in the desk` }).click();
-    await page.getByTestId('from-study').waitFor();
+    await shown(page.getByTestId('from-study'));
     expect(await page.getByTestId('from-study').textContent()).toContain(shape);
   });
 
@@ -164,7 +164,7 @@ describe('reach study', () => {
     // The desk holds unsaved changes from the study: accept the browser's leave question.
     page.once('dialog', (d) => void d.accept());
     await page.goto(`/cantilevers/${id}/study`);
-    await page.getByRole('heading', { name: /Reach study: East deck/ }).waitFor();
+    await shown(page.getByRole('heading', { name: /Reach study: East deck/ }));
     expect(await page.locator('label[for="study-x-from"]').textContent()).toBe('From (m)');
     await axes(12, 10);
     await runToEnd(120);

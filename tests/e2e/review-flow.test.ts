@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { request, type APIRequestContext, type BrowserContext, type Page } from 'playwright-core';
 import { CAUTION } from '../../shared/engine/types';
 import type { OutboxDto, ProjectDetailDto, ProjectDto } from '../../shared/schemas/api';
-import { DEMO_PASSWORD, demoEmail, startE2E, type E2E } from '../helpers/e2e';
+import { DEMO_PASSWORD, demoEmail, startE2E, type E2E, shown } from '../helpers/e2e';
 
 const CANTILEVER = 'East deck, typical beam';
 const ENGINEER = 'Priya Vasquez, PE';
@@ -50,12 +50,12 @@ afterAll(async () => {
 /** On the desk: change the reach by `deltaFeet` and save a revision with `message`. */
 async function saveOnDesk(page: Page, deltaFeet: number, message: string): Promise<void> {
   await page.goto(`/cantilevers/${cantileverId}`);
-  await page.getByTestId('tip-deflection').waitFor();
+  await shown(page.getByTestId('tip-deflection'));
   const length = page.getByLabel('Length (root to tip)', { exact: true });
   const feet = Number.parseFloat(await length.inputValue());
   if (lengths.length === 0) lengths.push(feet);
   await length.fill(`${feet + deltaFeet} ft`);
-  await page.getByTestId('unsaved').waitFor();
+  await shown(page.getByTestId('unsaved'));
   await page.getByRole('button', { name: 'Save revision' }).click();
   const dialog = page.getByRole('dialog', { name: 'Save revision' });
   await dialog.getByLabel('Message').fill(message);
@@ -70,14 +70,14 @@ async function saveOnDesk(page: Page, deltaFeet: number, message: string): Promi
 async function submitLatest(page: Page, number: number, message: string): Promise<void> {
   await page.goto(`/cantilevers/${cantileverId}/history`);
   const list = page.getByRole('list', { name: 'Revisions, newest first' });
-  await list.getByText(message).waitFor();
+  await shown(list.getByText(message));
   const latest = list.getByRole('listitem').first();
   expect(await latest.getByRole('heading').textContent()).toContain(`Revision ${number}Draft`);
   await latest.getByRole('button', { name: 'Submit for review' }).click();
-  await page
-    .getByText(`Revision ${number} was submitted for review. ${ENGINEER} was notified by e-mail.`)
-    .waitFor();
-  await latest.getByText('Awaiting review').waitFor();
+  await shown(
+    page.getByText(`Revision ${number} was submitted for review. ${ENGINEER} was notified by e-mail.`),
+  );
+  await shown(latest.getByText('Awaiting review'));
 }
 
 async function outbox(): Promise<OutboxDto[]> {
@@ -91,7 +91,7 @@ async function openReview(number: number): Promise<void> {
   const page = eng.page;
   await page.goto(`/cantilevers/${cantileverId}/history`);
   await page.getByRole('link', { name: `Open review of revision ${number}` }).click();
-  await page.getByRole('heading', { name: new RegExp(`^Review of revision ${number}`) }).waitFor();
+  await shown(page.getByRole('heading', { name: new RegExp(`^Review of revision ${number}`) }));
   expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
   expect(await page.locator('tr[data-check]').count()).toBeGreaterThan(4);
 }
@@ -116,13 +116,13 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const form = page.getByRole('form', { name: 'Review decision' });
     await form.getByRole('radio', { name: 'Request changes' }).check();
     await form.getByRole('button', { name: 'Record decision' }).click();
-    await form.getByText('Comment is required when you request changes: say what should change').waitFor();
+    await shown(form.getByText('Comment is required when you request changes: say what should change'));
     await form
       .getByLabel('Comment')
       .fill('The tip moves too much at this reach; bring it back or deepen the section.');
     await form.getByRole('button', { name: 'Record decision' }).click();
-    await page.getByText('You requested changes on revision 2.').waitFor();
-    await page.getByText(new RegExp(`^Changes requested by ${ENGINEER} on `)).waitFor();
+    await shown(page.getByText('You requested changes on revision 2.'));
+    await shown(page.getByText(new RegExp(`^Changes requested by ${ENGINEER} on `)));
     expect(await page.getByRole('form', { name: 'Review decision' }).count()).toBe(0);
     await expect
       .poll(async () =>
@@ -137,12 +137,11 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const page = arch.page;
     await page.goto(`/cantilevers/${cantileverId}/history`);
     const second = page.getByRole('list', { name: 'Revisions, newest first' }).getByRole('listitem').first();
-    await second.getByText('Changes requested').waitFor();
+    await shown(second.getByText('Changes requested'));
     await second.getByRole('link', { name: 'Review record' }).click();
-    await page
-      .getByText('The tip moves too much at this reach; bring it back or deepen the section.')
-      .first()
-      .waitFor();
+    await shown(
+      page.getByText('The tip moves too much at this reach; bring it back or deepen the section.').first(),
+    );
     expect(await page.getByRole('radio').count()).toBe(0);
 
     await saveOnDesk(page, -1, 'Shorter reach after review');
@@ -159,18 +158,18 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await openReview(3);
     const page = eng.page;
     const changes = page.getByRole('table', { name: /Changed inputs/ });
-    await changes.waitFor();
+    await shown(changes);
     expect(await changes.getByRole('row', { name: /Reach: length/ }).count()).toBe(1);
     const form = page.getByRole('form', { name: 'Review decision' });
     await form.getByRole('radio', { name: 'Approve revision 3' }).check();
     await form.getByRole('button', { name: 'Record decision' }).click();
     const confirm = page.getByRole('alertdialog', { name: 'Approve revision 3?' });
     await confirm.getByRole('button', { name: 'Yes, approve revision 3' }).click();
-    await page.getByText('You approved revision 3.').waitFor();
-    await page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)).waitFor();
+    await shown(page.getByText('You approved revision 3.'));
+    await shown(page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)));
     expect(await page.getByRole('radio').count()).toBe(0);
     await page.reload();
-    await page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)).waitFor();
+    await shown(page.getByText(new RegExp(`^Approved by ${ENGINEER} on `)));
     expect(await page.getByText(/An approval is final/).count()).toBe(1);
     await e2e.screenshot(page, 'review-approved');
   });
@@ -179,13 +178,13 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     const page = eng.page;
     await page.goto(`/cantilevers/${cantileverId}/history`);
     const items = page.getByRole('list', { name: 'Revisions, newest first' }).getByRole('listitem');
-    await items.first().getByText('Approved').waitFor();
+    await shown(items.first().getByText('Approved'));
     expect(await items.nth(1).getByText('Changes requested').count()).toBe(1);
     await page.getByRole('checkbox', { name: 'Pick revision 3 for compare' }).check();
     await page.getByRole('checkbox', { name: 'Pick revision 2 for compare' }).check();
     await e2e.screenshot(page, 'history');
     await page.getByRole('link', { name: 'Compare revision 2 with 3' }).click();
-    await page.getByRole('heading', { name: 'Compare revision 2 with revision 3' }).waitFor();
+    await shown(page.getByRole('heading', { name: 'Compare revision 2 with revision 3' }));
 
     const row = page
       .getByRole('table', { name: /Changed inputs/ })
@@ -197,7 +196,7 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     // a shorter reach bends the root less
     expect(await ratios.locator('tr[data-check="member.flexure"]').textContent()).toContain('ratio down');
     expect(await page.getByText(CAUTION).count()).toBeGreaterThan(0);
-    await page.locator('.recharts-line').first().waitFor();
+    await shown(page.locator('.recharts-line').first());
     // moment, shear and deflection, each for both revisions
     expect(await page.locator('.recharts-line').count()).toBe(6);
     expect(await page.getByText(/^Moment under .+\. Revision 2: reach 8\.00 ft, root moment /).count()).toBe(
@@ -212,7 +211,7 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await e2e.signInAs(arch.context, 'admin');
     await page.goto('/admin/outbox');
     const table = page.getByRole('table', { name: /E-mails captured/ });
-    await table.waitFor();
+    await shown(table);
     for (const subject of [
       `Review requested: ${CANTILEVER}, revision 2`,
       `Revision 2 of ${CANTILEVER} was returned with changes requested`,
@@ -232,12 +231,12 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await page
       .getByRole('button', { name: `Show text of “Review requested: ${CANTILEVER}, revision 3”` })
       .click();
-    await page.getByText('Message: Shorter reach after review').waitFor();
+    await shown(page.getByText('Message: Shorter reach after review'));
     await e2e.screenshot(page, 'outbox');
 
     await page.goto('/admin/team');
     const accounts = page.getByRole('table', { name: 'Accounts' });
-    await accounts.getByRole('row', { name: new RegExp(ENGINEER) }).waitFor();
+    await shown(accounts.getByRole('row', { name: new RegExp(ENGINEER) }));
     expect(await accounts.locator('tbody tr').count()).toBe(4);
     await e2e.screenshot(page, 'team');
   });
@@ -250,16 +249,13 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
     await form.getByLabel('Role').selectOption('engineer');
     await form.getByLabel('First password').fill('short');
     await form.getByRole('button', { name: 'Create account' }).click();
-    await form.getByText('First password must be at least 10 characters').waitFor();
+    await shown(form.getByText('First password must be at least 10 characters'));
     await form.getByLabel('First password').fill('a-long-first-password');
     await form.getByRole('button', { name: 'Create account' }).click();
-    await page
-      .getByText('Account created for Noor Haddad (second.engineer@reachline.test) as engineer.')
-      .waitFor();
-    await page
-      .getByRole('table', { name: 'Accounts' })
-      .getByRole('row', { name: /Noor Haddad/ })
-      .waitFor();
+    await shown(
+      page.getByText('Account created for Noor Haddad (second.engineer@reachline.test) as engineer.'),
+    );
+    await shown(page.getByRole('table', { name: 'Accounts' }).getByRole('row', { name: /Noor Haddad/ }));
 
     const projects = (await (await admin.get('/api/projects')).json()) as ProjectDto[];
     await page.goto(`/projects/${projects[0].id}`);
@@ -268,13 +264,13 @@ describe('review flow: submit, request changes, revise, approve, compare', () =>
       .getByLabel('Add an account')
       .selectOption({ label: 'Noor Haddad (engineer, second.engineer@reachline.test)' });
     await panel.getByRole('button', { name: 'Add member' }).click();
-    await panel.getByText('Noor Haddad was added to the project.').waitFor();
-    await panel.getByRole('button', { name: 'Remove Noor Haddad' }).waitFor();
+    await shown(panel.getByText('Noor Haddad was added to the project.'));
+    await shown(panel.getByRole('button', { name: 'Remove Noor Haddad' }));
     const detail = (await (await admin.get(`/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
     expect(detail.members.map((m) => m.email)).toContain('second.engineer@reachline.test');
     await e2e.screenshot(page, 'project-members');
     await panel.getByRole('button', { name: 'Remove Noor Haddad' }).click();
-    await panel.getByText('Noor Haddad was removed from the project.').waitFor();
+    await shown(panel.getByText('Noor Haddad was removed from the project.'));
     const after = (await (await admin.get(`/api/projects/${projects[0].id}`)).json()) as ProjectDetailDto;
     expect(after.members.map((m) => m.email)).not.toContain('second.engineer@reachline.test');
   });

@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import { CAUTION } from '../../shared/engine/types';
-import { startE2E, type E2E, openDemoDesk } from '../helpers/e2e';
+import { startE2E, type E2E, openDemoDesk, shown, gone } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -58,13 +58,13 @@ describe('saving on the desk', () => {
     await length().fill('9');
     await page.keyboard.press('Control+s');
     const blocked = page.getByRole('dialog', { name: 'This design cannot be saved yet' });
-    await blocked.waitFor();
+    await shown(blocked);
     expect(await prevented()).toBe(1);
     expect(await blocked.getByLabel('Message').count()).toBe(0);
     expect(await blocked.textContent()).not.toContain('member.length');
     await e2e.screenshot(page, 'save-blocked');
     await blocked.getByRole('button', { name: 'Reach: length, root to tip' }).click();
-    await blocked.waitFor({ state: 'detached' });
+    await gone(blocked);
     expect(await focusedId()).toBe(await length().getAttribute('id'));
   });
 
@@ -72,14 +72,14 @@ describe('saving on the desk', () => {
     const prevented = await watchSaveKeys();
     const base = Number((await page.getByTestId('base-revision').textContent())?.replace('rev ', ''));
     await length().fill('8.75 ft');
-    await page.getByTestId('unsaved').waitFor();
+    await shown(page.getByTestId('unsaved'));
     await page.keyboard.press('Control+s');
     const save = page.getByRole('dialog', { name: 'Save revision' });
-    await save.waitFor();
+    await shown(save);
     expect(await save.textContent()).toContain(`Saves as revision ${base + 1}, on top of revision ${base}.`);
     await save.getByLabel('Message').fill('Reach trimmed to clear the neighbouring balcony above');
     await page.keyboard.press('Control+s');
-    await save.waitFor({ state: 'detached' });
+    await gone(save);
     await expect
       .poll(() => page.getByTestId('save-status').textContent(), { timeout: 10_000 })
       .toBe(`Saved as revision ${base + 1}.`);
@@ -94,7 +94,7 @@ describe('saving on the desk', () => {
     const message = page
       .getByTestId('revision-list')
       .getByText('Reach trimmed to clear the neighbouring balcony above');
-    await message.waitFor();
+    await shown(message);
     const box = await message.boundingBox();
     const lineHeight = await message.evaluate((el) => parseFloat(getComputedStyle(el).lineHeight));
     // Nine words: one per line would be nine lines high; a sentence takes one or two.
@@ -112,14 +112,14 @@ describe('saving on the desk', () => {
       .sort((a, b) => a.number - b.number)
       .filter((_, i, all) => i === 0 || i === all.length - 1);
     const views: [string, () => Promise<void>][] = [
-      [`/revisions/${last.id}`, () => page.getByTestId('verdict').waitFor()],
+      [`/revisions/${last.id}`, () => shown(page.getByTestId('verdict'))],
       [
         `/revisions/${last.id}/review`,
-        () => page.getByRole('heading', { name: 'Verdict and checks' }).waitFor(),
+        () => shown(page.getByRole('heading', { name: 'Verdict and checks' })),
       ],
       [
         `/cantilevers/${cantileverId}/compare?a=${first.id}&b=${last.id}`,
-        () => page.getByRole('heading', { name: 'Check ratios' }).waitFor(),
+        () => shown(page.getByRole('heading', { name: 'Check ratios' })),
       ],
     ];
     for (const [path, loaded] of views) {

@@ -1,7 +1,7 @@
 /** The shapes browser in a real browser: search and filter, then import a CSV with one bad row. */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startE2E, type E2E } from '../helpers/e2e';
+import { startE2E, type E2E, shown } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -12,7 +12,7 @@ beforeAll(async () => {
   page = session.page;
   await e2e.signInAs(session.context, 'fabricator');
   await page.goto('/shapes');
-  await page.getByRole('grid', { name: 'Shapes' }).waitFor();
+  await shown(page.getByRole('grid', { name: 'Shapes' }));
 });
 
 afterAll(async () => {
@@ -40,7 +40,7 @@ describe('shapes browser', () => {
     await page.getByLabel('Depth to (in)').fill('22');
     await expect.poll(() => page.locator('tr[data-shape="W12X26"]').count()).toBe(0);
     await page.locator('tr[data-shape]').first().click();
-    await page.getByText('Torsion constant J').waitFor();
+    await shown(page.getByText('Torsion constant J'));
     const depth = await page
       .getByRole('complementary', { name: 'Shape details' })
       .getByText(/^Depth d$/)
@@ -56,10 +56,7 @@ describe('shapes browser', () => {
     await page.keyboard.press('ArrowDown');
     const next = (await rows.nth(1).getAttribute('data-shape')) ?? '';
     expect(await page.evaluate(() => (document.activeElement as HTMLElement).dataset.shape)).toBe(next);
-    await page
-      .getByRole('complementary', { name: 'Shape details' })
-      .getByText(next, { exact: true })
-      .waitFor();
+    await shown(page.getByRole('complementary', { name: 'Shape details' }).getByText(next, { exact: true }));
     await e2e.screenshot(page, 'shapes');
   });
 
@@ -69,7 +66,7 @@ describe('shapes browser', () => {
       .setInputFiles({ name: 'our-shapes.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
     await page.getByRole('button', { name: 'Import' }).click();
     const result = page.getByTestId('import-result');
-    await result.waitFor();
+    await shown(result);
     expect(await result.textContent()).toContain('1 shape imported; 1 row rejected');
     const rejected = result.getByRole('table', { name: 'Rejected rows' }).getByRole('row').nth(1);
     expect(await rejected.textContent()).toMatch(/3\s*RL-BAD1.*needs d/);

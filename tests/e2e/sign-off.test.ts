@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { APIRequestContext, BrowserContext, Page } from 'playwright-core';
 import { request } from 'playwright-core';
 import type { OutboxDto, ProjectDetailDto, ProjectDto, RevisionDto } from '../../shared/schemas/api';
-import { DEMO_PASSWORD, demoEmail, startE2E, type E2E } from '../helpers/e2e';
+import { DEMO_PASSWORD, demoEmail, startE2E, type E2E, shown } from '../helpers/e2e';
 
 const CANTILEVER = 'East deck, typical beam';
 
@@ -92,26 +92,27 @@ describe('sign-off: from the e-mail link to the shop', () => {
     const page = eng.page;
     // The link names the app's address (APP_ORIGIN); the test server listens on its own port.
     await page.goto(new URL(link!).pathname);
-    await page.getByRole('heading', { name: /^Review of revision 2/ }).waitFor();
-    await page
-      .getByTestId('newer-revisions')
-      .getByText('A newer revision exists: the latest is revision 3. You are reviewing revision 2.')
-      .waitFor();
-    await page.getByTestId('inputs-read-only').waitFor();
+    await shown(page.getByRole('heading', { name: /^Review of revision 2/ }));
+    await shown(
+      page
+        .getByTestId('newer-revisions')
+        .getByText('A newer revision exists: the latest is revision 3. You are reviewing revision 2.'),
+    );
+    await shown(page.getByTestId('inputs-read-only'));
     const form = page.getByRole('form', { name: 'Review decision' });
     await form.getByRole('radio', { name: 'Approve revision 2' }).check();
     await form.getByRole('button', { name: 'Record decision' }).click();
     const confirm = page.getByRole('alertdialog', { name: 'Approve revision 2?' });
-    await confirm.getByText(/Revision 3 is newer and stays as it is/).waitFor();
+    await shown(confirm.getByText(/Revision 3 is newer and stays as it is/));
     await e2e.screenshot(page, 'sign-off-confirm');
     await confirm.getByRole('button', { name: 'Yes, approve revision 2' }).click();
-    await page.getByText('You approved revision 2.').waitFor();
+    await shown(page.getByText('You approved revision 2.'));
   });
 
   it('the fabricator downloads a schedule that lists the approved revision 2, no draft, and its package', async () => {
     const page = fab.page;
     await page.goto(`/projects/${projectId}`);
-    await page.getByTestId('latest-approved').first().getByText('rev 2').waitFor();
+    await shown(page.getByTestId('latest-approved').first().getByText('rev 2'));
     const href = await page.getByTestId('project-schedule-link').getAttribute('href');
     const csv = await page.evaluate(async (h) => (await fetch(h)).text(), href as string);
     const rows = csv.trimEnd().split('\r\n');
@@ -124,7 +125,7 @@ describe('sign-off: from the e-mail link to the shop', () => {
     expect(csv).not.toMatch(/rev 3/);
     expect(csv).not.toMatch(/NOT APPROVED/);
     await page.goto(`/revisions/${rev2.id}`);
-    await page.getByTestId('revision-of').getByText('This is revision 2 of 3.').waitFor();
+    await shown(page.getByTestId('revision-of').getByText('This is revision 2 of 3.'));
     const pdfHref = await page.getByTestId('package-link').getAttribute('href');
     const head = await page.evaluate(async (h) => {
       const res = await fetch(h);

@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD, demoEmail, startE2E, type E2E } from '../helpers/e2e';
+import { DEMO_PASSWORD, demoEmail, startE2E, type E2E, shown, gone } from '../helpers/e2e';
 
 let e2e: E2E;
 let page: Page;
@@ -32,12 +32,12 @@ describe('skeleton: sign in, edit, save, reload', () => {
     await page.getByLabel('E-mail').fill(demoEmail('engineer'));
     await page.getByLabel('Password').fill('not-the-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByText('That e-mail and password do not match an active account.').waitFor();
+    await shown(page.getByText('That e-mail and password do not match an active account.'));
     await e2e.screenshot(page, 'sign-in');
     await page.getByLabel('Password').fill(DEMO_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(/\/projects$/);
-    await page.getByRole('heading', { name: 'Projects' }).waitFor();
+    await shown(page.getByRole('heading', { name: 'Projects' }));
     expect(await page.getByTestId('who').textContent()).toContain('engineer');
     await e2e.screenshot(page, 'projects');
     expect(context.pages().length).toBe(1);
@@ -45,7 +45,7 @@ describe('skeleton: sign in, edit, save, reload', () => {
 
   it('opens the demo cantilever on the desk with a computed result and the caution', async () => {
     await page.getByRole('link', { name: /Harbor View Studio/ }).click();
-    await page.getByRole('heading', { name: 'Harbor View Studio' }).waitFor();
+    await shown(page.getByRole('heading', { name: 'Harbor View Studio' }));
     const scheduleHref = await page.getByTestId('project-schedule-link').getAttribute('href');
     expect(scheduleHref).toMatch(/^\/api\/projects\/\d+\/plate-schedule\.csv$/);
     const schedule = (await page.evaluate(async (h) => (await fetch(h)).text(), scheduleHref as string))
@@ -65,7 +65,7 @@ describe('skeleton: sign in, edit, save, reload', () => {
     expect(await page.getByTestId('caution-footer').textContent()).toContain('licensed engineer');
     await e2e.screenshot(page, 'project');
     await page.getByRole('link', { name: 'East deck, typical beam', exact: true }).click();
-    await page.getByTestId('tip-deflection').waitFor();
+    await shown(page.getByTestId('tip-deflection'));
     expect(await page.getByTestId('caution').textContent()).toContain('licensed engineer');
     expect(await page.getByTestId('verdict').textContent()).toMatch(/checks/);
     expect(await page.locator('tr[data-check]').count()).toBeGreaterThan(4);
@@ -81,7 +81,7 @@ describe('skeleton: sign in, edit, save, reload', () => {
     const tipBefore = Number.parseFloat(before);
     const tipAfter = Number.parseFloat(await tipText());
     expect(tipAfter).toBeGreaterThan(tipBefore);
-    await page.getByTestId('unsaved').waitFor();
+    await shown(page.getByTestId('unsaved'));
     await e2e.screenshot(page, 'desk');
   });
 
@@ -90,14 +90,14 @@ describe('skeleton: sign in, edit, save, reload', () => {
     await page.getByRole('button', { name: 'Save revision' }).click();
     const dialog = page.getByRole('dialog', { name: 'Save revision' });
     await dialog.getByRole('button', { name: 'Save revision' }).click();
-    await dialog.getByText('Message is required: describe what changed').waitFor();
+    await shown(dialog.getByText('Message is required: describe what changed'));
     await dialog.getByLabel('Message').fill('Reach two feet longer for the view');
     await dialog.getByRole('button', { name: 'Save revision' }).click();
-    await dialog.waitFor({ state: 'detached' });
+    await gone(dialog);
     await expect.poll(async () => page.getByTestId('base-revision').textContent()).not.toBe(baseBefore);
     expect(await page.getByTestId('unsaved').count()).toBe(0);
     await page.reload();
-    await page.getByTestId('revision-list').getByText('Reach two feet longer for the view').waitFor();
+    await shown(page.getByTestId('revision-list').getByText('Reach two feet longer for the view'));
     const length = await page.getByLabel('Length (root to tip)', { exact: true }).inputValue();
     expect(Number.parseFloat(length)).toBeGreaterThan(0);
     expect(await page.getByTestId('unsaved').count()).toBe(0);
@@ -108,12 +108,12 @@ describe('skeleton: sign in, edit, save, reload', () => {
     await page.getByRole('button', { name: 'New cantilever' }).click();
     const dialog = page.getByRole('dialog', { name: 'New cantilever' });
     await dialog.getByRole('button', { name: 'Create cantilever' }).click();
-    await dialog.getByText('Name is required').waitFor();
+    await shown(dialog.getByText('Name is required'));
     await dialog.getByLabel('Name').fill('West deck, corner beam');
     await dialog.getByRole('button', { name: 'Create cantilever' }).click();
     await page.waitForURL(/\/cantilevers\/\d+$/);
     expect(await page.getByTestId('base-revision').textContent()).toBe('not saved yet');
-    await page.getByTestId('tip-deflection').waitFor();
+    await shown(page.getByTestId('tip-deflection'));
     await page.getByRole('button', { name: 'Save revision' }).click();
     const save = page.getByRole('dialog', { name: 'Save revision' });
     await save.getByLabel('Message').fill('Starting point for the corner');
@@ -121,6 +121,6 @@ describe('skeleton: sign in, edit, save, reload', () => {
     await expect
       .poll(() => page.getByTestId('base-revision').textContent(), { timeout: 10_000 })
       .toBe('rev 1');
-    await page.getByTestId('revision-list').getByText('Starting point for the corner').waitFor();
+    await shown(page.getByTestId('revision-list').getByText('Starting point for the corner'));
   });
 });
