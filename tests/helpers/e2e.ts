@@ -8,7 +8,7 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BrowserContext, Locator, Page } from 'playwright-core';
-import { inject } from 'vitest';
+import { inject, vi } from 'vitest';
 import { connectChromium } from './chromium';
 import { startServer } from '../../server/start';
 import { freshTestDirs } from './test-db';
@@ -86,36 +86,27 @@ export async function startE2E(): Promise<E2E> {
   return { baseUrl: server.url, newSession, signInAs, screenshot, close };
 }
 
-/**
- * Opens the demo's east deck on the desk the way a person does (projects list, project, cantilever)
- * and waits until `ready` (a test id) is drawn.
- */
-/** How often `shown` and `networkQuiet` look again. */
+/** How often `shown`, `gone` and `networkQuiet` look again (vitest's `vi.waitUntil`). */
 const POLL_MS = 20;
-const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /**
  * Waits until the locator's element is visible, looking every 20 ms. Playwright's `waitFor` looks
  * again after 20, 50, 100 and 100 ms and then only every 500 ms, so an element drawn 300 ms after a
  * page opened is seen up to half a second late (measured: a heading drawn at 440 ms was seen at
- * 890 ms). Strict like `waitFor`: a locator that matches several elements throws.
+ * 890 ms). Strict like `waitFor`: a locator that matches several elements throws. When the wait
+ * fails, Playwright's own wait gives the error, which names the locator.
  */
 export async function shown(locator: Locator, timeout = 30_000): Promise<void> {
-  const deadline = Date.now() + timeout;
-  while (!(await locator.isVisible())) {
-    // Past the deadline, Playwright's own wait fails with its message naming the locator.
-    if (Date.now() > deadline) return locator.waitFor({ timeout: 1 });
-    await pause(POLL_MS);
-  }
+  await vi
+    .waitUntil(() => locator.isVisible(), { timeout, interval: POLL_MS })
+    .catch(() => locator.waitFor({ timeout: 1 }));
 }
 
 /** Waits until nothing matches the locator, looking every 20 ms (Playwright: `waitFor({ state: 'detached' })`). */
 export async function gone(locator: Locator, timeout = 30_000): Promise<void> {
-  const deadline = Date.now() + timeout;
-  while ((await locator.count()) > 0) {
-    if (Date.now() > deadline) return locator.waitFor({ state: 'detached', timeout: 1 });
-    await pause(POLL_MS);
-  }
+  await vi
+    .waitUntil(async () => (await locator.count()) === 0, { timeout, interval: POLL_MS })
+    .catch(() => locator.waitFor({ state: 'detached', timeout: 1 }));
 }
 
 const inFlight = new WeakMap<Page, { count: number; last: number }>();
@@ -144,13 +135,17 @@ export function trackRequests(page: Page): void {
 export async function networkQuiet(page: Page, quietMs = 150, timeout = 30_000): Promise<void> {
   const state = inFlight.get(page);
   if (!state) throw new Error('networkQuiet: call trackRequests(page) before the page navigates');
-  const deadline = Date.now() + timeout;
-  while (state.count > 0 || Date.now() - state.last < quietMs) {
-    if (Date.now() > deadline) throw new Error(`the page still had ${state.count} request(s) in flight`);
-    await pause(POLL_MS);
-  }
+  await vi
+    .waitUntil(() => state.count === 0 && Date.now() - state.last >= quietMs, { timeout, interval: POLL_MS })
+    .catch(() => {
+      throw new Error(`the page still had ${state.count} request(s) in flight`);
+    });
 }
 
+/**
+ * Opens the demo's east deck on the desk the way a person does (projects list, project, cantilever)
+ * and waits until `ready` (a test id) is drawn.
+ */
 export async function openDemoDesk(page: Page, ready = 'tip-deflection'): Promise<void> {
   await page.goto('/projects');
   await page.getByRole('link', { name: /Harbor View Studio/ }).click();
