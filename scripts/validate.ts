@@ -47,15 +47,18 @@ const CACHE = 'node_modules/.cache/reachline';
 const CHECKS: { label: string; args: string[] }[] = [
   {
     label: 'typecheck',
-    // Incremental: tsc re-checks only what changed since the last run and what depends on it.
+    // TypeScript 7's native compiler (the `typescript-native` alias): the same checks in about a
+    // fifth of the CPU of TypeScript 5.9's, which stays for ESLint's typed rules and the typed-routes
+    // test (typescript-eslint needs its JavaScript API). Incremental: it re-checks only what changed
+    // since the last run and what depends on it.
     args: [
-      'node_modules/typescript/bin/tsc',
+      'node_modules/typescript-native/bin/tsc',
       '--noEmit',
       '-p',
       'tsconfig.json',
       '--incremental',
       '--tsBuildInfoFile',
-      `${CACHE}/tsc.tsbuildinfo`,
+      `${CACHE}/typecheck.tsbuildinfo`,
     ],
   },
   {
