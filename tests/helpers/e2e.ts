@@ -86,27 +86,41 @@ export async function startE2E(): Promise<E2E> {
   return { baseUrl: server.url, newSession, signInAs, screenshot, close };
 }
 
-/** How often `shown`, `gone` and `networkQuiet` look again (vitest's `vi.waitUntil`). */
-const POLL_MS = 20;
+/**
+ * When `shown` and `gone` look again: after 20, 40, 60 and 80 ms, then every 100 ms. Each look is a
+ * round trip to the page, where a role or text locator is matched against the whole document (on
+ * the desk 3-13 ms of the page's main thread, and about 2 ms in this process), so looking every
+ * 20 ms took up to half the page's main thread while it was drawing what the test waits for.
+ */
+const LOOK_AGAIN_MS = [20, 40, 60, 80, 100];
+
+/** Resolves true once `check` holds, false when `timeout` ms have gone by without it. */
+async function lookUntil(check: () => Promise<boolean>, timeout: number): Promise<boolean> {
+  const deadline = Date.now() + timeout;
+  for (let look = 0; ; look += 1) {
+    if (await check()) return true;
+    const left = deadline - Date.now();
+    if (left <= 0) return false;
+    const wait = LOOK_AGAIN_MS[Math.min(look, LOOK_AGAIN_MS.length - 1)]!;
+    await new Promise((resolve) => setTimeout(resolve, Math.min(wait, left)));
+  }
+}
 
 /**
- * Waits until the locator's element is visible, looking every 20 ms. Playwright's `waitFor` looks
+ * Waits until the locator's element is visible (see `LOOK_AGAIN_MS`). Playwright's `waitFor` looks
  * again after 20, 50, 100 and 100 ms and then only every 500 ms, so an element drawn 300 ms after a
  * page opened is seen up to half a second late (measured: a heading drawn at 440 ms was seen at
  * 890 ms). Strict like `waitFor`: a locator that matches several elements throws. When the wait
  * fails, Playwright's own wait gives the error, which names the locator.
  */
 export async function shown(locator: Locator, timeout = 30_000): Promise<void> {
-  await vi
-    .waitUntil(() => locator.isVisible(), { timeout, interval: POLL_MS })
-    .catch(() => locator.waitFor({ timeout: 1 }));
+  if (!(await lookUntil(() => locator.isVisible(), timeout))) await locator.waitFor({ timeout: 1 });
 }
 
-/** Waits until nothing matches the locator, looking every 20 ms (Playwright: `waitFor({ state: 'detached' })`). */
+/** Waits until nothing matches the locator (Playwright: `waitFor({ state: 'detached' })`). */
 export async function gone(locator: Locator, timeout = 30_000): Promise<void> {
-  await vi
-    .waitUntil(async () => (await locator.count()) === 0, { timeout, interval: POLL_MS })
-    .catch(() => locator.waitFor({ state: 'detached', timeout: 1 }));
+  const none = await lookUntil(async () => (await locator.count()) === 0, timeout);
+  if (!none) await locator.waitFor({ state: 'detached', timeout: 1 });
 }
 
 const inFlight = new WeakMap<Page, { count: number; last: number }>();
@@ -136,7 +150,7 @@ export async function networkQuiet(page: Page, quietMs = 150, timeout = 30_000):
   const state = inFlight.get(page);
   if (!state) throw new Error('networkQuiet: call trackRequests(page) before the page navigates');
   await vi
-    .waitUntil(() => state.count === 0 && Date.now() - state.last >= quietMs, { timeout, interval: POLL_MS })
+    .waitUntil(() => state.count === 0 && Date.now() - state.last >= quietMs, { timeout, interval: 20 })
     .catch(() => {
       throw new Error(`the page still had ${state.count} request(s) in flight`);
     });
