@@ -8,7 +8,7 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { BrowserContext, Locator, Page } from 'playwright-core';
-import { inject, vi } from 'vitest';
+import { inject } from 'vitest';
 import { connectChromium } from './chromium';
 import { startServer } from '../../server/start';
 import { freshTestDirs } from './test-db';
@@ -94,14 +94,21 @@ export async function startE2E(): Promise<E2E> {
  */
 const LOOK_AGAIN_MS = [20, 40, 60, 80, 100];
 
-/** Resolves true once `check` holds, false when `timeout` ms have gone by without it. */
-async function lookUntil(check: () => Promise<boolean>, timeout: number): Promise<boolean> {
+/**
+ * Resolves true once `check` holds, false when `timeout` ms have gone by without it. `lookAgainMs`
+ * gives the waits between looks; the last one repeats.
+ */
+async function lookUntil(
+  check: () => boolean | Promise<boolean>,
+  timeout: number,
+  lookAgainMs: readonly number[] = LOOK_AGAIN_MS,
+): Promise<boolean> {
   const deadline = Date.now() + timeout;
   for (let look = 0; ; look += 1) {
     if (await check()) return true;
     const left = deadline - Date.now();
     if (left <= 0) return false;
-    const wait = LOOK_AGAIN_MS[Math.min(look, LOOK_AGAIN_MS.length - 1)]!;
+    const wait = lookAgainMs[Math.min(look, lookAgainMs.length - 1)]!;
     await new Promise((resolve) => setTimeout(resolve, Math.min(wait, left)));
   }
 }
@@ -149,11 +156,9 @@ export function trackRequests(page: Page): void {
 export async function networkQuiet(page: Page, quietMs = 150, timeout = 30_000): Promise<void> {
   const state = inFlight.get(page);
   if (!state) throw new Error('networkQuiet: call trackRequests(page) before the page navigates');
-  await vi
-    .waitUntil(() => state.count === 0 && Date.now() - state.last >= quietMs, { timeout, interval: 20 })
-    .catch(() => {
-      throw new Error(`the page still had ${state.count} request(s) in flight`);
-    });
+  // The check reads a counter in this process, not the page: looking every 20 ms costs nothing.
+  const quiet = await lookUntil(() => state.count === 0 && Date.now() - state.last >= quietMs, timeout, [20]);
+  if (!quiet) throw new Error(`the page still had ${state.count} request(s) in flight`);
 }
 
 /**
